@@ -1,0 +1,48 @@
+import Link from "next/link";
+import { requirePageUser } from "@/app/_lib/session";
+import { Logo } from "@/components/logo";
+import { NavLinks, type NavItem } from "@/components/nav-links";
+import { SignOutButton } from "@/components/sign-out-button";
+import { ThemeSwitch } from "@/components/theme-switch";
+import type { Role } from "@/db/schema";
+
+const ALL: Role[] = ["member", "tuner", "sales", "instructor", "admin"];
+const NAV: (NavItem & { roles: Role[] })[] = [
+  { href: "/combinations", label: "Combinations", roles: ALL },
+  { href: "/compare", label: "Side by side", roles: ALL },
+  { href: "/datalogs", label: "Datalogs", roles: ALL },
+  { href: "/shelf", label: "Parts shelf", roles: ALL },
+  { href: "/recommendations", label: "Recommendations", roles: ["sales", "tuner", "admin"] },
+  { href: "/lessons", label: "Lessons", roles: ALL },
+  { href: "/admin/users", label: "Accounts", roles: ["admin"] },
+  { href: "/admin/mail", label: "Mailbox", roles: ["admin"] },
+];
+
+const roleNames: Record<Role, string> = { member: "Member", tuner: "Tuner", sales: "Sales", instructor: "Instructor", admin: "Admin" };
+
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  const user = await requirePageUser();
+  const items = NAV.filter((n) => n.roles.includes(user.role)).map(({ href, label }) => ({ href, label }));
+  return (
+    <div className="flex min-h-screen flex-col">
+      <header className="no-print border-b border-line bg-panel">
+        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-2">
+          <Link href="/combinations" aria-label="Pulleywright: your combinations">
+            <Logo />
+          </Link>
+          <NavLinks items={items} />
+          <div className="ml-auto flex items-center gap-3 text-sm">
+            <ThemeSwitch />
+            <Link href="/settings" className="hover:underline" title="Your settings">
+              {user.name || user.email} <span className="text-muted">· {roleNames[user.role]}</span>
+            </Link>
+            <SignOutButton />
+          </div>
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
+        {children}
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,19 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { act, type ActionState } from "@/app/_lib/action";
+import { requireActor } from "@/app/_lib/session";
+import { getDb } from "@/db/client";
+import { setUnitSystem } from "@/db/repo/users";
+
+const schema = z.object({ unitSystem: z.enum(["imperial", "metric"], { error: "Units must be imperial or metric." }) });
+
+/** Saves the user's choice of units (imperial or metric), used on every screen. */
+export async function saveUnitSystem(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
+  return act(async () => {
+    const actor = await requireActor();
+    const { unitSystem } = schema.parse(Object.fromEntries(form));
+    await setUnitSystem(getDb(), actor, unitSystem);
+    revalidatePath("/", "layout");
+  });
+}

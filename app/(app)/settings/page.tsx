@@ -1,0 +1,23 @@
+import type { Metadata } from "next";
+import { requirePageUser } from "@/app/_lib/session";
+import { UnitsForm } from "./units-form";
+
+export const metadata: Metadata = { title: "Settings" };
+
+export default async function SettingsPage() {
+  const user = await requirePageUser();
+  return (
+    <div className="max-w-lg">
+      <h1 className="mb-4 text-2xl font-semibold">Settings</h1>
+      <dl className="mb-6 grid grid-cols-[8rem_1fr] gap-y-1 text-sm">
+        <dt className="text-muted">Name</dt>
+        <dd>{user.name}</dd>
+        <dt className="text-muted">E-mail</dt>
+        <dd>{user.email}</dd>
+        <dt className="text-muted">Role</dt>
+        <dd>{user.role}</dd>
+      </dl>
+      <UnitsForm current={user.unitSystem} />
+    </div>
+  );
+}

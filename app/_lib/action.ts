@@ -1,0 +1,20 @@
+import "server-only";
+import { toFailure } from "./errors";
+
+/** What every server action returns to its form (for useActionState): ok, or a message with per-field errors. */
+export type ActionState<T = unknown> =
+  | { ok: true; data?: T; message?: string }
+  | { ok: false; message: string; fieldErrors?: Record<string, string[]>; status: number };
+
+/** Runs an action body and turns any error into a state the form can show; never throws to the client. */
+export async function act<T>(fn: () => Promise<T>): Promise<ActionState<T>> {
+  try {
+    return { ok: true, data: await fn() };
+  } catch (err) {
+    // Let Next's redirect() and notFound() through.
+    const digest = (err as { digest?: unknown })?.digest;
+    if (typeof digest === "string" && (digest.startsWith("NEXT_REDIRECT") || digest.startsWith("NEXT_HTTP_ERROR_FALLBACK"))) throw err;
+    const f = toFailure(err);
+    return { ok: false, message: f.message, fieldErrors: f.fieldErrors, status: f.status };
+  }
+}

@@ -1,0 +1,323 @@
+// The balance of blower delivery and engine demand at one engine speed (model.md §3.8–11),
+// and the boost curve over many. Entry points validate once, then call the unchecked core.
+import {
+  BRACKET_SCAN_FACTOR,
+  GAS_CONSTANT,
+  GASOLINE_LATENT_HEAT,
+  KAPPA,
+  PRESSURE_RATIO_CEILING,
+  PRESSURE_RATIO_FLOOR_MARGIN,
+  SOLVER_MAX_ITERATIONS,
+  SOLVER_RELATIVE_TOLERANCE,
+  SPECIFIC_HEAT_CP,
+} from "./constants";
+import { builtInPressureRatio, slipCoefficient } from "./blower";
+import { driveRatioUnchecked } from "./drive";
+import { veAt } from "./engine";
+import { CalcConvergenceError } from "./errors";
+import { brent } from "./root-finding";
+import { combinationSchema, parseOrThrow, rpmListSchema, rpmSchema, type Combination, type CombinationInput } from "./schema";
+
+/** Everything the model predicts at one engine speed (SI). */
+export interface OperatingPoint {
+  /** Engine speed (rev/min). */
+  readonly rpm: number;
+  /** Drive ratio crank/blower pulley diameter (dimensionless). */
+  readonly driveRatio: number;
+  /** Blower pulley-shaft speed, belt slip included (rev/min). */
+  readonly blowerRpm: number;
+  /** Pressure ratio across the blower P2/P1 (dimensionless). */
+  readonly pressureRatio: number;
+  /** Manifold absolute pressure after any intercooler (Pa). */
+  readonly manifoldPressure: number;
+  /** Boost: manifold pressure minus ambient pressure (Pa, gauge). */
+  readonly boostGauge: number;
+  /** Blower volumetric efficiency, delivered over swept volume at inlet conditions (fraction). */
+  readonly blowerVolumetricEfficiency: number;
+  /** Equivalent adiabatic efficiency of the blower (fraction). */
+  readonly adiabaticEfficiency: number;
+  /** Blower discharge temperature (K). */
+  readonly dischargeTemperature: number;
+  /** Manifold (charge) temperature after any intercooler (K). */
+  readonly manifoldTemperature: number;
+  /** Air mass flow through blower and engine (kg/s). */
+  readonly airMassFlow: number;
+  /** Power taken from the crank to drive the blower (W). */
+  readonly drivePower: number;
+  /** Fuel mass flow ṁ/afr (kg/s). */
+  readonly fuelMassFlow: number;
+  /** Engine power before the blower drive is taken off, ṁ/(afr·bsfc) (W). */
+  readonly grossPower: number;
+  /** Gross power minus drive power (W). */
+  readonly netPower: number;
+  /** Net torque at the crank (N·m). */
+  readonly torque: number;
+  /** Injector duty cycle (fraction), null without injector data. */
+  readonly injectorDuty: number | null;
+  /** Engine volumetric efficiency used at this speed (fraction). */
+  readonly engineVolumetricEfficiency: number;
+  /** Blower discharge absolute pressure, before any intercooler (Pa). */
+  readonly dischargePressure: number;
+  /** Engine airflow expressed at blower inlet pressure and ambient temperature (m³/s; shown as cfm). */
+  readonly inletAirflow: number;
+}
+
+/** Constants of one validated combination, computed once per entry-point call. */
+export interface PreparedCombination {
+  readonly combination: Combination;
+  /** Ambient absolute pressure (Pa). */
+  readonly p0: number;
+  /** Ambient temperature (K). */
+  readonly t0: number;
+  /** Blower inlet pressure (Pa). */
+  readonly p1: number;
+  /** Blower inlet temperature, after any fuel evaporated ahead of it (K). */
+  readonly t1: number;
+  /** Blower inlet density (kg/m³). */
+  readonly rho1: number;
+  /** Slip coefficient (m³/(s·√Pa)). */
+  readonly ks: number;
+  /** Blower displacement (m³/rev). */
+  readonly vb: number;
+  /** 1/Vi (dimensionless). */
+  readonly invVi: number;
+  /** (PRi^κ − 1)/κ − PRi/Vi, so that w/P1 = workOffset + PR/Vi (dimensionless). */
+  readonly workOffset: number;
+  /** Built-in volume ratio (dimensionless). */
+  readonly vi: number;
+  /** Drive ratio (dimensionless). */
+  readonly ratio: number;
+  /** Blower speed per engine speed r·(1 − s) (dimensionless). */
+  readonly speedFactor: number;
+  /** Intercooler effectiveness, 0 without one (fraction). */
+  readonly eps: number;
+  /** Intercooler pressure drop, 0 without one (Pa). */
+  readonly dpic: number;
+  /** Intercooler coolant temperature (K). */
+  readonly tcool: number;
+}
+
+/** Prepare a validated combination, optionally with another blower pulley diameter (m). */
+export function prepare(c: Combination, blowerPulleyDiameter = c.drive.blowerPulleyDiameter): PreparedCombination {
+  const p0 = c.ambient.pressure;
+  const t0 = c.ambient.temperature;
+  const p1 = p0 - c.ambient.inletLoss;
+  const evaporativeDrop = (GASOLINE_LATENT_HEAT * c.fuel.evaporatedBeforeBlower) / (c.fuel.afr * SPECIFIC_HEAT_CP);
+  const t1 = t0 - evaporativeDrop;
+  const vi = c.blower.builtInVolumeRatio;
+  const pri = builtInPressureRatio(vi);
+  const ratio = driveRatioUnchecked(c.drive.crankPulleyDiameter, blowerPulleyDiameter);
+  const ic = c.intercooler;
+  return {
+    combination: c,
+    p0,
+    t0,
+    p1,
+    t1,
+    rho1: p1 / (GAS_CONSTANT * t1),
+    ks: slipCoefficient(c.blower.displacementPerRev, c.blower.volumetricEfficiencyRef, c.blower.referenceRpm),
+    vb: c.blower.displacementPerRev,
+    vi,
+    invVi: 1 / vi,
+    workOffset: (pri ** KAPPA - 1) / KAPPA - pri / vi,
+    ratio,
+    speedFactor: ratio * (1 - c.drive.beltSlip),
+    eps: ic ? ic.effectiveness : 0,
+    dpic: ic ? ic.pressureDrop : 0,
+    tcool: ic ? ic.coolantTemperature : t0,
+  };
+}
+
+/** State of blower and engine at one engine speed and one trial pressure ratio (SI). */
+export interface TrialState {
+  /** Swept flow Vb·Nb/60 (m³/s). */
+  sweptFlow: number;
+  /** Delivered flow at inlet conditions (m³/s). */
+  deliveredFlow: number;
+  /** Blower mass flow (kg/s). */
+  massFlow: number;
+  /** w/P1 (dimensionless). */
+  workRatio: number;
+  /** Shaft power into the air (W). */
+  airPower: number;
+  /** Discharge temperature (K). */
+  t2: number;
+  /** Manifold temperature (K). */
+  tm: number;
+  /** Discharge pressure (Pa). */
+  p2: number;
+  /** Manifold pressure (Pa). */
+  pm: number;
+}
+
+/** Blower side of the balance at a pressure ratio: delivery, work and temperatures (m³/s swept → SI state). */
+export function blowerState(p: PreparedCombination, sweptFlow: number, pr: number, out: TrialState): TrialState {
+  const p2 = pr * p.p1;
+  const dp = p2 - p.p1;
+  const slip = dp >= 0 ? p.ks * Math.sqrt(dp) : -p.ks * Math.sqrt(-dp);
+  const delivered = sweptFlow - slip;
+  const massFlow = p.rho1 * delivered;
+  const workRatio = p.workOffset + pr * p.invVi;
+  const airPower = (workRatio * p.p1 * sweptFlow) / p.combination.blower.internalEfficiency;
+  const t2 = p.t1 + airPower / (massFlow * SPECIFIC_HEAT_CP);
+  out.sweptFlow = sweptFlow;
+  out.deliveredFlow = delivered;
+  out.massFlow = massFlow;
+  out.workRatio = workRatio;
+  out.airPower = airPower;
+  out.t2 = t2;
+  out.tm = t2 - p.eps * (t2 - p.tcool);
+  out.p2 = p2;
+  out.pm = p2 - p.dpic;
+  return out;
+}
+
+function newState(): TrialState {
+  return { sweptFlow: 0, deliveredFlow: 0, massFlow: 0, workRatio: 0, airPower: 0, t2: 0, tm: 0, p2: 0, pm: 0 };
+}
+
+/** Assemble the operating point from a converged state (SI). */
+export function pointFromState(p: PreparedCombination, rpm: number, blowerRpm: number, ve: number, pr: number, s: TrialState): OperatingPoint {
+  const c = p.combination;
+  const etaInt = c.blower.internalEfficiency;
+  const flowRatio = s.sweptFlow / s.deliveredFlow;
+  // ηad = T1(PR^κ − 1)/(T2 − T1) with T2 − T1 = κ·T1·(w/P1)·(Qs/Q1)/ηint, written so a
+  // Roots blower at PR → 1 (0/0) takes its limit (PR^κ − 1)/(κ(PR − 1)) → 1 + (κ − 1)(PR − 1)/2.
+  let idealOverActual: number;
+  if (p.vi === 1 && Math.abs(pr - 1) < 1e-6) idealOverActual = 1 + ((KAPPA - 1) * (pr - 1)) / 2;
+  else idealOverActual = (pr ** KAPPA - 1) / KAPPA / s.workRatio;
+  const adiabaticEfficiency = (idealOverActual * etaInt) / flowRatio;
+  const drivePower = s.airPower / c.blower.mechanicalEfficiency;
+  const fuelMassFlow = s.massFlow / c.fuel.afr;
+  const grossPower = fuelMassFlow / c.fuel.bsfc;
+  const netPower = grossPower - drivePower;
+  const injectorDuty =
+    c.fuel.injectorCount != null && c.fuel.injectorFlow != null
+      ? fuelMassFlow / (c.fuel.injectorCount * c.fuel.injectorFlow)
+      : null;
+  return {
+    rpm,
+    driveRatio: p.ratio,
+    blowerRpm,
+    pressureRatio: pr,
+    manifoldPressure: s.pm,
+    boostGauge: s.pm - p.p0,
+    blowerVolumetricEfficiency: s.deliveredFlow / s.sweptFlow,
+    adiabaticEfficiency,
+    dischargeTemperature: s.t2,
+    manifoldTemperature: s.tm,
+    airMassFlow: s.massFlow,
+    drivePower,
+    fuelMassFlow,
+    grossPower,
+    netPower,
+    torque: netPower / ((2 * Math.PI * rpm) / 60),
+    injectorDuty,
+    engineVolumetricEfficiency: ve,
+    dischargePressure: s.p2,
+    inletAirflow: (s.massFlow * GAS_CONSTANT * p.t0) / p.p1,
+  };
+}
+
+const kpa = (pa: number): string => (pa / 1000).toFixed(1);
+
+/**
+ * Solve one engine speed of a prepared combination (unchecked). Finds the lowest pressure
+ * ratio at which blower delivery falls to engine demand: the stable balance. Above it the
+ * surplus is negative; a second, unstable crossing can exist near the dead-head ratio where
+ * the charge grows very hot, and is not the answer.
+ */
+export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoint {
+  const c = p.combination;
+  const blowerRpm = rpm * p.speedFactor;
+  const sweptFlow = (p.vb * blowerRpm) / 60;
+  const ve = veAt(c.engine.veCurve, rpm);
+  const engineVolumeRate = (c.engine.displacement * rpm * ve) / 120;
+  const demandFactor = engineVolumeRate / GAS_CONSTANT;
+  const state = newState();
+  const surplus = (pr: number): number => {
+    blowerState(p, sweptFlow, pr, state);
+    return state.massFlow - (state.pm / state.tm) * demandFactor;
+  };
+
+  const lo = PRESSURE_RATIO_FLOOR_MARGIN + p.dpic / p.p1;
+  const deadHead = p.ks > 0 ? 1 + (sweptFlow / p.ks) ** 2 / p.p1 : Number.POSITIVE_INFINITY;
+  const ceilingIsDeadHead = deadHead <= PRESSURE_RATIO_CEILING;
+  const hi = ceilingIsDeadHead ? 1 + (deadHead - 1) * (1 - 1e-9) : PRESSURE_RATIO_CEILING;
+  const tooSlow = (): CalcConvergenceError =>
+    new CalcConvergenceError(
+      `At ${Math.round(rpm)} rpm the blower (${Math.round(blowerRpm)} rpm) cannot feed the engine: manifold pressure would fall below ${kpa(lo * p.p1 - p.dpic)} kPa. Choose a smaller blower pulley or a larger blower.`,
+      "blower-too-slow",
+      rpm,
+      "drive.blowerPulleyDiameter",
+    );
+  if (hi <= lo) throw tooSlow();
+  let a = lo;
+  let fa = surplus(lo);
+  if (!(fa > 0)) throw tooSlow();
+  let b = lo < 1 ? 1 : lo * BRACKET_SCAN_FACTOR;
+  let fb: number;
+  for (;;) {
+    if (b >= hi) b = hi;
+    fb = surplus(b);
+    if (!Number.isFinite(fb)) {
+      throw new CalcConvergenceError(`At ${Math.round(rpm)} rpm the balance could not be evaluated at pressure ratio ${b.toFixed(3)}.`, "not-converged", rpm);
+    }
+    if (fb <= 0) break;
+    if (b === hi) {
+      throw new CalcConvergenceError(
+        ceilingIsDeadHead
+          ? `At ${Math.round(rpm)} rpm the blower reaches its dead-head pressure ratio (${deadHead.toFixed(2)}) before the engine swallows its delivery: no stable balance. Check the blower data and drive ratio.`
+          : `At ${Math.round(rpm)} rpm no balance exists below pressure ratio ${PRESSURE_RATIO_CEILING}. Check the blower data and drive ratio.`,
+        "no-balance",
+        rpm,
+        "drive.blowerPulleyDiameter",
+      );
+    }
+    a = b;
+    fa = fb;
+    b *= BRACKET_SCAN_FACTOR;
+  }
+  const result = brent(surplus, a, b, fa, fb, SOLVER_RELATIVE_TOLERANCE, SOLVER_MAX_ITERATIONS);
+  if (!result.converged) {
+    throw new CalcConvergenceError(
+      `At ${Math.round(rpm)} rpm the solver did not converge on a pressure ratio between ${a.toFixed(4)} and ${b.toFixed(4)}.`,
+      "not-converged",
+      rpm,
+    );
+  }
+  blowerState(p, sweptFlow, result.root, state);
+  return pointFromState(p, rpm, blowerRpm, ve, result.root, state);
+}
+
+/** Solve every engine speed of a prepared combination (unchecked). */
+export function boostCurvePrepared(p: PreparedCombination, rpms: readonly number[]): OperatingPoint[] {
+  const out = new Array<OperatingPoint>(rpms.length);
+  for (let i = 0; i < rpms.length; i++) out[i] = solvePrepared(p, rpms[i]);
+  return out;
+}
+
+/** Operating point of a combination at an engine speed (rev/min); throws CalcInputError or CalcConvergenceError. */
+export function solvePoint(combination: CombinationInput, rpm: number): OperatingPoint {
+  const c = parseOrThrow(combinationSchema, combination);
+  return solvePrepared(prepare(c), parseOrThrow(rpmSchema, rpm, "rpm"));
+}
+
+/** Operating points at each engine speed (rev/min), in the order given. */
+export function boostCurve(combination: CombinationInput, rpms: readonly number[]): OperatingPoint[] {
+  const c = parseOrThrow(combinationSchema, combination);
+  return boostCurvePrepared(prepare(c), parseOrThrow(rpmListSchema, rpms, "rpms"));
+}
+
+/** Ratio-rule manifold pressure P1·Vb·Nb/(Vd·(N/2)·VE) of a prepared combination (Pa, absolute). */
+export function idealRatioRulePrepared(p: PreparedCombination, rpm: number): number {
+  const c = p.combination;
+  const blowerRpm = rpm * p.speedFactor;
+  return (p.p1 * p.vb * blowerRpm) / ((c.engine.displacement * rpm * veAt(c.engine.veCurve, rpm)) / 2);
+}
+
+/** The trade's closed-form ratio rule Pm = P1·Vb·Nb/(Vd·(N/2)·VE) at an engine speed (rev/min → Pa, absolute). */
+export function idealRatioRuleManifoldPressure(combination: CombinationInput, rpm: number): number {
+  const c = parseOrThrow(combinationSchema, combination);
+  return idealRatioRulePrepared(prepare(c), parseOrThrow(rpmSchema, rpm, "rpm"));
+}

@@ -1,0 +1,290 @@
+// Saved combinations and their revisions. Every function takes the acting user and checks the
+// role rules of db/policy.ts before it reads or writes; every save writes a revision, and a save
+// based on an out-of-date revision is refused (409) instead of overwriting someone else's edit.
+import { and, asc, count, desc, eq, ilike, isNull, or, sql, type SQL } from "drizzle-orm";
+import { z } from "zod";
+import { combinationSchema, type Combination } from "@/calc";
+import type { DbOrTx } from "../connect";
+import { ConflictError, NotFoundError } from "../errors";
+import { assert, canCreateForCustomer, canReadOwned, canWriteOwned, isShopStaff, type Actor } from "../policy";
+import { combinationRevisions, combinations, users, type CombinationRow } from "../schema";
+
+const text = (label: string, max: number) => z.string().trim().max(max, `${label} must be at most ${max} characters.`);
+
+/** Fields a person edits besides the spec. */
+export const combinationMetaSchema = z.object({
+  name: text("Name", 120).min(1, "Give the combination a name."),
+  customerName: text("Customer name", 120).nullish().transform((v) => v || null),
+  customerContact: text("Customer contact", 200).nullish().transform((v) => v || null),
+});
+
+export const createCombinationSchema = combinationMetaSchema.extend({
+  spec: combinationSchema,
+  note: text("Note", 500).nullish(),
+});
+
+export const saveCombinationSchema = combinationMetaSchema.partial().extend({
+  spec: combinationSchema.optional(),
+  note: text("Note", 500).nullish(),
+  /** The revision the edit started from; the save is refused if someone saved since. */
+  baseRevision: z.number({ error: "baseRevision (the revision you started from) is required." }).int().min(1),
+});
+
+export const listQuerySchema = z.object({
+  search: text("Search", 100).optional(),
+  sort: z.enum(["name", "updatedAt", "createdAt", "displacement", "blowerPulleyDiameter"]).default("updatedAt"),
+  dir: z.enum(["asc", "desc"]).default("desc"),
+  page: z.coerce.number().int().min(1, "page must be 1 or more").default(1),
+  pageSize: z.coerce.number().int().min(1).max(100, "pageSize must be at most 100").default(20),
+  scope: z.enum(["mine", "shop", "demo"]).optional(),
+});
+
+export type CreateCombinationInput = z.input<typeof createCombinationSchema>;
+export type SaveCombinationInput = z.input<typeof saveCombinationSchema>;
+export type ListQuery = z.input<typeof listQuerySchema>;
+
+const listed = (spec: Combination) => ({
+  displacement: spec.engine.displacement,
+  blowerKind: spec.blower.kind,
+  blowerPulleyDiameter: spec.drive.blowerPulleyDiameter,
+});
+
+/** Which combinations `actor` may see: their own; staff see the shop's; instructors also see the demo ones. */
+function visibleTo(actor: Actor): SQL | undefined {
+  if (isShopStaff(actor)) return undefined;
+  if (actor.role === "instructor") return or(eq(combinations.ownerId, actor.id), eq(combinations.isDemo, true));
+  return eq(combinations.ownerId, actor.id);
+}
+
+export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuery = {}) {
+  const q = listQuerySchema.parse(query);
+  const conds: (SQL | undefined)[] = [isNull(combinations.deletedAt), visibleTo(actor)];
+  if (q.scope === "mine") conds.push(eq(combinations.ownerId, actor.id));
+  if (q.scope === "demo") conds.push(eq(combinations.isDemo, true));
+  if (q.search) {
+    const like = `%${q.search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
+    conds.push(or(ilike(combinations.name, like), ilike(combinations.customerName, like), ilike(combinations.customerContact, like)));
+  }
+  const where = and(...conds);
+  const col = combinations[q.sort];
+  const order = q.dir === "asc" ? asc(col) : desc(col);
+  const [rows, [{ n }]] = await Promise.all([
+    db
+      .select({
+        id: combinations.id,
+        name: combinations.name,
+        ownerId: combinations.ownerId,
+        ownerName: users.name,
+        ownerEmail: users.email,
+        customerName: combinations.customerName,
+        customerContact: combinations.customerContact,
+        displacement: combinations.displacement,
+        blowerKind: combinations.blowerKind,
+        blowerPulleyDiameter: combinations.blowerPulleyDiameter,
+        revision: combinations.revision,
+        isDemo: combinations.isDemo,
+        createdAt: combinations.createdAt,
+        updatedAt: combinations.updatedAt,
+      })
+      .from(combinations)
+      .innerJoin(users, eq(users.id, combinations.ownerId))
+      .where(where)
+      .orderBy(order, asc(combinations.id))
+      .limit(q.pageSize)
+      .offset((q.page - 1) * q.pageSize),
+    db.select({ n: count() }).from(combinations).where(where),
+  ]);
+  return { items: rows, total: n, page: q.page, pageSize: q.pageSize };
+}
+
+async function findRow(db: DbOrTx, id: string, opts: { includeDeleted?: boolean } = {}) {
+  if (!z.uuid().safeParse(id).success) return undefined;
+  const [row] = await db
+    .select()
+    .from(combinations)
+    .where(and(eq(combinations.id, id), opts.includeDeleted ? undefined : isNull(combinations.deletedAt)));
+  return row;
+}
+
+/** A combination `actor` may read; 404 when it does not exist or is not theirs to see (no hint which). */
+export async function getCombination(db: DbOrTx, actor: Actor, id: string): Promise<CombinationRow & { spec: Combination }> {
+  const row = await findRow(db, id);
+  if (!row || !canReadOwned(actor, row.ownerId, { isDemo: row.isDemo })) throw new NotFoundError("No such combination.");
+  return row as CombinationRow & { spec: Combination };
+}
+
+async function getWritable(db: DbOrTx, actor: Actor, id: string, opts: { includeDeleted?: boolean } = {}) {
+  const row = await findRow(db, id, opts);
+  if (!row || !canReadOwned(actor, row.ownerId, { isDemo: row.isDemo })) throw new NotFoundError("No such combination.");
+  assert(canWriteOwned(actor, row.ownerId), "You can view this combination but not change it. Duplicate it to make your own copy.");
+  return row;
+}
+
+export async function createCombination(db: DbOrTx, actor: Actor, input: CreateCombinationInput, opts: { isDemo?: boolean } = {}) {
+  const v = createCombinationSchema.parse(input);
+  if ((v.customerName || v.customerContact) && !canCreateForCustomer(actor)) {
+    // Members keep their own cars; customer details are the shop's business.
+    v.customerName = null;
+    v.customerContact = null;
+  }
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(combinations)
+      .values({ ownerId: actor.id, name: v.name, customerName: v.customerName, customerContact: v.customerContact, spec: v.spec, ...listed(v.spec), revision: 1, isDemo: !!opts.isDemo })
+      .returning();
+    await tx.insert(combinationRevisions).values({ combinationId: row.id, number: 1, name: v.name, spec: v.spec, note: v.note || "First version", authorId: actor.id });
+    return row;
+  });
+}
+
+/**
+ * Saves an edit as a new revision. The update only matches when the stored revision is still the
+ * one the edit started from, so two people saving at once cannot overwrite each other: the second
+ * gets a 409 naming the revision it missed.
+ */
+export async function saveCombination(db: DbOrTx, actor: Actor, id: string, input: SaveCombinationInput) {
+  const v = saveCombinationSchema.parse(input);
+  const current = await getWritable(db, actor, id);
+  const spec = (v.spec ?? current.spec) as Combination;
+  const name = v.name ?? current.name;
+  const customer = canCreateForCustomer(actor)
+    ? { customerName: v.customerName === undefined ? current.customerName : v.customerName, customerContact: v.customerContact === undefined ? current.customerContact : v.customerContact }
+    : {};
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(combinations)
+      .set({ name, spec, ...listed(spec), ...customer, revision: sql`${combinations.revision} + 1`, updatedAt: new Date() })
+      .where(and(eq(combinations.id, id), eq(combinations.revision, v.baseRevision), isNull(combinations.deletedAt)))
+      .returning();
+    if (!row) {
+      const [now] = await tx.select({ revision: combinations.revision }).from(combinations).where(eq(combinations.id, id));
+      throw new ConflictError(
+        `This combination was saved by someone else (now revision ${now?.revision ?? "?"}) after you opened revision ${v.baseRevision}. Reload it, then make your change again.`,
+        { field: "baseRevision", currentRevision: now?.revision },
+      );
+    }
+    await tx.insert(combinationRevisions).values({ combinationId: id, number: row.revision, name, spec, note: v.note || null, authorId: actor.id });
+    return row;
+  });
+}
+
+/** Renames without changing the spec (still a revision, so the history shows it). */
+export async function renameCombination(db: DbOrTx, actor: Actor, id: string, name: string, baseRevision: number) {
+  return saveCombination(db, actor, id, { name, baseRevision, note: `Renamed to “${name}”` });
+}
+
+/** A copy owned by `actor`, starting a fresh history. */
+export async function duplicateCombination(db: DbOrTx, actor: Actor, id: string, opts: { name?: string; revision?: number } = {}) {
+  const src = await getCombination(db, actor, id);
+  const spec = opts.revision ? (await getRevision(db, actor, id, opts.revision)).spec : src.spec;
+  return createCombination(db, actor, {
+    name: (opts.name ?? `${src.name} (copy)`).slice(0, 120),
+    spec: spec as Combination,
+    customerName: isShopStaff(actor) ? src.customerName : null,
+    customerContact: isShopStaff(actor) ? src.customerContact : null,
+    note: opts.revision ? `Copied from “${src.name}”, revision ${opts.revision}` : `Copied from “${src.name}”`,
+  });
+}
+
+/** Moves a combination to the bin; `undoDelete` brings it back. */
+export async function deleteCombination(db: DbOrTx, actor: Actor, id: string) {
+  await getWritable(db, actor, id);
+  await db.update(combinations).set({ deletedAt: new Date() }).where(eq(combinations.id, id));
+}
+
+export async function undoDelete(db: DbOrTx, actor: Actor, id: string) {
+  const row = await getWritable(db, actor, id, { includeDeleted: true });
+  if (!row.deletedAt) return row;
+  const [r] = await db.update(combinations).set({ deletedAt: null }).where(eq(combinations.id, id)).returning();
+  return r;
+}
+
+export async function listRevisions(db: DbOrTx, actor: Actor, id: string) {
+  await getCombination(db, actor, id);
+  return db
+    .select({
+      number: combinationRevisions.number,
+      name: combinationRevisions.name,
+      note: combinationRevisions.note,
+      createdAt: combinationRevisions.createdAt,
+      authorName: users.name,
+      spec: combinationRevisions.spec,
+    })
+    .from(combinationRevisions)
+    .leftJoin(users, eq(users.id, combinationRevisions.authorId))
+    .where(eq(combinationRevisions.combinationId, id))
+    .orderBy(desc(combinationRevisions.number));
+}
+
+export async function getRevision(db: DbOrTx, actor: Actor, id: string, number: number) {
+  await getCombination(db, actor, id);
+  const [rev] = await db
+    .select()
+    .from(combinationRevisions)
+    .where(and(eq(combinationRevisions.combinationId, id), eq(combinationRevisions.number, number)));
+  if (!rev) throw new NotFoundError(`No revision ${number} of this combination.`);
+  return rev as typeof rev & { spec: Combination };
+}
+
+/** Restores an old revision by saving its spec (and name) as the newest revision. */
+export async function restoreRevision(db: DbOrTx, actor: Actor, id: string, number: number, baseRevision: number) {
+  const rev = await getRevision(db, actor, id, number);
+  return saveCombination(db, actor, id, { spec: rev.spec, name: rev.name, baseRevision, note: `Restored revision ${number}` });
+}
+
+// Export and import: a versioned JSON document, readable by people and by this app.
+export const EXPORT_FORMAT = "pulleywright.combinations";
+export const EXPORT_VERSION = 1;
+
+export const importDocumentSchema = z.object({
+  format: z.literal(EXPORT_FORMAT, { error: `format must be "${EXPORT_FORMAT}"` }),
+  version: z.literal(EXPORT_VERSION, { error: `version must be ${EXPORT_VERSION}` }),
+  combinations: z
+    .array(
+      combinationMetaSchema.extend({
+        spec: combinationSchema,
+        revisions: z.array(z.object({ number: z.number().int().min(1), name: z.string().max(120), note: z.string().max(500).nullish(), spec: combinationSchema })).optional(),
+      }),
+    )
+    .min(1, "The file holds no combinations.")
+    .max(200, "At most 200 combinations per import."),
+});
+
+export async function exportCombinations(db: DbOrTx, actor: Actor, ids?: string[]) {
+  const targets = ids?.length
+    ? await Promise.all(ids.map((id) => getCombination(db, actor, id)))
+    : await db.select().from(combinations).where(and(eq(combinations.ownerId, actor.id), isNull(combinations.deletedAt))).orderBy(asc(combinations.name));
+  const out = [];
+  for (const c of targets) {
+    const revs = await db.select().from(combinationRevisions).where(eq(combinationRevisions.combinationId, c.id)).orderBy(asc(combinationRevisions.number));
+    out.push({
+      name: c.name,
+      customerName: c.customerName,
+      customerContact: c.customerContact,
+      spec: c.spec,
+      revisions: revs.map((r) => ({ number: r.number, name: r.name, note: r.note, spec: r.spec })),
+    });
+  }
+  return { format: EXPORT_FORMAT, version: EXPORT_VERSION, exportedAt: new Date().toISOString(), combinations: out };
+}
+
+/** Imports all or nothing: each combination becomes a new one owned by `actor`, its history kept. */
+export async function importCombinations(db: DbOrTx, actor: Actor, doc: unknown) {
+  const v = importDocumentSchema.parse(doc);
+  return db.transaction(async (tx) => {
+    const created: CombinationRow[] = [];
+    for (const c of v.combinations) {
+      const staff = canCreateForCustomer(actor);
+      const revs = c.revisions?.length ? [...c.revisions].sort((a, b) => a.number - b.number) : [{ number: 1, name: c.name, note: "Imported", spec: c.spec }];
+      // The newest revision is what the combination holds now.
+      const spec = revs[revs.length - 1].spec;
+      const [row] = await tx
+        .insert(combinations)
+        .values({ ownerId: actor.id, name: c.name, customerName: staff ? c.customerName : null, customerContact: staff ? c.customerContact : null, spec, ...listed(spec), revision: revs.length })
+        .returning();
+      await tx.insert(combinationRevisions).values(revs.map((r, i) => ({ combinationId: row.id, number: i + 1, name: r.name, note: r.note ?? null, spec: r.spec, authorId: actor.id })));
+      created.push(row);
+    }
+    return created;
+  });
+}

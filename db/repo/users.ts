@@ -1,0 +1,138 @@
+import { and, count, eq, gt, ilike, isNull, or } from "drizzle-orm";
+import bcrypt from "bcryptjs";
+import crypto from "node:crypto";
+import type { DbOrTx } from "../connect";
+import { authTokens, signInAttempts, users, type Role, type User } from "../schema";
+import { ConflictError, NotFoundError } from "../errors";
+import { assert, canManageUsers, type Actor } from "../policy";
+
+export const normalizeEmail = (e: string) => e.trim().toLowerCase();
+
+export async function hashPassword(password: string) {
+  return bcrypt.hash(password, 10);
+}
+
+export async function getUserByEmail(db: DbOrTx, email: string): Promise<User | undefined> {
+  const [u] = await db.select().from(users).where(eq(users.email, normalizeEmail(email)));
+  return u;
+}
+
+export async function getUserById(db: DbOrTx, id: string): Promise<User | undefined> {
+  const [u] = await db.select().from(users).where(eq(users.id, id));
+  return u;
+}
+
+export function toActor(u: User): Actor {
+  return { id: u.id, role: u.role, email: u.email, name: u.name };
+}
+
+/** Sign-up: always a member. Refuses an e-mail already taken (409). */
+export async function createMember(db: DbOrTx, input: { email: string; name: string; password: string }) {
+  const email = normalizeEmail(input.email);
+  if (await getUserByEmail(db, email)) throw new ConflictError("An account with that e-mail already exists.", { field: "email" });
+  const [u] = await db
+    .insert(users)
+    .values({ email, name: input.name.trim(), passwordHash: await hashPassword(input.password), role: "member" })
+    .returning();
+  return u;
+}
+
+// Rate limits: a few wrong passwords per account, more per address, in a sliding window.
+const WINDOW_MS = 15 * 60 * 1000;
+export const MAX_FAILURES_PER_ACCOUNT = 5;
+export const MAX_FAILURES_PER_ADDRESS = 20;
+
+export async function isRateLimited(db: DbOrTx, email: string, ip: string): Promise<boolean> {
+  const since = new Date(Date.now() - WINDOW_MS);
+  const [byEmail] = await db
+    .select({ n: count() })
+    .from(signInAttempts)
+    .where(and(eq(signInAttempts.email, normalizeEmail(email)), eq(signInAttempts.success, false), gt(signInAttempts.createdAt, since)));
+  const [byIp] = await db
+    .select({ n: count() })
+    .from(signInAttempts)
+    .where(and(eq(signInAttempts.ip, ip), eq(signInAttempts.success, false), gt(signInAttempts.createdAt, since)));
+  return byEmail.n >= MAX_FAILURES_PER_ACCOUNT || byIp.n >= MAX_FAILURES_PER_ADDRESS;
+}
+
+export async function recordSignInAttempt(db: DbOrTx, email: string, ip: string, success: boolean) {
+  await db.insert(signInAttempts).values({ email: normalizeEmail(email), ip, success });
+}
+
+/** Checks a password sign-in. Returns the user, or null for any failure (without saying which). */
+export async function verifyPassword(db: DbOrTx, email: string, password: string, ip: string): Promise<User | null | "rate-limited"> {
+  if (await isRateLimited(db, email, ip)) return "rate-limited";
+  const u = await getUserByEmail(db, email);
+  const ok = !!u && !u.disabled && !!u.passwordHash && (await bcrypt.compare(password, u.passwordHash));
+  await recordSignInAttempt(db, email, ip, ok);
+  return ok ? u! : null;
+}
+
+// One-time tokens (sign-in links and password resets). The e-mailed token is random; only its hash is stored.
+const sha256 = (s: string) => crypto.createHash("sha256").update(s).digest("hex");
+
+export async function issueToken(db: DbOrTx, userId: string, kind: "magic-link" | "password-reset", ttlMinutes: number) {
+  const token = crypto.randomBytes(32).toString("base64url");
+  await db.insert(authTokens).values({
+    userId,
+    kind,
+    tokenHash: sha256(token),
+    expiresAt: new Date(Date.now() + ttlMinutes * 60_000),
+  });
+  return token;
+}
+
+/** Uses a token once; returns its user when it is valid, unexpired and unused. */
+export async function consumeToken(db: DbOrTx, token: string, kind: "magic-link" | "password-reset"): Promise<User | null> {
+  const [row] = await db
+    .update(authTokens)
+    .set({ usedAt: new Date() })
+    .where(
+      and(
+        eq(authTokens.tokenHash, sha256(token)),
+        eq(authTokens.kind, kind),
+        isNull(authTokens.usedAt),
+        gt(authTokens.expiresAt, new Date()),
+      ),
+    )
+    .returning();
+  if (!row) return null;
+  const u = await getUserById(db, row.userId);
+  return u && !u.disabled ? u : null;
+}
+
+export async function setPassword(db: DbOrTx, userId: string, password: string) {
+  await db.update(users).set({ passwordHash: await hashPassword(password) }).where(eq(users.id, userId));
+}
+
+export async function setUnitSystem(db: DbOrTx, actor: Actor, unitSystem: "imperial" | "metric") {
+  await db.update(users).set({ unitSystem }).where(eq(users.id, actor.id));
+}
+
+// Admin: the accounts table.
+export async function listUsers(db: DbOrTx, actor: Actor, q: { search?: string; page: number; pageSize: number }) {
+  assert(canManageUsers(actor));
+  const where = q.search ? or(ilike(users.email, `%${q.search}%`), ilike(users.name, `%${q.search}%`)) : undefined;
+  const [rows, [{ n }]] = await Promise.all([
+    db
+      .select({ id: users.id, email: users.email, name: users.name, role: users.role, disabled: users.disabled, createdAt: users.createdAt })
+      .from(users)
+      .where(where)
+      .orderBy(users.email)
+      .limit(q.pageSize)
+      .offset((q.page - 1) * q.pageSize),
+    db.select({ n: count() }).from(users).where(where),
+  ]);
+  return { rows, total: n, page: q.page, pageSize: q.pageSize };
+}
+
+export async function updateUserAccess(db: DbOrTx, actor: Actor, userId: string, patch: { role?: Role; disabled?: boolean }) {
+  assert(canManageUsers(actor));
+  if (userId === actor.id && (patch.role !== undefined && patch.role !== "admin" || patch.disabled)) {
+    throw new ConflictError("You cannot remove your own admin access.", { field: "role" });
+  }
+  const [u] = await db.update(users).set(patch).where(eq(users.id, userId)).returning();
+  if (!u) throw new NotFoundError("No such user.");
+  return u;
+}
+

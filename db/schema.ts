@@ -1,0 +1,290 @@
+import { sql } from "drizzle-orm";
+import {
+  bigserial,
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  numeric,
+  pgEnum,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+
+// Quantities are stored in SI (m, m³, Pa, K) like calc/; money as numeric(12,2), read as
+// strings and summed with decimal.js.
+
+export const roleEnum = pgEnum("role", ["member", "tuner", "sales", "instructor", "admin"]);
+export const unitSystemEnum = pgEnum("unit_system", ["imperial", "metric"]);
+export const tokenKindEnum = pgEnum("token_kind", ["magic-link", "password-reset"]);
+export const blowerKindEnum = pgEnum("blower_kind", ["roots", "twin-screw"]);
+export const pulleyPositionEnum = pgEnum("pulley_position", ["crank", "blower"]);
+export const recommendationStatusEnum = pgEnum("recommendation_status", [
+  "draft",
+  "sent",
+  "accepted",
+  "declined",
+]);
+
+const created = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
+const updated = () => timestamp("updated_at", { withTimezone: true }).notNull().defaultNow();
+
+export const users = pgTable("users", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  email: text("email").notNull().unique(),
+  name: text("name").notNull().default(""),
+  passwordHash: text("password_hash"),
+  role: roleEnum("role").notNull().default("member"),
+  unitSystem: unitSystemEnum("unit_system").notNull().default("imperial"),
+  disabled: boolean("disabled").notNull().default(false),
+  emailVerifiedAt: timestamp("email_verified_at", { withTimezone: true }),
+  createdAt: created(),
+});
+
+/** One-time tokens for e-mailed sign-in links and password resets; only a hash is kept. */
+export const authTokens = pgTable("auth_tokens", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  userId: uuid("user_id")
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  kind: tokenKindEnum("kind").notNull(),
+  tokenHash: text("token_hash").notNull().unique(),
+  expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+  usedAt: timestamp("used_at", { withTimezone: true }),
+  createdAt: created(),
+});
+
+/** Sign-in attempts, for rate limiting per account and per address. */
+export const signInAttempts = pgTable(
+  "sign_in_attempts",
+  {
+    id: bigserial("id", { mode: "number" }).primaryKey(),
+    email: text("email").notNull(),
+    ip: text("ip").notNull(),
+    success: boolean("success").notNull(),
+    createdAt: created(),
+  },
+  (t) => [index("sign_in_attempts_email_idx").on(t.email, t.createdAt), index("sign_in_attempts_ip_idx").on(t.ip, t.createdAt)],
+);
+
+/** A saved engine + blower + drive combination. `spec` is a calc Combination (validated by calc's schema). */
+export const combinations = pgTable(
+  "combinations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    ownerId: uuid("owner_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    customerName: text("customer_name"),
+    customerContact: text("customer_contact"),
+    spec: jsonb("spec").notNull(),
+    // Denormalised from spec for listing, searching and sorting.
+    displacement: doublePrecision("displacement").notNull(),
+    blowerKind: blowerKindEnum("blower_kind").notNull(),
+    blowerPulleyDiameter: doublePrecision("blower_pulley_diameter").notNull(),
+    revision: integer("revision").notNull().default(1),
+    isDemo: boolean("is_demo").notNull().default(false),
+    deletedAt: timestamp("deleted_at", { withTimezone: true }),
+    createdAt: created(),
+    updatedAt: updated(),
+  },
+  (t) => [
+    index("combinations_owner_idx").on(t.ownerId, t.updatedAt),
+    index("combinations_name_idx").on(t.name),
+    index("combinations_updated_idx").on(t.updatedAt),
+  ],
+);
+
+export const combinationRevisions = pgTable(
+  "combination_revisions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    combinationId: uuid("combination_id")
+      .notNull()
+      .references(() => combinations.id, { onDelete: "cascade" }),
+    number: integer("number").notNull(),
+    name: text("name").notNull(),
+    spec: jsonb("spec").notNull(),
+    note: text("note"),
+    authorId: uuid("author_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: created(),
+  },
+  (t) => [uniqueIndex("combination_revisions_number_idx").on(t.combinationId, t.number)],
+);
+
+export const blowers = pgTable("blowers", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  partNumber: text("part_number").notNull().unique(),
+  name: text("name").notNull(),
+  kind: blowerKindEnum("kind").notNull(),
+  displacementPerRev: doublePrecision("displacement_per_rev").notNull(),
+  builtInVolumeRatio: doublePrecision("built_in_volume_ratio").notNull(),
+  maxRpm: doublePrecision("max_rpm").notNull(),
+  volumetricEfficiencyRef: doublePrecision("volumetric_efficiency_ref").notNull(),
+  referenceRpm: doublePrecision("reference_rpm").notNull(),
+  internalEfficiency: doublePrecision("internal_efficiency").notNull(),
+  mechanicalEfficiency: doublePrecision("mechanical_efficiency").notNull(),
+  notes: text("notes").notNull().default(""),
+  price: numeric("price", { precision: 12, scale: 2 }).notNull(),
+  stock: integer("stock").notNull().default(0),
+  createdAt: created(),
+  updatedAt: updated(),
+});
+
+export const pulleys = pgTable(
+  "pulleys",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    partNumber: text("part_number").notNull().unique(),
+    position: pulleyPositionEnum("position").notNull(),
+    diameter: doublePrecision("diameter").notNull(),
+    ribCount: integer("rib_count").notNull(),
+    minBeltDiameter: doublePrecision("min_belt_diameter"),
+    price: numeric("price", { precision: 12, scale: 2 }).notNull(),
+    stock: integer("stock").notNull().default(0),
+    notes: text("notes").notNull().default(""),
+    createdAt: created(),
+    updatedAt: updated(),
+  },
+  (t) => [index("pulleys_position_idx").on(t.position, t.diameter)],
+);
+
+/** A measured log, tied to the combination revision it was logged with. The raw file is kept. */
+export const datalogs = pgTable(
+  "datalogs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    ownerId: uuid("owner_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    combinationId: uuid("combination_id")
+      .notNull()
+      .references(() => combinations.id, { onDelete: "cascade" }),
+    revision: integer("revision").notNull(),
+    name: text("name").notNull(),
+    fileName: text("file_name").notNull(),
+    rawText: text("raw_text").notNull(),
+    mapping: jsonb("mapping").notNull(),
+    ambient: jsonb("ambient"),
+    pointCount: integer("point_count").notNull(),
+    createdAt: created(),
+  },
+  (t) => [index("datalogs_owner_idx").on(t.ownerId, t.createdAt), index("datalogs_combination_idx").on(t.combinationId)],
+);
+
+export const datalogPoints = pgTable(
+  "datalog_points",
+  {
+    id: bigserial("id", { mode: "number" }).primaryKey(),
+    datalogId: uuid("datalog_id")
+      .notNull()
+      .references(() => datalogs.id, { onDelete: "cascade" }),
+    seq: integer("seq").notNull(),
+    line: integer("line").notNull(),
+    time: doublePrecision("time"),
+    rpm: doublePrecision("rpm").notNull(),
+    manifoldPressure: doublePrecision("manifold_pressure").notNull(),
+    intakeTemperature: doublePrecision("intake_temperature"),
+    throttle: doublePrecision("throttle"),
+  },
+  (t) => [index("datalog_points_log_idx").on(t.datalogId, t.seq)],
+);
+
+export const recommendations = pgTable(
+  "recommendations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    combinationId: uuid("combination_id")
+      .notNull()
+      .references(() => combinations.id, { onDelete: "cascade" }),
+    revision: integer("revision").notNull(),
+    authorId: uuid("author_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    customerName: text("customer_name").notNull(),
+    customerEmail: text("customer_email"),
+    vehicleNotes: text("vehicle_notes").notNull().default(""),
+    notes: text("notes").notNull().default(""),
+    blowerPulleyDiameter: doublePrecision("blower_pulley_diameter").notNull(),
+    spec: jsonb("spec").notNull(),
+    parts: jsonb("parts").notNull(),
+    total: numeric("total", { precision: 12, scale: 2 }).notNull(),
+    status: recommendationStatusEnum("status").notNull().default("draft"),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+    lastError: text("last_error"),
+    createdAt: created(),
+    updatedAt: updated(),
+  },
+  (t) => [index("recommendations_author_idx").on(t.authorId, t.updatedAt)],
+);
+
+export const lessons = pgTable("lessons", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  ownerId: uuid("owner_id")
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  title: text("title").notNull(),
+  summary: text("summary").notNull().default(""),
+  classCode: text("class_code").notNull().unique(),
+  published: boolean("published").notNull().default(false),
+  createdAt: created(),
+  updatedAt: updated(),
+});
+
+export const lessonSteps = pgTable(
+  "lesson_steps",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    lessonId: uuid("lesson_id")
+      .notNull()
+      .references(() => lessons.id, { onDelete: "cascade" }),
+    position: integer("position").notNull(),
+    title: text("title").notNull(),
+    note: text("note").notNull().default(""),
+    items: jsonb("items").notNull(),
+    series: jsonb("series").notNull().default(sql`'["boost","netPower"]'::jsonb`),
+  },
+  (t) => [index("lesson_steps_lesson_idx").on(t.lessonId, t.position)],
+);
+
+/** Members who joined a lesson with its class code (read-only access). */
+export const lessonMembers = pgTable(
+  "lesson_members",
+  {
+    lessonId: uuid("lesson_id")
+      .notNull()
+      .references(() => lessons.id, { onDelete: "cascade" }),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    joinedAt: timestamp("joined_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("lesson_members_idx").on(t.lessonId, t.userId)],
+);
+
+/** The shop's own details, printed on recommendation sheets (a single row, id = 1). */
+export const shopSettings = pgTable("shop_settings", {
+  id: integer("id").primaryKey().default(1),
+  name: text("name").notNull(),
+  address: text("address").notNull().default(""),
+  phone: text("phone").notNull().default(""),
+  email: text("email").notNull().default(""),
+  website: text("website").notNull().default(""),
+});
+
+export type User = typeof users.$inferSelect;
+export type Role = (typeof roleEnum.enumValues)[number];
+export type CombinationRow = typeof combinations.$inferSelect;
+export type CombinationRevisionRow = typeof combinationRevisions.$inferSelect;
+export type BlowerRow = typeof blowers.$inferSelect;
+export type PulleyRow = typeof pulleys.$inferSelect;
+export type DatalogRow = typeof datalogs.$inferSelect;
+export type DatalogPointRow = typeof datalogPoints.$inferSelect;
+export type RecommendationRow = typeof recommendations.$inferSelect;
+export type LessonRow = typeof lessons.$inferSelect;
+export type LessonStepRow = typeof lessonSteps.$inferSelect;

@@ -1,0 +1,8 @@
+import type { Db } from "../connect";
+import type { DemoCombinations } from "./combinations";
+import type { DemoUsers } from "./index";
+
+// PLACEHOLDER: the demo lessons are added by the work on that capability.
+export async function seedLessons(db: Db, people: DemoUsers, combos: DemoCombinations) {
+  void [db, people, combos];
+}

@@ -1,0 +1,164 @@
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import convert from "convert-units";
+import * as U from "@/calc";
+import { relDiff } from "./support/arbitraries";
+
+// convert-units carries most of its factors to about six significant figures.
+const CU_TOL = 1e-5;
+const positive = fc.double({ min: 1e-3, max: 1e5, noNaN: true });
+
+describe("units", () => {
+  describe("factors against the convert-units package", () => {
+    it("length: in and mm to m", () => {
+      fc.assert(
+        fc.property(positive, (v) => {
+          expect(relDiff(U.inToM(v), convert(v).from("in").to("m"))).toBeLessThan(CU_TOL);
+          expect(relDiff(U.mmToM(v), convert(v).from("mm").to("m"))).toBeLessThan(CU_TOL);
+        }),
+      );
+    });
+
+    it("volume: in³ and L to m³", () => {
+      fc.assert(
+        fc.property(positive, (v) => {
+          expect(relDiff(U.in3ToM3(v), convert(v).from("in3").to("m3"))).toBeLessThan(CU_TOL);
+          expect(relDiff(U.litresToM3(v), convert(v).from("l").to("m3"))).toBeLessThan(CU_TOL);
+        }),
+      );
+    });
+
+    it("pressure: psi, kPa and bar to Pa", () => {
+      fc.assert(
+        fc.property(positive, (v) => {
+          expect(relDiff(U.psiToPa(v), convert(v).from("psi").to("Pa"))).toBeLessThan(CU_TOL);
+          expect(relDiff(U.kPaToPa(v), convert(v).from("kPa").to("Pa"))).toBeLessThan(CU_TOL);
+          expect(relDiff(U.barToPa(v), convert(v).from("bar").to("Pa"))).toBeLessThan(CU_TOL);
+        }),
+      );
+    });
+
+    it("temperature: °F and °C to K", () => {
+      fc.assert(
+        fc.property(fc.double({ min: -100, max: 500, noNaN: true }), (v) => {
+          expect(U.fToK(v)).toBeCloseTo(convert(v).from("F").to("K"), 6);
+          expect(U.cToK(v)).toBeCloseTo(convert(v).from("C").to("K"), 9);
+        }),
+      );
+    });
+
+    it("power: kW to W", () => {
+      fc.assert(fc.property(positive, (v) => expect(relDiff(U.kWToW(v), convert(v).from("kW").to("W"))).toBeLessThan(CU_TOL)));
+    });
+
+    it("volume flow: cfm and m³/min to m³/s", () => {
+      fc.assert(
+        fc.property(positive, (v) => {
+          expect(relDiff(U.cfmToM3s(v), convert(v).from("ft3/min").to("m3/s"))).toBeLessThan(CU_TOL);
+          expect(relDiff(U.m3PerMinToM3s(v), convert(v).from("m3/min").to("m3/s"))).toBeLessThan(CU_TOL);
+        }),
+      );
+    });
+
+    it("mass flow: lb/h to kg/s", () => {
+      fc.assert(
+        fc.property(positive, (v) => {
+          const viaPackage = convert(v).from("lb").to("kg") / 3600;
+          expect(relDiff(U.lbPerHourToKgS(v), viaPackage)).toBeLessThan(CU_TOL);
+        }),
+      );
+    });
+  });
+
+  describe("factors against NIST SP 811 (Appendix B)", () => {
+    it("1 lbf·ft = 1.355818 N·m", () => {
+      // source: NIST SP 811 (2008), App. B.8: pound-force foot → newton meter 1.355 818
+      expect(U.lbFtToNm(1)).toBeCloseTo(1.355818, 6);
+    });
+    it("1 hp (550 ft·lbf/s) = 745.6999 W", () => {
+      // source: NIST SP 811 (2008), App. B.8: horsepower (550 ft·lbf/s) → watt 745.6999
+      expect(U.hpToW(1)).toBeCloseTo(745.6999, 4);
+    });
+    it("1 lb = 0.45359237 kg exactly and 1 in = 0.0254 m exactly", () => {
+      // source: NIST SP 811 (2008), App. B.8 (international pound and inch, exact by definition)
+      expect(U.POUND).toBe(0.45359237);
+      expect(U.INCH).toBe(0.0254);
+    });
+    it("1 psi = 6894.757 Pa", () => {
+      // source: NIST SP 811 (2008), App. B.8: pound-force per square inch → pascal 6.894 757 E+03
+      expect(U.psiToPa(1)).toBeCloseTo(6894.757, 3);
+    });
+    it("BSFC: 0.5 lb/(hp·h) in kg/J from the exact pound and NIST's horsepower", () => {
+      // source: NIST SP 811 factors (lb = 0.45359237 kg, hp = 745.6999 W), 1 h = 3600 s
+      expect(relDiff(U.bsfcImperialToSI(0.5), (0.5 * 0.45359237) / (745.6999 * 3600))).toBeLessThan(1e-7);
+      // source: 1 lb/(hp·h) ≈ 608.3 g/(kW·h), common conversion (from memory)
+      expect(U.bsfcSIToMetric(U.bsfcImperialToSI(1))).toBeCloseTo(608.3, 0);
+    });
+    it("injector flow: lb/h × about 10.5 = cc/min for gasoline of 0.72 kg/L", () => {
+      // source: the injector trade's rule of thumb cc/min ≈ 10.5 × lb/h (common practice, no published source)
+      expect(U.kgSToCcPerMin(U.lbPerHourToKgS(1), 0.72)).toBeCloseTo(10.5, 1);
+    });
+  });
+
+  describe("round trips", () => {
+    it("every quantity kind round-trips through SI in both systems", () => {
+      fc.assert(
+        fc.property(
+          fc.constantFrom(...U.QUANTITY_KINDS),
+          fc.constantFrom<U.UnitSystem>("imperial", "metric"),
+          fc.double({ min: -1e4, max: 1e6, noNaN: true }),
+          (kind, system, v) => {
+            const back = U.fromSI(kind, U.toSI(kind, v, system), system);
+            expect(Math.abs(back - v)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(v)));
+          },
+        ),
+      );
+    });
+
+    it("gauge and absolute pressure helpers invert each other", () => {
+      fc.assert(
+        fc.property(fc.double({ min: -5e4, max: 4e5, noNaN: true }), fc.double({ min: 3e4, max: 1.1e5, noNaN: true }), (g, p0) => {
+          expect(U.absoluteToGauge(U.gaugeToAbsolute(g, p0), p0)).toBeCloseTo(g, 6);
+        }),
+      );
+    });
+
+    it("cc/min round-trips at any fuel density", () => {
+      fc.assert(
+        fc.property(positive, fc.double({ min: 0.6, max: 1.0, noNaN: true }), (v, rho) => {
+          expect(relDiff(U.kgSToCcPerMin(U.ccPerMinToKgS(v, rho), rho), v)).toBeLessThan(1e-12);
+        }),
+      );
+    });
+  });
+
+  describe("display helpers", () => {
+    it("label each kind in each system", () => {
+      expect(U.formatQuantity("pressure", U.psiToPa(10), "imperial")).toEqual({ value: expect.closeTo(10, 12), unit: "psi" });
+      expect(U.formatQuantity("pressure", 50_000, "metric")).toEqual({ value: 50, unit: "kPa" });
+      expect(U.formatQuantity("temperature", 373.15, "imperial").value).toBeCloseTo(212, 9); // source: boiling point of water at 1 atm, 212 °F
+      expect(U.formatQuantity("temperature", 373.15, "metric")).toEqual({ value: expect.closeTo(100, 9), unit: "°C" });
+      expect(U.unitLabel("length-small", "imperial")).toBe("in");
+      expect(U.unitLabel("length-small", "metric")).toBe("mm");
+      expect(U.unitLabel("displacement", "imperial")).toBe("in³");
+      expect(U.unitLabel("displacement", "metric")).toBe("L");
+      expect(U.unitLabel("blower-displacement", "imperial")).toBe("in³/rev");
+      expect(U.unitLabel("blower-displacement", "metric")).toBe("L/rev");
+      expect(U.unitLabel("power", "imperial")).toBe("hp");
+      expect(U.unitLabel("power", "metric")).toBe("kW");
+      expect(U.unitLabel("torque", "imperial")).toBe("lb·ft");
+      expect(U.unitLabel("torque", "metric")).toBe("N·m");
+      expect(U.unitLabel("airflow", "imperial")).toBe("cfm");
+      expect(U.unitLabel("airflow", "metric")).toBe("m³/min");
+      expect(U.unitLabel("speed", "metric")).toBe("rpm");
+      expect(U.unitLabel("fuel-flow", "imperial")).toBe("lb/h");
+      expect(U.unitLabel("fuel-flow", "metric")).toBe("kg/h");
+    });
+
+    it("read a form field in the user's units: 3.0 in is 76.2 mm", () => {
+      // source: 1 in = 25.4 mm exactly (NIST SP 811)
+      expect(U.toSI("length-small", 3, "imperial")).toBeCloseTo(0.0762, 12);
+      expect(U.fromSI("length-small", 0.0762, "metric")).toBeCloseTo(76.2, 9);
+    });
+  });
+});

@@ -1,0 +1,2 @@
+// Tests import server modules directly; the real "server-only" guard throws outside React Server Components.
+export {};
