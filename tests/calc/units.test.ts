@@ -48,7 +48,11 @@ describe("units", () => {
     });
 
     it("power: kW to W", () => {
-      fc.assert(fc.property(positive, (v) => expect(relDiff(U.kWToW(v), convert(v).from("kW").to("W"))).toBeLessThan(CU_TOL)));
+      fc.assert(
+        fc.property(positive, (v) => {
+          expect(relDiff(U.kWToW(v), convert(v).from("kW").to("W"))).toBeLessThan(CU_TOL);
+        }),
+      );
     });
 
     it("volume flow: cfm and m³/min to m³/s", () => {
