@@ -122,6 +122,18 @@ function boostWith(c: Combination, rpm: number, diameter: number): number {
   }
 }
 
+interface FinderContext {
+  readonly c: Combination;
+  readonly rpm: number;
+  readonly dc: number;
+  readonly target: number;
+}
+
+/** Boost at drive ratio r minus the target (Pa). */
+function boostGap(k: FinderContext, r: number): number {
+  return boostWith(k.c, k.rpm, k.dc / r) - k.target;
+}
+
 function trySolve(c: Combination, rpm: number, diameter: number): StockedPulley | null {
   try {
     return { diameter, point: solvePrepared(prepare(c, diameter), rpm) };
@@ -147,7 +159,8 @@ export function pulleyForBoost(
   const dc = c.drive.crankPulleyDiameter;
 
   // Solve in drive ratio r = Dc/D, in which boost rises monotonically and nearly linearly.
-  const g = (r: number): number => boostWith(c, n, dc / r) - target;
+  const context: FinderContext = { c, rpm: n, dc, target };
+  const g = (r: number): number => boostGap(context, r);
   let a = dc / PULLEY_FINDER_MAX_DIAMETER;
   let b = dc / PULLEY_FINDER_MIN_DIAMETER;
   let ga = g(a);
@@ -181,7 +194,7 @@ export function pulleyForBoost(
     }
   }
   if (root === null) {
-    const result = brent(g, a, b, ga, gb, SOLVER_RELATIVE_TOLERANCE, SOLVER_MAX_ITERATIONS);
+    const result = brent(boostGap, context, a, b, ga, gb, SOLVER_RELATIVE_TOLERANCE, SOLVER_MAX_ITERATIONS);
     if (!result.converged) {
       throw new CalcConvergenceError(`The pulley finder did not converge on ${kpaText(target)} at ${Math.round(n)} rpm.`, "not-converged", n, "targetBoostGauge");
     }

@@ -16,16 +16,20 @@ const EPSILON = Number.EPSILON;
 
 /**
  * Root of f on [a, b] where fa = f(a) and fb = f(b) have opposite signs (or one is 0), to a
- * relative tolerance on x (dimensionless). Returns converged=false rather than a silent guess.
+ * relative tolerance on x (dimensionless) plus an absolute floor (unit of x) for roots at 0.
+ * Returns converged=false rather than a silent guess. `f` takes an explicit context rather than
+ * being a fresh closure per solve, which keeps the hot loop free of per-call allocations.
  */
-export function brent(
-  f: (x: number) => number,
+export function brent<C>(
+  f: (context: C, x: number) => number,
+  context: C,
   a: number,
   b: number,
   fa: number,
   fb: number,
   relativeTolerance: number,
   maxIterations: number,
+  absoluteTolerance = 0,
 ): RootResult {
   if (fa === 0) return { root: a, evaluations: 0, converged: true };
   if (fb === 0) return { root: b, evaluations: 0, converged: true };
@@ -49,7 +53,7 @@ export function brent(
       fb = fc;
       fc = fa;
     }
-    const tol = 2 * EPSILON * Math.abs(b) + 0.5 * relativeTolerance * Math.abs(b);
+    const tol = 2 * EPSILON * Math.abs(b) + 0.5 * (relativeTolerance * Math.abs(b) + absoluteTolerance);
     const m = 0.5 * (c - b);
     if (Math.abs(m) <= tol || fb === 0) return { root: b, evaluations: i, converged: true };
     if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
@@ -81,7 +85,7 @@ export function brent(
     a = b;
     fa = fb;
     b += Math.abs(d) > tol ? d : m > 0 ? tol : -tol;
-    fb = f(b);
+    fb = f(context, b);
     if (!Number.isFinite(fb)) return { root: Number.NaN, evaluations: i + 1, converged: false };
   }
   return { root: b, evaluations: maxIterations, converged: false };

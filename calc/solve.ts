@@ -64,6 +64,7 @@ export interface OperatingPoint {
 
 /** Constants of one validated combination, computed once per entry-point call. */
 export interface PreparedCombination {
+  /** The validated combination (SI). */
   readonly combination: Combination;
   /** Ambient absolute pressure (Pa). */
   readonly p0: number;
@@ -221,6 +222,54 @@ export function pointFromState(p: PreparedCombination, rpm: number, blowerRpm: n
 
 const kpa = (pa: number): string => (pa / 1000).toFixed(1);
 
+/** Everything the balance's surplus needs at one engine speed (SI). */
+// Fields as in PreparedCombination, plus the two per-speed factors below.
+interface SurplusContext {
+  p1: number;
+  ks: number;
+  rho1: number;
+  t1: number;
+  workOffset: number;
+  invVi: number;
+  eps: number;
+  tcool: number;
+  dpic: number;
+  sweptFlow: number;
+  /** P1·Qs/ηint, so that Pair = (w/P1)·this (W). */
+  airPowerPerWorkRatio: number;
+  /** Vd·(N/120)·VE/R, so that ṁe = (Pm/Tm)·this (kg·K/(s·Pa)). */
+  demandFactor: number;
+}
+
+/** Surplus ṁ − ṁe at a pressure ratio (kg/s): blowerState's arithmetic, inlined for the hot loop. */
+function surplusAt(k: SurplusContext, pr: number): number {
+  const dp = pr * k.p1 - k.p1;
+  const slip = dp >= 0 ? k.ks * Math.sqrt(dp) : -k.ks * Math.sqrt(-dp);
+  const massFlow = k.rho1 * (k.sweptFlow - slip);
+  const t2 = k.t1 + ((k.workOffset + pr * k.invVi) * k.airPowerPerWorkRatio) / (massFlow * SPECIFIC_HEAT_CP);
+  const tm = t2 - k.eps * (t2 - k.tcool);
+  return massFlow - ((pr * k.p1 - k.dpic) / tm) * k.demandFactor;
+}
+
+/** Surplus as a function of u = sign(PR − 1)·√|PR − 1| (kg/s). */
+function surplusAtU(k: SurplusContext, u: number): number {
+  return surplusAt(k, 1 + u * Math.abs(u));
+}
+
+/** u = sign(PR − 1)·√|PR − 1|, in which the orifice-law slip is linear (dimensionless). */
+function toU(pr: number): number {
+  return pr >= 1 ? Math.sqrt(pr - 1) : -Math.sqrt(1 - pr);
+}
+
+function tooSlowError(rpm: number, blowerRpm: number, floorPressure: number): CalcConvergenceError {
+  return new CalcConvergenceError(
+    `At ${Math.round(rpm)} rpm the blower (${Math.round(blowerRpm)} rpm) cannot feed the engine: manifold pressure would fall below ${kpa(floorPressure)} kPa. Choose a smaller blower pulley or a larger blower.`,
+    "blower-too-slow",
+    rpm,
+    "drive.blowerPulleyDiameter",
+  );
+}
+
 /**
  * Solve one engine speed of a prepared combination (unchecked). Finds the lowest pressure
  * ratio at which blower delivery falls to engine demand: the stable balance. Above it the
@@ -232,34 +281,36 @@ export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoi
   const blowerRpm = rpm * p.speedFactor;
   const sweptFlow = (p.vb * blowerRpm) / 60;
   const ve = veAt(c.engine.veCurve, rpm);
-  const engineVolumeRate = (c.engine.displacement * rpm * ve) / 120;
-  const demandFactor = engineVolumeRate / GAS_CONSTANT;
-  const state = newState();
-  const surplus = (pr: number): number => {
-    blowerState(p, sweptFlow, pr, state);
-    return state.massFlow - (state.pm / state.tm) * demandFactor;
+  const k: SurplusContext = {
+    p1: p.p1,
+    ks: p.ks,
+    rho1: p.rho1,
+    t1: p.t1,
+    workOffset: p.workOffset,
+    invVi: p.invVi,
+    eps: p.eps,
+    tcool: p.tcool,
+    dpic: p.dpic,
+    sweptFlow,
+    airPowerPerWorkRatio: (p.p1 * sweptFlow) / c.blower.internalEfficiency,
+    demandFactor: (c.engine.displacement * rpm * ve) / 120 / GAS_CONSTANT,
   };
 
+  // Bracket: scan upward from a floor (manifold at 5 % of inlet pressure) to the first point
+  // where the surplus turns negative, stopping just short of the dead-head ratio.
   const lo = PRESSURE_RATIO_FLOOR_MARGIN + p.dpic / p.p1;
   const deadHead = p.ks > 0 ? 1 + (sweptFlow / p.ks) ** 2 / p.p1 : Number.POSITIVE_INFINITY;
   const ceilingIsDeadHead = deadHead <= PRESSURE_RATIO_CEILING;
   const hi = ceilingIsDeadHead ? 1 + (deadHead - 1) * (1 - 1e-9) : PRESSURE_RATIO_CEILING;
-  const tooSlow = (): CalcConvergenceError =>
-    new CalcConvergenceError(
-      `At ${Math.round(rpm)} rpm the blower (${Math.round(blowerRpm)} rpm) cannot feed the engine: manifold pressure would fall below ${kpa(lo * p.p1 - p.dpic)} kPa. Choose a smaller blower pulley or a larger blower.`,
-      "blower-too-slow",
-      rpm,
-      "drive.blowerPulleyDiameter",
-    );
-  if (hi <= lo) throw tooSlow();
+  if (hi <= lo) throw tooSlowError(rpm, blowerRpm, lo * p.p1 - p.dpic);
   let a = lo;
-  let fa = surplus(lo);
-  if (!(fa > 0)) throw tooSlow();
+  let fa = surplusAt(k, lo);
+  if (!(fa > 0)) throw tooSlowError(rpm, blowerRpm, lo * p.p1 - p.dpic);
   let b = lo < 1 ? 1 : lo * BRACKET_SCAN_FACTOR;
   let fb: number;
   for (;;) {
     if (b >= hi) b = hi;
-    fb = surplus(b);
+    fb = surplusAt(k, b);
     if (!Number.isFinite(fb)) {
       throw new CalcConvergenceError(`At ${Math.round(rpm)} rpm the balance could not be evaluated at pressure ratio ${b.toFixed(3)}.`, "not-converged", rpm);
     }
@@ -267,8 +318,8 @@ export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoi
     if (b === hi) {
       throw new CalcConvergenceError(
         ceilingIsDeadHead
-          ? `At ${Math.round(rpm)} rpm the blower reaches its dead-head pressure ratio (${deadHead.toFixed(2)}) before the engine swallows its delivery: no stable balance. Check the blower data and drive ratio.`
-          : `At ${Math.round(rpm)} rpm no balance exists below pressure ratio ${PRESSURE_RATIO_CEILING}. Check the blower data and drive ratio.`,
+          ? `At ${Math.round(rpm)} rpm the blower reaches its dead-head pressure ratio (${deadHead.toFixed(2)}) before the engine swallows its delivery: the charge heats faster than the engine can take it, so the model finds no stable balance. The blower is far too large or too fast for this engine; check the blower data and drive ratio.`
+          : `At ${Math.round(rpm)} rpm no balance exists below pressure ratio ${PRESSURE_RATIO_CEILING}: the blower is far too large or too fast for this engine. Check the blower data and drive ratio.`,
         "no-balance",
         rpm,
         "drive.blowerPulleyDiameter",
@@ -278,16 +329,19 @@ export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoi
     fa = fb;
     b *= BRACKET_SCAN_FACTOR;
   }
-  const result = brent(surplus, a, b, fa, fb, SOLVER_RELATIVE_TOLERANCE, SOLVER_MAX_ITERATIONS);
-  if (!result.converged) {
+  // Refine in u, where the surplus is smooth through PR = 1 (√ΔP has an infinite slope in PR
+  // there). |δPR| ≤ 2·|PR − 1|·|δu/u|, so the relative tolerance on u bounds the one on PR.
+  const ru = brent(surplusAtU, k, toU(a), toU(b), fa, fb, SOLVER_RELATIVE_TOLERANCE, SOLVER_MAX_ITERATIONS, 1e-16);
+  if (!ru.converged) {
     throw new CalcConvergenceError(
       `At ${Math.round(rpm)} rpm the solver did not converge on a pressure ratio between ${a.toFixed(4)} and ${b.toFixed(4)}.`,
       "not-converged",
       rpm,
     );
   }
-  blowerState(p, sweptFlow, result.root, state);
-  return pointFromState(p, rpm, blowerRpm, ve, result.root, state);
+  const pr = 1 + ru.root * Math.abs(ru.root);
+  const state = blowerState(p, sweptFlow, pr, newState());
+  return pointFromState(p, rpm, blowerRpm, ve, pr, state);
 }
 
 /** Solve every engine speed of a prepared combination (unchecked). */

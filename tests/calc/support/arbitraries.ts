@@ -40,8 +40,8 @@ export const veCurveArb = fc
 
 /**
  * A valid combination within the range the model is meant for: its ideal ratio-rule pressure
- * ratio at a mid VE lies in [1.05, 2.0] (the blower pulley is derived from it) and the blower's
- * internal efficiency is at least 0.75. Far outside that range (a blower sweeping more than
+ * ratio at a mid VE lies in [1.05, 1.8] (the blower pulley is derived from it) and the blower's
+ * internal efficiency is at least 0.8. Far outside that range (a blower sweeping more than
  * about ηint/κ times the engine's flow, no intercooler) the model rightly finds no balance.
  */
 export const combinationArb: fc.Arbitrary<Combination> = fc
@@ -53,10 +53,10 @@ export const combinationArb: fc.Arbitrary<Combination> = fc
     blowerToEngine: fc.double({ min: 0.2, max: 0.6, noNaN: true }),
     etaRef: fc.double({ min: 0.6, max: 0.98, noNaN: true }),
     refRpm: fc.integer({ min: 5000, max: 15_000 }),
-    etaInt: fc.double({ min: 0.75, max: 1, noNaN: true }),
+    etaInt: fc.double({ min: 0.8, max: 1, noNaN: true }),
     etaMech: fc.double({ min: 0.85, max: 1, noNaN: true }),
     crank: fc.double({ min: 0.12, max: 0.25, noNaN: true }),
-    idealPr: fc.double({ min: 1.05, max: 2.0, noNaN: true }),
+    idealPr: fc.double({ min: 1.05, max: 1.8, noNaN: true }),
     beltSlip: fc.double({ min: 0, max: 0.05, noNaN: true }),
     pressure: fc.double({ min: 70_000, max: 105_000, noNaN: true }),
     temperature: fc.double({ min: 260, max: 315, noNaN: true }),
