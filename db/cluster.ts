@@ -145,3 +145,10 @@ export function destroyCluster(cluster: Cluster) {
   cluster.stop();
   fs.rmSync(cluster.dir, { recursive: true, force: true });
 }
+
+/** Stops or starts the server of an existing cluster folder (the fault tests pull the database out from under the app). */
+export function controlCluster(dir: string, action: "stop" | "start") {
+  const bin = ensurePostgres(() => {});
+  if (action === "stop") runPg(bin, "pg_ctl", ["-D", dir, "-m", "immediate", "-w", "stop"], { allowFail: true });
+  else runPg(bin, "pg_ctl", ["-D", dir, "-l", path.join(dir, "server.log"), "-w", "-t", "60", "start"]);
+}

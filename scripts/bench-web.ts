@@ -1,0 +1,81 @@
+// `npm run bench:web`: page weight and speed in Debian's Chromium against a production build.
+// For each main route: the JavaScript it loads on first visit (compressed with gzip, as a server
+// would send it). For the planner: the time from navigation to a drawn boost chart (median of 5).
+//   --skip-build   reuse the last benchmark build (.next-bench)
+import zlib from "node:zlib";
+import { launchBrowser } from "../tests/support/browser";
+import { serveThrowaway, signInCookie } from "./serve-throwaway";
+
+const args = process.argv.slice(2);
+const server = await serveThrowaway({ distDir: ".next-bench", build: !args.includes("--skip-build") });
+const browser = await launchBrowser();
+try {
+  const cookie = await signInCookie(server.url, "tuner@example.com");
+  const list = (await (await fetch(`${server.url}/api/combinations?search=Small-block&pageSize=5`, { headers: { cookie } })).json()) as {
+    items: { id: string; name: string }[];
+  };
+  const demo = list.items.find((c) => c.name.startsWith("Small-block"));
+  if (!demo) throw new Error("the demo small-block combination was not found");
+  const routes = [
+    "/",
+    "/combinations",
+    `/combinations/${demo.id}`,
+    `/combinations/${demo.id}/revisions`,
+    `/compare?items=${demo.id}:1,${demo.id}:2`,
+    "/shelf",
+    "/recommendations",
+    "/datalogs",
+    "/lessons",
+  ];
+  const context = await browser.newContext();
+  await context.addCookies(
+    cookie.split("; ").map((kv) => {
+      const i = kv.indexOf("=");
+      return { name: kv.slice(0, i), value: kv.slice(i + 1), url: server.url };
+    }),
+  );
+
+  console.log("first-load JavaScript per route (gzip -6 of each script the page loads)\n");
+  console.log("route                                   scripts   raw kB   gzip kB");
+  for (const route of routes) {
+    const page = await context.newPage();
+    const bodies: Promise<Buffer | null>[] = [];
+    page.on("response", (r) => {
+      if (r.request().resourceType() === "script") bodies.push(r.body().catch(() => null));
+    });
+    const res = await page.goto(server.url + route, { waitUntil: "networkidle" });
+    const scripts = (await Promise.all(bodies)).filter((b): b is Buffer => !!b);
+    const raw = scripts.reduce((s, b) => s + b.length, 0);
+    const gz = scripts.reduce((s, b) => s + zlib.gzipSync(b, { level: 6 }).length, 0);
+    const label = route.replace(demo.id, ":id").replace(demo.id, ":id").slice(0, 38);
+    console.log(`${label.padEnd(39)} ${String(scripts.length).padStart(7)} ${(raw / 1024).toFixed(0).padStart(8)} ${(gz / 1024).toFixed(0).padStart(9)}${res && res.status() >= 400 ? `   (HTTP ${res.status()})` : ""}${route.includes(demo.id) && route.split("/").length === 3 ? (gz / 1024 < 250 ? "   planner target < 250 kB: met" : "   planner target < 250 kB: NOT met") : ""}`);
+    await page.close();
+  }
+
+  const times: number[] = [];
+  for (let i = 0; i < 5; i++) {
+    const page = await context.newPage();
+    const t0 = Date.now();
+    await page.goto(`${server.url}/combinations/${demo.id}`, { waitUntil: "commit" });
+    // Drawn = a chart canvas with pixels on it.
+    await page.waitForFunction(
+      () =>
+        [...document.querySelectorAll("canvas")].some((c) => {
+          const ctx = (c as HTMLCanvasElement).getContext("2d");
+          if (!ctx || c.width === 0) return false;
+          const d = ctx.getImageData(0, 0, c.width, c.height).data;
+          for (let j = 3; j < d.length; j += 16) if (d[j] !== 0) return true;
+          return false;
+        }),
+      undefined,
+      { timeout: 30_000, polling: 16 },
+    );
+    times.push(Date.now() - t0);
+    await page.close();
+  }
+  times.sort((a, b) => a - b);
+  console.log(`\nplanner: navigation to a drawn chart, median of 5: ${times[2]} ms (min ${times[0]}, max ${times[4]})`);
+} finally {
+  await browser.close();
+  await server.stop();
+}
