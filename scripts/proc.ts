@@ -1,5 +1,6 @@
 // Small process helpers shared by the start, test and bench scripts.
 import { spawn, type ChildProcess } from "node:child_process";
+import fs from "node:fs";
 import path from "node:path";
 
 /** Extra environment variables for a child process. */
@@ -49,6 +50,20 @@ export async function waitForHttp(url: string, timeoutMs = 60_000) {
     await new Promise((r) => setTimeout(r, 250));
   }
   throw new Error(`${url} did not answer within ${timeoutMs / 1000} s`);
+}
+
+/**
+ * `next build`, leaving tsconfig.json as committed: Next adds its build folder's type paths to
+ * it, and each test or bench build folder would otherwise pile up there.
+ */
+export async function buildNext(env: Env, opts: { quiet?: boolean } = {}): Promise<number> {
+  const tsconfig = path.join(root, "tsconfig.json");
+  const saved = fs.readFileSync(tsconfig, "utf8");
+  try {
+    return await run(process.execPath, [nextBin, "build"], { env, quiet: opts.quiet });
+  } finally {
+    fs.writeFileSync(tsconfig, saved);
+  }
 }
 
 /** Environment for `next build` / `next start`: telemetry off, our own build folder when asked. */

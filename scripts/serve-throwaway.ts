@@ -9,7 +9,7 @@ import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { seedDemo } from "../db/seed";
 import { startMailFake } from "./mail-fake";
-import { nextBin, nextEnv, root, run, startNext, stopGroup, waitForHttp } from "./proc";
+import { buildNext, nextEnv, root, startNext, stopGroup, waitForHttp } from "./proc";
 
 export async function serveThrowaway(opts: { distDir: string; build: boolean }) {
   const workDir = fs.mkdtempSync(path.join(os.tmpdir(), "pw-bench-"));
@@ -33,7 +33,7 @@ export async function serveThrowaway(opts: { distDir: string; build: boolean }) 
     MAIL_FAKE_URL: mail.inboxUrl,
   });
   if (opts.build || !fs.existsSync(path.join(root, opts.distDir, "BUILD_ID"))) {
-    const code = await run(process.execPath, [nextBin, "build"], { env, quiet: true });
+    const code = await buildNext(env, { quiet: true });
     if (code !== 0) throw new Error("next build failed");
   }
   const app = startNext({ port, host: "127.0.0.1", env, quiet: true });

@@ -8,7 +8,7 @@ import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from "../db/seed";
 import { startMailFake, type MailFake } from "./mail-fake";
-import { nextBin, nextEnv, root, run, startNext, stopGroup } from "./proc";
+import { buildNext, nextEnv, root, startNext, stopGroup } from "./proc";
 
 const dataDir = path.resolve(process.env.PW_DATA_DIR ?? path.join(root, ".data"));
 const port = Number(process.env.PORT ?? 3000);
@@ -91,7 +91,7 @@ async function main() {
   });
   if (process.env.PW_SKIP_BUILD !== "1") {
     console.log("Building the app (next build) …");
-    const code = await run(process.execPath, [nextBin, "build"], { env });
+    const code = await buildNext(env);
     if (code !== 0) {
       console.error("The build failed.");
       return shutdown(1);

@@ -18,7 +18,7 @@ import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { seedDemo } from "../db/seed";
 import { startMailFake, type MailFake } from "./mail-fake";
-import { nextBin, nextEnv, root, run, startNext, stopGroup, waitForHttp, type Env } from "./proc";
+import { buildNext, nextEnv, root, run, startNext, stopGroup, waitForHttp, type Env } from "./proc";
 
 const argv = process.argv.slice(2);
 const flags = new Set(argv.filter((a) => a.startsWith("--")));
@@ -146,7 +146,7 @@ async function main() {
     });
     if (!flags.has("--skip-build") || !fs.existsSync(path.join(root, distDir, "BUILD_ID"))) {
       console.log(`\n▶ next build (into ${distDir})`);
-      const code = await run(process.execPath, [nextBin, "build"], { env });
+      const code = await buildNext(env);
       if (code !== 0) {
         tally.failed++;
         problems.push("next build failed");

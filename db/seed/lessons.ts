@@ -1,8 +1,79 @@
+import { and, eq } from "drizzle-orm";
 import type { Db } from "../connect";
+import { addStep, createLesson, updateLesson } from "../repo/lessons";
+import { lessons } from "../schema";
 import type { DemoCombinations } from "./combinations";
 import type { DemoUsers } from "./index";
 
-// PLACEHOLDER: the demo lessons are added by the work on that capability.
+/** The demo lesson's fixed class code, named in the README so a class can try it at once. */
+export const DEMO_CLASS_CODE = "DEMO42";
+export const DEMO_LESSON_TITLE = "What a blower pulley and a head-and-cam change do";
+
+const STEP_1_NOTE = `Two engines, two kinds of blower. Look at the **boost** line of each one.
+
+- The small-block's **Roots** blower makes more boost the faster the engine turns.
+- The big V8's **twin-screw** squeezes the air inside the blower, so its boost stays much flatter across the rev range.
+
+Boost is not a dial on the blower: it is what is left over when the blower pushes more air than the engine can swallow.`;
+
+const STEP_2_NOTE = `Same blower, same pulleys. Only the **heads and cam** changed.
+
+- The engine now breathes better, so it swallows more of the air the blower pushes.
+- Less air is left over, so **boost falls** through the middle and the top of the rev range.
+- Yet **power rises**: more air goes through the engine, and the blower works less hard to make it.
+
+A lower boost figure after a head or cam job is not a fault. Judge the engine by power, not by the gauge.`;
+
+const STEP_3_NOTE = `Heads and cam as before, now with a **smaller blower pulley**.
+
+- A smaller blower pulley spins the blower faster at every engine speed (a higher drive ratio).
+- The blower pushes more air, so **boost rises everywhere**, and power with it.
+- Watch the **blower speed** at redline: it must stay under the blower maker's limit. Check belt wrap and fit before you order a smaller pulley.
+
+Try the slider: move the blower pulley and see how far the boost moves for each size.`;
+
+/** A published demo lesson by the instructor, on the demo small-block's three revisions. Idempotent by owner and title. */
 export async function seedLessons(db: Db, people: DemoUsers, combos: DemoCombinations) {
-  void [db, people, combos];
+  const instructor = people.instructor;
+  const [existing] = await db.select({ id: lessons.id }).from(lessons).where(and(eq(lessons.ownerId, instructor.id), eq(lessons.title, DEMO_LESSON_TITLE)));
+  if (existing) return existing.id;
+
+  const lesson = await createLesson(db, instructor, {
+    title: DEMO_LESSON_TITLE,
+    summary: "Baseline, then better heads and cam, then a smaller blower pulley: what each does to boost and power.",
+  });
+  // The fixed code lets the README say which code to type; skip it if someone already took it.
+  const [taken] = await db.select({ id: lessons.id }).from(lessons).where(eq(lessons.classCode, DEMO_CLASS_CODE));
+  if (!taken) await db.update(lessons).set({ classCode: DEMO_CLASS_CODE }).where(eq(lessons.id, lesson.id));
+
+  const sb = combos.smallBlock;
+  await addStep(db, instructor, lesson.id, {
+    title: "Roots and twin-screw: how boost builds",
+    items: [
+      { combinationId: sb, revision: 1, label: "Small-block, Roots" },
+      { combinationId: combos.bigBlock, revision: 1, label: "Big V8, twin-screw" },
+    ],
+    series: ["boost", "netPower"],
+    note: STEP_1_NOTE,
+  });
+  await addStep(db, instructor, lesson.id, {
+    title: "Better heads and cam: boost falls, power rises",
+    items: [
+      { combinationId: sb, revision: 1, label: "Baseline" },
+      { combinationId: sb, revision: 2, label: "Heads and cam" },
+    ],
+    series: ["boost", "netPower"],
+    note: STEP_2_NOTE,
+  });
+  await addStep(db, instructor, lesson.id, {
+    title: "A smaller blower pulley: boost rises everywhere",
+    items: [
+      { combinationId: sb, revision: 2, label: "Heads and cam" },
+      { combinationId: sb, revision: 3, label: "Smaller pulley" },
+    ],
+    series: ["boost", "netPower", "blowerSpeed"],
+    note: STEP_3_NOTE,
+  });
+  await updateLesson(db, instructor, lesson.id, { published: true });
+  return lesson.id;
 }

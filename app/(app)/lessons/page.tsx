@@ -1,0 +1,93 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { requirePageUser } from "@/app/_lib/session";
+import { getDb } from "@/db/client";
+import { canAuthorLessons } from "@/db/policy";
+import { listLessons } from "@/db/repo/lessons";
+import { toActor } from "@/db/repo/users";
+import { NewLessonForm } from "./new-lesson-form";
+
+export const metadata: Metadata = { title: "Lessons" };
+
+export default async function LessonsPage() {
+  const user = await requirePageUser();
+  const actor = toActor(user);
+  const author = canAuthorLessons(actor);
+  const { authored, joined } = await listLessons(getDb(), actor);
+
+  return (
+    <div className="flex flex-col gap-8">
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h1 className="text-2xl font-semibold">Lessons</h1>
+        <Link href="/lessons/join" className="rounded-md border border-line bg-panel px-3 py-1.5 text-sm font-medium hover:bg-bg">
+          Join a lesson with a class code
+        </Link>
+      </div>
+
+      {author ? (
+        <section aria-labelledby="mine" className="flex flex-col gap-4">
+          <h2 id="mine" className="text-lg font-semibold">
+            {actor.role === "admin" ? "All lessons" : "Your lessons"}
+          </h2>
+          <NewLessonForm />
+          {authored.length === 0 ? (
+            <p className="text-sm text-muted">No lessons yet. Give the first one a title above.</p>
+          ) : (
+            <table className="w-full border-collapse text-sm">
+              <thead>
+                <tr className="border-b border-line text-left">
+                  <th scope="col" className="py-2 pr-3 font-medium">Title</th>
+                  {actor.role === "admin" ? <th scope="col" className="py-2 pr-3 font-medium">Instructor</th> : null}
+                  <th scope="col" className="py-2 pr-3 font-medium">Steps</th>
+                  <th scope="col" className="py-2 pr-3 font-medium">Status</th>
+                  <th scope="col" className="py-2 pr-3 font-medium">Class code</th>
+                  <th scope="col" className="py-2 font-medium"><span className="sr-only">Actions</span></th>
+                </tr>
+              </thead>
+              <tbody>
+                {authored.map((l) => (
+                  <tr key={l.id} className="border-b border-line">
+                    <td className="py-2 pr-3">
+                      <Link href={`/lessons/${l.id}/edit`} className="font-medium hover:underline">{l.title}</Link>
+                    </td>
+                    {actor.role === "admin" ? <td className="py-2 pr-3">{l.ownerName}</td> : null}
+                    <td className="py-2 pr-3 tabular-nums">{l.steps}</td>
+                    <td className="py-2 pr-3">{l.published ? <span className="text-ok">Published</span> : <span className="text-muted">Draft</span>}</td>
+                    <td className="py-2 pr-3 font-mono tracking-widest">{l.classCode}</td>
+                    <td className="py-2 text-right whitespace-nowrap">
+                      <Link href={`/lessons/${l.id}/edit`} className="mr-3 text-accent hover:underline">Edit</Link>
+                      <Link href={`/classroom/${l.id}`} className="text-accent hover:underline">Classroom view</Link>
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          )}
+        </section>
+      ) : null}
+
+      <section aria-labelledby="joined" className="flex flex-col gap-3">
+        <h2 id="joined" className="text-lg font-semibold">
+          Lessons you joined
+        </h2>
+        {joined.length === 0 ? (
+          <p className="text-sm text-muted">
+            None yet. Your instructor gives the class a short code; <Link href="/lessons/join" className="text-accent underline">type it here</Link> to join.
+          </p>
+        ) : (
+          <ul className="flex flex-col gap-2">
+            {joined.map((l) => (
+              <li key={l.id} className="rounded-lg border border-line bg-panel p-3">
+                <Link href={`/classroom/${l.id}`} className="font-medium text-accent hover:underline">{l.title}</Link>
+                <p className="text-sm text-muted">
+                  {l.ownerName} · {l.steps} {l.steps === 1 ? "step" : "steps"}
+                </p>
+                {l.summary ? <p className="mt-1 text-sm">{l.summary}</p> : null}
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
+    </div>
+  );
+}

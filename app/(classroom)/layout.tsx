@@ -1,0 +1,31 @@
+import Link from "next/link";
+import { requirePageUser } from "@/app/_lib/session";
+import { Logo } from "@/components/logo";
+import { FullscreenButton } from "@/components/lessons/fullscreen-button";
+import { ThemeSwitch } from "@/components/theme-switch";
+
+/** The classroom: no app navigation, large type, made to be read from the back of a room. */
+export default async function ClassroomLayout({ children }: { children: React.ReactNode }) {
+  await requirePageUser();
+  return (
+    <div className="flex min-h-screen flex-col text-lg">
+      <header className="border-b border-line bg-panel">
+        <div className="flex flex-wrap items-center gap-4 px-6 py-2 text-sm">
+          <Link href="/lessons" aria-label="Back to lessons">
+            <Logo />
+          </Link>
+          <Link href="/lessons" className="hover:underline">
+            ← Lessons
+          </Link>
+          <div className="ml-auto flex items-center gap-3">
+            <ThemeSwitch />
+            <FullscreenButton />
+          </div>
+        </div>
+      </header>
+      <main id="main" className="w-full flex-1 px-6 py-6">
+        {children}
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,164 @@
+// Lessons end to end: the instructor builds a three-step lesson from the shop's demo combinations
+// through the UI and publishes it; a member joins with the class code, steps through it with the
+// keyboard, moves the what-if slider and copies an item into their own combinations. Then the REST
+// routes' role rules and bad input.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
+import { Client, signedIn } from "../support/http";
+
+const SMALL_BLOCK = "Small-block 5.0 L street build";
+const BIG_V8 = "Big V8 7.0 L twin-screw, intercooled";
+
+type Item = { combination: string; revision: string; label: string };
+
+async function addStep(page: Page, title: string, items: Item[]) {
+  const form = page.getByRole("form", { name: "Add a step" });
+  await form.getByLabel("Step title").fill(title);
+  for (const [i, it] of items.entries()) {
+    if (i >= 2) await form.getByRole("button", { name: "Add an item" }).click();
+    await form.getByLabel(`Combination ${i + 1}`).selectOption({ label: it.combination });
+    await form.getByLabel(`Revision ${i + 1}`).selectOption(it.revision);
+    await form.getByLabel(`Label ${i + 1}`).fill(it.label);
+  }
+  await form.getByRole("button", { name: "Add step" }).click();
+  await page.getByRole("listitem", { name: new RegExp(`^Step \\d+: ${title}$`) }).waitFor({ timeout: 30_000 });
+}
+
+describe("lessons in Chromium", () => {
+  let browser: Browser;
+  const title = `Pulley class ${Date.now().toString(36)}`;
+  let lessonId = "";
+  let classCode = "";
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it("an instructor builds a three-step lesson from demo combinations and publishes it", async () => {
+    const context = await browser.newContext();
+    const page = await signIn(context, "instructor@example.com");
+    const errors = watchErrors(page);
+    await page.goto(`${BASE_URL}/lessons`, { waitUntil: "networkidle" });
+    await page.getByLabel("New lesson title").fill(title);
+    await page.getByRole("button", { name: "Create lesson" }).click();
+    await page.waitForURL(/\/lessons\/[0-9a-f-]{36}\/edit$/, { timeout: 30_000 });
+    await page.waitForLoadState("networkidle");
+    lessonId = new URL(page.url()).pathname.split("/")[2];
+
+    await addStep(page, "Two engines", [
+      { combination: SMALL_BLOCK, revision: "1", label: "Small-block" },
+      { combination: BIG_V8, revision: "current", label: "Big V8" },
+    ]);
+    await addStep(page, "Pulley change", [
+      { combination: SMALL_BLOCK, revision: "2", label: "Heads and cam" },
+      { combination: SMALL_BLOCK, revision: "3", label: "Smaller pulley" },
+    ]);
+    await addStep(page, "Heads and cam", [
+      { combination: SMALL_BLOCK, revision: "1", label: "Baseline" },
+      { combination: SMALL_BLOCK, revision: "2", label: "Heads and cam" },
+      { combination: SMALL_BLOCK, revision: "3", label: "Smaller pulley" },
+    ]);
+    // Put "Heads and cam" before "Pulley change" with the keyboard.
+    const moveUp = page.getByRole("button", { name: "Move step 3 up" });
+    await moveUp.focus();
+    await page.keyboard.press("Enter");
+    await expect
+      .poll(() => page.getByRole("listitem", { name: /^Step \d+:/ }).evaluateAll((els) => els.map((e) => e.getAttribute("aria-label"))), { timeout: 15_000 })
+      .toEqual(["Step 1: Two engines", "Step 2: Heads and cam", "Step 3: Pulley change"]);
+
+    await page.getByRole("button", { name: "Publish", exact: true }).click();
+    await expect.poll(() => page.getByTestId("lesson-status").textContent(), { timeout: 15_000 }).toContain("Published");
+    classCode = ((await page.getByTestId("class-code").textContent()) ?? "").trim();
+    expect(classCode).toMatch(/^[A-Z2-9]{6}$/);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it("a member joins with the code, steps with the keyboard, moves the what-if slider and copies an item", async () => {
+    expect(classCode).not.toBe("");
+    const context = await browser.newContext();
+    const page = await signIn(context, "member@example.com");
+    const errors = watchErrors(page);
+    await page.goto(`${BASE_URL}/lessons/join`, { waitUntil: "networkidle" });
+    await page.getByLabel("Class code").fill(classCode.toLowerCase());
+    await page.getByRole("button", { name: "Join" }).click();
+    await page.waitForURL(new RegExp(`/classroom/${lessonId}`), { timeout: 30_000 });
+    // Keyboard navigation is on once the view has hydrated.
+    await page.locator("[data-keys=on]").waitFor({ timeout: 30_000 });
+
+    const counter = page.getByTestId("step-counter");
+    await expect.poll(() => counter.textContent()).toBe("Step 1 of 3");
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Two engines");
+    // Read-only: no edit link, and the editor is closed to a member.
+    expect(await page.getByRole("link", { name: "Edit this lesson" }).count()).toBe(0);
+
+    await page.keyboard.press("ArrowRight");
+    await expect.poll(() => counter.textContent()).toBe("Step 2 of 3");
+    await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Heads and cam");
+    await page.keyboard.press("End");
+    await expect.poll(() => counter.textContent()).toBe("Step 3 of 3");
+    await page.getByRole("button", { name: "← Previous" }).click();
+    await expect.poll(() => counter.textContent()).toBe("Step 2 of 3");
+
+    // The what-if slider: a smaller pulley for all items raises the boost in the table.
+    const table = page.getByTestId("deltas-table");
+    const before = await table.textContent();
+    const slider = page.getByLabel(/Blower pulley diameter/);
+    await slider.focus();
+    for (let i = 0; i < 6; i++) await page.keyboard.press("ArrowLeft");
+    await expect.poll(() => table.textContent()).not.toBe(before);
+    // Arrow keys on the slider move the slider, not the step.
+    expect(await counter.textContent()).toBe("Step 2 of 3");
+    const boostOf = (text: string | null) => Number(/Heads and cam([\d.]+) (?:psi|kPa)/.exec(text ?? "")?.[1]);
+    const [was, now] = [boostOf(before), boostOf(await table.textContent())];
+    expect(Number.isFinite(was)).toBe(true);
+    expect(now).toBeGreaterThan(was);
+
+    // Copy the second item into the member's own combinations.
+    await page.getByRole("button", { name: "Copy “Heads and cam” to my combinations" }).click();
+    const open = page.getByRole("link", { name: "Open in the planner" });
+    await open.waitFor({ timeout: 30_000 });
+    const href = (await open.getAttribute("href")) ?? "";
+    expect(href).toMatch(/^\/combinations\/[0-9a-f-]{36}$/);
+    const res = await context.request.get(`${BASE_URL}/api${href}`);
+    expect(res.status()).toBe(200);
+    const copy = (await res.json()) as { name: string; spec: { drive: { blowerPulleyDiameter: number } } };
+    expect(copy.name).toBe(`Heads and cam (from lesson ${title})`);
+    expect(copy.spec.drive.blowerPulleyDiameter).toBeCloseTo(3.4 * 0.0254, 9); // demo revision 2 keeps the 3.4 in pulley (db/seed/demo-specs.ts)
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it("the REST routes keep the role rules and name bad fields", async () => {
+    const anon = new Client();
+    expect((await anon.json("/api/lessons")).status).toBe(401);
+
+    const member = await signedIn("member@example.com");
+    expect((await member.json("/api/lessons", "POST", { title: "Not mine to make" })).status).toBe(403);
+    expect((await member.json(`/api/lessons/${lessonId}`, "PATCH", { title: "Taken over" })).status).toBe(403);
+    const seen = await member.json(`/api/lessons/${lessonId}`);
+    expect(seen.status).toBe(200);
+    expect(seen.data.canEdit).toBe(false);
+    expect(seen.data.classCode).toBeNull();
+    const wrong = await member.json("/api/lessons/join", "POST", { code: "ZZZZZZ" });
+    expect(wrong.status).toBe(400);
+    expect(wrong.data.fieldErrors.code[0]).toMatch(/No such published lesson/);
+
+    const tuner = await signedIn("tuner@example.com");
+    expect((await tuner.json(`/api/lessons/${lessonId}`)).status).toBe(404);
+
+    const instructor = await signedIn("instructor@example.com");
+    const bad = await instructor.json(`/api/lessons/${lessonId}/steps`, "POST", { title: "", items: [], series: ["lap time"] });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.data.fieldErrors)).toEqual(expect.arrayContaining(["title", "items", "series.0"]));
+    expect((await instructor.json("/api/lessons", "POST", "{not json")).status).toBe(400);
+    const made = await instructor.json("/api/lessons", "POST", { title: "Scratch lesson" });
+    expect(made.status).toBe(201);
+    expect((await instructor.json(`/api/lessons/${made.data.id}`, "DELETE")).status).toBe(204);
+    expect((await instructor.json(`/api/lessons/${made.data.id}`)).status).toBe(404);
+  });
+});
