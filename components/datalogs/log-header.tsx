@@ -1,0 +1,44 @@
+import Link from "next/link";
+import type { UnitSystem } from "@/calc";
+import type { LogAmbient } from "@/app/_lib/datalog-parse";
+import { withUnit } from "./format";
+
+export type LogHeaderProps = {
+  title: string;
+  log: { id: string; name: string; fileName: string; revision: number; pointCount: number; createdAt: Date };
+  combination: { id: string; name: string; revision: number };
+  ambient: LogAmbient;
+  unitSystem: UnitSystem;
+};
+
+/** What the log is: its file, the combination and revision it was logged with, and the conditions. */
+export function LogHeader({ title, log, combination, ambient, unitSystem }: LogHeaderProps) {
+  return (
+    <header className="flex flex-col gap-2">
+      <p className="text-sm">
+        <Link href="/datalogs" className="text-muted hover:underline">
+          ← Datalogs
+        </Link>
+      </p>
+      <h1 className="text-2xl font-semibold">{title}</h1>
+      <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm">
+        <dt className="text-muted">File</dt>
+        <dd>
+          {log.fileName} · {log.pointCount.toLocaleString("en-US")} samples · uploaded {log.createdAt.toISOString().slice(0, 10)}
+        </dd>
+        <dt className="text-muted">Combination</dt>
+        <dd>
+          <Link href={`/combinations/${combination.id}`} className="underline-offset-2 hover:underline">
+            {combination.name}
+          </Link>
+          , logged with revision {log.revision}
+          {combination.revision !== log.revision ? <span className="text-muted"> (now at revision {combination.revision})</span> : null}
+        </dd>
+        <dt className="text-muted">Conditions</dt>
+        <dd>
+          barometer {withUnit("pressure", ambient.pressure, unitSystem)} absolute, air {withUnit("temperature", ambient.temperature, unitSystem)}
+        </dd>
+      </dl>
+    </header>
+  );
+}
