@@ -97,10 +97,26 @@ export class TooManyBinsError extends Error {
   }
 }
 
-/** The current spec with the fitted VE curve: the engine as measured, everything else as it is now. */
+/**
+ * The current spec with the fitted VE curve: the engine as measured, everything else as it is now.
+ * Outside the logged speeds the log says nothing, so the stored curve's shape is kept there,
+ * scaled to join the fit at its ends (holding the end value flat would, for a log that stops short
+ * of redline, predict a boost at redline that nothing measured).
+ */
 export function withFittedVe(current: CombinationInput, veCurve: readonly VePoint[]): Combination {
   const c = combinationSchema.parse(current);
-  return { ...c, engine: { ...c.engine, veCurve: veCurve.map((p) => ({ rpm: p.rpm, ve: p.ve })) } };
+  const fitted = [...veCurve].sort((a, b) => a.rpm - b.rpm);
+  if (fitted.length === 0) return c;
+  const first = fitted[0];
+  const last = fitted[fitted.length - 1];
+  const old = c.engine.veCurve;
+  const lowScale = first.ve / veAt(old, first.rpm);
+  const highScale = last.ve / veAt(old, last.rpm);
+  const below = old.filter((p) => p.rpm < first.rpm).map((p) => ({ rpm: p.rpm, ve: p.ve * lowScale }));
+  const above = old.filter((p) => p.rpm > last.rpm).map((p) => ({ rpm: p.rpm, ve: p.ve * highScale }));
+  const room = MAX_VE_POINTS - fitted.length;
+  const merged = [...below.slice(-Math.max(0, Math.floor(room / 2))), ...fitted.map((p) => ({ rpm: p.rpm, ve: p.ve })), ...above.slice(0, Math.max(0, Math.ceil(room / 2)))];
+  return { ...c, engine: { ...c.engine, veCurve: merged.map((p) => ({ rpm: p.rpm, ve: Math.min(2, Math.max(0.2, p.ve)) })) } };
 }
 
 /** The current blower pulley and the next smaller sizes, in 0.1 in (2.54 mm) steps (m). */

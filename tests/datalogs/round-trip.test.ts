@@ -3,7 +3,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { combinationSchema, veAt, type VePoint } from "@/calc";
+import { combinationSchema, exampleCombination, veAt, type VePoint } from "@/calc";
 import { cleanLog, guessLayout, guessMapping, parseLog } from "@/app/_lib/datalog-parse";
 import { compareBins, fitVe, pulleyComparison, smallerPulleys, specAsLogged, withFittedVe } from "@/components/datalogs/analysis";
 import { DEMO_DATALOG_MAPPING, demoDatalogCsv, demoTrueVeCurve, synthesizeLogCsv } from "@/db/seed/datalogs";
@@ -86,5 +86,19 @@ describe("the demo log", () => {
     expect(cleaned.counts).toMatchObject({ partThrottle: 8 });
     expect(cleaned.counts.outliers).toBeGreaterThanOrEqual(2);
     expect(worst(fit, demoTrueVeCurve())).toBeLessThan(0.02);
+  });
+});
+
+describe("the fitted engine beyond the logged speeds", () => {
+  it("keeps the stored curve's shape past the log, joined to the fit at its ends", () => {
+    const spec = exampleCombination();
+    const redline = spec.engine.redlineRpm;
+    // A fit that covers only the middle of the range, 5 % above the stored curve.
+    const fit = [3000, 3500, 4000].map((rpm) => ({ rpm, ve: veAt(spec.engine.veCurve, rpm) * 1.05 }));
+    const out = withFittedVe(spec, fit);
+    // Inside the log: the fit itself.
+    for (const p of fit) expect(veAt(out.engine.veCurve, p.rpm)).toBeCloseTo(p.ve, 12);
+    // Past it: the stored shape scaled by the same 5 % at the joining end (not held flat).
+    expect(veAt(out.engine.veCurve, redline)).toBeCloseTo(veAt(spec.engine.veCurve, redline) * 1.05, 9);
   });
 });

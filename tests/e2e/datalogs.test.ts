@@ -175,17 +175,18 @@ describe("upload, overlay, calibrate and the ladder in Chromium", () => {
     // The saved revision holds the fitted curve, and the planner's ladder uses it.
     const saved = await getCombination(db, await actorFor("tuner@example.com"), combo.id);
     expect(saved.revision).toBe(2);
-    expect(saved.spec.engine.veCurve).toHaveLength(16);
+    // 16 fitted bins, plus the stored curve's points outside the logged speeds (its shape, scaled to join the fit).
+    expect(saved.spec.engine.veCurve.length).toBeGreaterThanOrEqual(16);
     await page.getByRole("link", { name: "See the pulley ladder with the measured engine" }).click();
     await page.waitForURL(new RegExp(`/combinations/${combo.id}$`));
     await currentRow.waitFor({ timeout: 30_000 });
     const after = Number(await currentRow.getAttribute("data-boost-redline-pa"));
     expect(Number(await currentRow.getAttribute("data-diameter-m"))).toBe(diameter);
     expect(Math.abs(after / redlineBoost(combinationSchema.parse(saved.spec), diameter) - 1)).toBeLessThan(1e-3);
-    // The log stops near 5900 rpm and the fitted curve is held flat past it, so at redline the
-    // measured engine breathes better than the stored curve (VE ≈ 0.99 against 0.92, invented demo
-    // data): a better-breathing engine makes less boost on the same pulley (design.md trade fact).
-    expect(before - after).toBeGreaterThan(7000);
+    // The invented "true" engine of the demo log breathes a few per cent better than the stored
+    // curve near the top (the calibrated curve carries that past the log's last speed), and a
+    // better-breathing engine makes less boost on the same pulley (design.md trade fact).
+    expect(before - after).toBeGreaterThan(2000);
     expect(calibrationErrors).toEqual([]);
     await context.close();
   });
