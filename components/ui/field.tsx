@@ -19,7 +19,12 @@ export function Field({ label, name, unit, hint, errors, id, className = "", ...
     <div className={`flex flex-col gap-1 ${className}`}>
       <label htmlFor={inputId} className="text-sm font-medium">
         {label}
-        {unit ? <span className="ml-1 font-normal text-muted">({unit})</span> : null}
+        {unit ? (
+          <>
+            {" "}
+            <span className="font-normal text-muted">({unit})</span>
+          </>
+        ) : null}
       </label>
       <input
         id={inputId}

@@ -1,0 +1,59 @@
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { combinationSchema, type Combination } from "@/calc";
+import { requirePageUser } from "@/app/_lib/session";
+import { readPlannerShelf } from "@/components/planner/shelf-read";
+import { getDb } from "@/db/client";
+import { NotFoundError } from "@/db/errors";
+import { canWriteOwned } from "@/db/policy";
+import { getCombination } from "@/db/repo/combinations";
+import { toActor } from "@/db/repo/users";
+import { duplicateToEdit, savePlannerUnits, saveRevision } from "./actions";
+import { Planner } from "./planner";
+
+export async function generateMetadata({ params }: { params: Promise<{ id: string }> }) {
+  void params;
+  return { title: "Planner · Pulleywright" };
+}
+
+export default async function PlannerPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const user = await requirePageUser();
+  const actor = toActor(user);
+  const db = getDb();
+  const [row, shelf] = await Promise.all([
+    getCombination(db, actor, id).catch((e: unknown) => {
+      if (e instanceof NotFoundError) notFound();
+      throw e;
+    }),
+    readPlannerShelf(db, actor),
+  ]);
+  // Stored specs were validated on save; parsing again fills defaults added since.
+  const parsed = combinationSchema.safeParse(row.spec);
+  const spec: Combination = parsed.success ? parsed.data : row.spec;
+  const canWrite = canWriteOwned(actor, row.ownerId);
+  return (
+    <div className="flex flex-col gap-4">
+      <nav aria-label="Breadcrumb" className="text-sm text-muted">
+        <Link href="/combinations" className="hover:underline">
+          Combinations
+        </Link>{" "}
+        / <span aria-current="page">{row.name}</span>
+      </nav>
+      <Planner
+        key={row.id}
+        combinationId={row.id}
+        name={row.name}
+        revision={row.revision}
+        isDemo={row.isDemo}
+        spec={spec}
+        unitSystem={user.unitSystem}
+        canWrite={canWrite}
+        shelf={shelf}
+        save={saveRevision.bind(null, row.id)}
+        duplicate={duplicateToEdit.bind(null, row.id)}
+        saveUnits={savePlannerUnits}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,45 @@
+// The cautions beside every result: the model's own warnings, most serious first, and always
+// the general safety notice. Plain markup, so it prints black on white with the page.
+import { SAFETY_NOTICE, type Caution, type CautionSeverity } from "@/calc";
+
+const WORD: Record<CautionSeverity, string> = { danger: "Danger", warning: "Warning", info: "Note" };
+const ORDER: Record<CautionSeverity, number> = { danger: 0, warning: 1, info: 2 };
+const TONE: Record<CautionSeverity, string> = {
+  danger: "border-danger bg-danger-bg text-danger",
+  warning: "border-warn bg-warn-bg text-warn",
+  info: "border-line bg-panel text-fg",
+};
+
+export type CautionsPanelProps = { cautions: readonly Caution[]; compact?: boolean };
+
+export function CautionsPanel({ cautions, compact = false }: CautionsPanelProps) {
+  // The "general" caution repeats the safety notice, which is listed below in full.
+  const specific = cautions.filter((c) => c.code !== "general").sort((a, b) => ORDER[a.severity] - ORDER[b.severity]);
+  return (
+    <section aria-labelledby="cautions-heading" className="flex flex-col gap-2 break-inside-avoid" data-testid="cautions-panel">
+      <h2 id="cautions-heading" className={compact ? "text-sm font-semibold" : "text-base font-semibold"}>
+        Cautions
+      </h2>
+      {specific.length === 0 ? (
+        <p className="text-sm text-muted">The model raises no specific caution for this combination.</p>
+      ) : (
+        <ul className="flex flex-col gap-1.5">
+          {specific.map((c, i) => (
+            <li key={`${c.code}-${i}`} data-severity={c.severity} className={`rounded-md border px-2.5 py-1.5 text-sm print:border-black print:bg-white print:text-black ${TONE[c.severity]}`}>
+              <span className="font-semibold">{WORD[c.severity]}: </span>
+              {c.message}
+            </li>
+          ))}
+        </ul>
+      )}
+      <div className="text-xs text-muted print:text-black">
+        <p className="font-medium">Always</p>
+        <ul className={`list-disc pl-4 ${compact ? "" : "flex flex-col gap-0.5"}`}>
+          {SAFETY_NOTICE.map((line) => (
+            <li key={line}>{line}</li>
+          ))}
+        </ul>
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,281 @@
+"use client";
+// Curves against engine speed: one y axis per kind of quantity, colour-blind-safe colours,
+// a redline marker and the blower speed limit. Only the chart.js parts used are registered,
+// to keep the planner's bundle small. Screen readers get the same numbers in a hidden table.
+import {
+  Chart as ChartJS,
+  Legend,
+  LinearScale,
+  LineController,
+  LineElement,
+  PointElement,
+  Tooltip,
+  type ChartDataset,
+  type ChartOptions,
+  type Plugin,
+  type ScaleOptions,
+} from "chart.js";
+import { useEffect, useId, useMemo, useState, type JSX } from "react";
+import { Line } from "react-chartjs-2";
+import type { OperatingPoint, UnitSystem } from "@/calc";
+import {
+  axisDigits,
+  axisUnit,
+  DASHES,
+  exposeSeries,
+  METRICS,
+  metricDisplay,
+  metricValue,
+  OKABE_ITO,
+  PRINT_GREYS,
+  type AxisKind,
+  type CurveMetric,
+} from "./metrics";
+
+ChartJS.register(LineController, LineElement, PointElement, LinearScale, Tooltip, Legend);
+
+export type { CurveMetric } from "./metrics";
+
+export type CurveSeries = { label: string; points: OperatingPoint[]; dashed?: boolean; colorIndex?: number };
+
+export type CurveChartProps = {
+  series: CurveSeries[];
+  metrics: CurveMetric[];
+  unitSystem: UnitSystem;
+  redlineRpm?: number;
+  blowerMaxRpm?: number;
+  height?: number;
+  ariaLabel: string;
+  print?: boolean;
+  animate?: boolean;
+};
+
+type Marks = { redlineRpm?: number; blowerMaxRpm?: number; speedAxis?: string; ink: string; print: boolean };
+
+/** Draws the redline (vertical) and blower speed limit (horizontal) lines, and a white page in print. */
+const markersPlugin: Plugin<"line"> = {
+  id: "pwMarkers",
+  beforeDraw(chart) {
+    const marks = (chart.options.plugins as { pwMarkers?: Marks }).pwMarkers;
+    if (!marks?.print) return;
+    const { ctx } = chart;
+    ctx.save();
+    ctx.fillStyle = "#ffffff";
+    ctx.fillRect(0, 0, chart.width, chart.height);
+    ctx.restore();
+  },
+  afterDatasetsDraw(chart) {
+    const marks = (chart.options.plugins as { pwMarkers?: Marks }).pwMarkers;
+    if (!marks) return;
+    const { ctx, chartArea: area, scales } = chart;
+    ctx.save();
+    ctx.lineWidth = 1.5;
+    ctx.strokeStyle = marks.ink;
+    ctx.fillStyle = marks.ink;
+    ctx.font = "11px sans-serif";
+    if (marks.redlineRpm !== undefined && scales.x) {
+      const x = scales.x.getPixelForValue(marks.redlineRpm);
+      if (x >= area.left && x <= area.right) {
+        ctx.setLineDash([4, 3]);
+        ctx.beginPath();
+        ctx.moveTo(x, area.top);
+        ctx.lineTo(x, area.bottom);
+        ctx.stroke();
+        ctx.setLineDash([]);
+        ctx.textAlign = "right";
+        ctx.fillText("Redline", x - 3, area.top + 11);
+      }
+    }
+    const speed = marks.speedAxis ? scales[marks.speedAxis] : undefined;
+    if (marks.blowerMaxRpm !== undefined && speed) {
+      const y = speed.getPixelForValue(marks.blowerMaxRpm);
+      if (y >= area.top && y <= area.bottom) {
+        ctx.setLineDash([8, 3, 2, 3]);
+        ctx.beginPath();
+        ctx.moveTo(area.left, y);
+        ctx.lineTo(area.right, y);
+        ctx.stroke();
+        ctx.setLineDash([]);
+        ctx.textAlign = "left";
+        ctx.fillText("Blower speed limit", area.left + 4, y - 4);
+      }
+    }
+    ctx.restore();
+  },
+};
+
+/** The page's colours from the CSS variables, followed when the theme changes. */
+function useInk(print: boolean): { fg: string; muted: string; grid: string } {
+  const [ink, setInk] = useState({ fg: "#16191d", muted: "#5b636d", grid: "#d9dde2" });
+  useEffect(() => {
+    if (print) return;
+    const read = () => {
+      const s = getComputedStyle(document.documentElement);
+      const v = (name: string, fallback: string) => s.getPropertyValue(name).trim() || fallback;
+      setInk({ fg: v("--pw-fg", "#16191d"), muted: v("--pw-muted", "#5b636d"), grid: v("--pw-border", "#d9dde2") });
+    };
+    read();
+    const media = window.matchMedia("(prefers-color-scheme: dark)");
+    media.addEventListener("change", read);
+    const observer = new MutationObserver(read);
+    observer.observe(document.documentElement, { attributes: true, attributeFilter: ["class"] });
+    return () => {
+      media.removeEventListener("change", read);
+      observer.disconnect();
+    };
+  }, [print]);
+  return print ? { fg: "#000000", muted: "#333333", grid: "#cccccc" } : ink;
+}
+
+const fmt = (v: number, digits: number) => v.toLocaleString("en-US", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+
+/** Line chart of operating points against engine speed. */
+export function CurveChart({
+  series,
+  metrics,
+  unitSystem,
+  redlineRpm,
+  blowerMaxRpm,
+  height = 320,
+  ariaLabel,
+  print = false,
+  animate = false,
+}: CurveChartProps): JSX.Element {
+  const tableId = useId();
+  const ink = useInk(print);
+
+  const axes = useMemo(() => {
+    const kinds: AxisKind[] = [];
+    for (const m of metrics) if (!kinds.includes(METRICS[m].kind)) kinds.push(METRICS[m].kind);
+    return kinds.map((kind, i) => ({
+      kind,
+      id: `y${i}`,
+      position: (i % 2 === 0 ? "left" : "right") as "left" | "right",
+      title: `${metrics.filter((m) => METRICS[m].kind === kind).map((m) => METRICS[m].label).join(", ")} (${axisUnit(kind, unitSystem)})`,
+    }));
+  }, [metrics, unitSystem]);
+
+  const datasets = useMemo(() => {
+    const many = series.length > 1;
+    const palette = print ? PRINT_GREYS : OKABE_ITO.map((c) => (c === "#000000" ? ink.fg : c));
+    const out: ChartDataset<"line", { x: number; y: number | null }[]>[] = [];
+    series.forEach((s, si) => {
+      metrics.forEach((m, mi) => {
+        const axis = axes.find((a) => a.kind === METRICS[m].kind)!;
+        const colour = palette[(many ? (s.colorIndex ?? si) : (s.colorIndex ?? 0) + mi) % palette.length];
+        const dash = many || print ? DASHES[mi % DASHES.length] : [];
+        out.push({
+          label: metrics.length > 1 || series.length > 1 ? `${s.label}: ${METRICS[m].label}` : s.label,
+          data: s.points.map((p) => ({ x: p.rpm, y: metricValue(m, p, unitSystem) })),
+          yAxisID: axis.id,
+          borderColor: colour,
+          backgroundColor: colour,
+          borderWidth: s.dashed ? 1.5 : 2.5,
+          borderDash: s.dashed && dash.length === 0 ? [6, 4] : dash,
+          pointRadius: 0,
+          pointHoverRadius: 3,
+          tension: 0.25,
+          spanGaps: true,
+        });
+      });
+    });
+    return out;
+  }, [series, metrics, axes, unitSystem, print, ink.fg]);
+
+  const speedAxis = axes.find((a) => a.kind === "speed")?.id;
+
+  const options = useMemo((): ChartOptions<"line"> => {
+    const scales: Record<string, ScaleOptions<"linear">> = {
+      x: {
+        type: "linear",
+        title: { display: true, text: "Engine speed (rpm)", color: ink.fg },
+        ticks: { color: ink.muted, callback: (v) => fmt(Number(v), 0) },
+        grid: { color: ink.grid },
+      } as ScaleOptions<"linear">,
+    };
+    for (const a of axes) {
+      const max = a.kind === "speed" && blowerMaxRpm !== undefined ? { suggestedMax: blowerMaxRpm * 1.05 } : {};
+      scales[a.id] = {
+        type: "linear",
+        position: a.position,
+        title: { display: true, text: a.title, color: ink.fg },
+        ticks: { color: ink.muted },
+        grid: { color: ink.grid, drawOnChartArea: a.id === "y0" },
+        ...max,
+      } as ScaleOptions<"linear">;
+    }
+    const marks: Marks = { redlineRpm, blowerMaxRpm: speedAxis ? blowerMaxRpm : undefined, speedAxis, ink: print ? "#000000" : ink.fg, print };
+    return {
+      responsive: true,
+      maintainAspectRatio: false,
+      animation: animate && !print ? { duration: 250 } : false,
+      parsing: false,
+      normalized: true,
+      interaction: { mode: "index", intersect: false },
+      scales,
+      plugins: {
+        legend: { position: "bottom", labels: { color: ink.fg, boxWidth: 18, boxHeight: 2 } },
+        tooltip: {
+          enabled: !print,
+          callbacks: {
+            title: (items) => (items.length ? `${fmt(items[0].parsed.x ?? 0, 0)} rpm` : ""),
+            label: (item) => {
+              const ds = item.dataset;
+              const axis = axes.find((a) => a.id === ds.yAxisID);
+              if (!axis || item.parsed.y === null) return `${ds.label}: –`;
+              return `${ds.label}: ${fmt(item.parsed.y, axisDigits(axis.kind, unitSystem))} ${axisUnit(axis.kind, unitSystem)}`;
+            },
+          },
+        },
+        pwMarkers: marks,
+      } as ChartOptions<"line">["plugins"],
+    };
+  }, [axes, ink, redlineRpm, blowerMaxRpm, speedAxis, print, animate, unitSystem]);
+
+  const exposed = useMemo(() => JSON.stringify(exposeSeries(series, metrics, unitSystem)), [series, metrics, unitSystem]);
+  const rpms = useMemo(() => [...new Set(series.flatMap((s) => s.points.map((p) => p.rpm)))].sort((a, b) => a - b), [series]);
+
+  return (
+    <figure className={`flex flex-col gap-1 ${print ? "bg-white" : ""}`} data-testid="curve-chart" data-series={exposed}>
+      <div style={{ height }} className="relative">
+        <Line
+          data={{ datasets }}
+          options={options}
+          plugins={[markersPlugin]}
+          role="img"
+          aria-label={ariaLabel}
+          aria-describedby={tableId}
+        />
+      </div>
+      <table id={tableId} className="sr-only" data-testid="curve-chart-table">
+        <caption>{ariaLabel}</caption>
+        <thead>
+          <tr>
+            <th scope="col">Engine speed (rpm)</th>
+            {series.flatMap((s) =>
+              metrics.map((m) => (
+                <th scope="col" key={`${s.label}-${m}`}>
+                  {`${s.label}: ${METRICS[m].label} (${axisUnit(METRICS[m].kind, unitSystem)})`}
+                </th>
+              )),
+            )}
+          </tr>
+        </thead>
+        <tbody>
+          {rpms.map((rpm) => (
+            <tr key={rpm}>
+              <th scope="row">{fmt(rpm, 0)}</th>
+              {series.flatMap((s) =>
+                metrics.map((m) => {
+                  const p = s.points.find((q) => q.rpm === rpm);
+                  const v = p ? metricDisplay(m, p, unitSystem) : null;
+                  return <td key={`${s.label}-${m}`}>{v === null ? "–" : fmt(v, axisDigits(METRICS[m].kind, unitSystem))}</td>;
+                }),
+              )}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </figure>
+  );
+}

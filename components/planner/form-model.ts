@@ -1,0 +1,305 @@
+// The planner's form: the same shape as calc's Combination, but in the user's units (and
+// fractions as percentages), plus a few switches the model does not see. Pure, so the
+// conversions and the validation can be tested in node. calc's combinationSchema stays the
+// one set of rules; this module only converts to SI first and puts the messages in the
+// user's units.
+import { z } from "zod";
+import {
+  combinationSchema,
+  fromSI,
+  toSI,
+  unitLabel,
+  type BlowerKind,
+  type Combination,
+  type CombinationInput,
+  type QuantityKind,
+  type UnitSystem,
+} from "@/calc";
+
+/** One VE row as edited: engine speed (rpm) and VE in percent. */
+export type VeRow = { rpm: number; ve: number };
+
+/** The planner's form values: user units, percentages for fractions; NaN where a box is empty. */
+export type PlannerForm = {
+  engine: { displacement: number; cylinders: number; redlineRpm: number; veCurve: VeRow[] };
+  blower: {
+    kind: BlowerKind;
+    displacementPerRev: number;
+    builtInVolumeRatio: number;
+    maxRpm: number;
+    volumetricEfficiencyRef: number;
+    referenceRpm: number;
+    internalEfficiency: number;
+    mechanicalEfficiency: number;
+  };
+  drive: { crankPulleyDiameter: number; blowerPulleyDiameter: number; beltSlip: number };
+  ambient: { altitude: number; pressure: number; temperature: number; inletLoss: number };
+  intercoolerOn: boolean;
+  intercooler: { effectiveness: number; pressureDrop: number; coolantTemperature: number };
+  fuel: {
+    afr: number;
+    bsfc: number;
+    injectorsOn: boolean;
+    injectorCount: number;
+    injectorFlow: number;
+    maxDuty: number;
+    evaporatedBeforeBlower: number;
+  };
+};
+
+/** How a field is shown: a quantity in the user's units, a fraction as percent, or as is. */
+export type FieldKind = QuantityKind | "percent" | "plain";
+
+/** Every numeric field of the form by dotted path (VE rows use "engine.veCurve.#.rpm|ve"). */
+export const FIELD_KINDS: Readonly<Record<string, FieldKind>> = {
+  "engine.displacement": "displacement",
+  "engine.cylinders": "plain",
+  "engine.redlineRpm": "speed",
+  "engine.veCurve.#.rpm": "speed",
+  "engine.veCurve.#.ve": "percent",
+  "blower.displacementPerRev": "blower-displacement",
+  "blower.builtInVolumeRatio": "plain",
+  "blower.maxRpm": "speed",
+  "blower.volumetricEfficiencyRef": "percent",
+  "blower.referenceRpm": "speed",
+  "blower.internalEfficiency": "percent",
+  "blower.mechanicalEfficiency": "percent",
+  "drive.crankPulleyDiameter": "length-small",
+  "drive.blowerPulleyDiameter": "length-small",
+  "drive.beltSlip": "percent",
+  "ambient.altitude": "altitude",
+  "ambient.pressure": "pressure",
+  "ambient.temperature": "temperature",
+  "ambient.inletLoss": "pressure",
+  "intercooler.effectiveness": "percent",
+  "intercooler.pressureDrop": "pressure",
+  "intercooler.coolantTemperature": "temperature",
+  "fuel.afr": "plain",
+  "fuel.bsfc": "bsfc",
+  "fuel.injectorCount": "plain",
+  "fuel.injectorFlow": "injector-flow",
+  "fuel.maxDuty": "percent",
+  "fuel.evaporatedBeforeBlower": "percent",
+};
+
+/** The kind of a dotted path, VE row indexes folded to "#". */
+export function kindOf(path: string): FieldKind | undefined {
+  return FIELD_KINDS[path.replace(/\.\d+\./, ".#.")];
+}
+
+/** The unit shown beside a field ("" for counts and plain ratios). */
+export function unitOf(path: string, system: UnitSystem): string {
+  const kind = kindOf(path);
+  if (!kind || kind === "plain") return "";
+  if (kind === "percent") return "%";
+  return unitLabel(kind, system);
+}
+
+/** Six significant digits: enough for any shop figure, without binary noise such as 3.4000000000000004. */
+export const tidy = (v: number): number => (Number.isFinite(v) ? Number(v.toPrecision(6)) : v);
+
+/** A form number to SI. */
+export function fieldToSI(kind: FieldKind, v: number, system: UnitSystem): number {
+  if (kind === "plain") return v;
+  if (kind === "percent") return v / 100;
+  return toSI(kind, v, system);
+}
+
+/** A SI number to the form, tidied. */
+export function fieldFromSI(kind: FieldKind, v: number, system: UnitSystem): number {
+  if (kind === "plain") return v;
+  if (kind === "percent") return tidy(v * 100);
+  return tidy(fromSI(kind, v, system));
+}
+
+const num = (v: unknown): number => (typeof v === "number" ? v : v === "" || v == null ? Number.NaN : Number(v));
+
+/** The form values as a calc Combination input (SI, fractions); switched-off parts become null. */
+export function toSpec(f: PlannerForm, system: UnitSystem): CombinationInput {
+  const q = (path: string, v: unknown) => fieldToSI(FIELD_KINDS[path], num(v), system);
+  return {
+    engine: {
+      displacement: q("engine.displacement", f.engine.displacement),
+      cylinders: num(f.engine.cylinders),
+      redlineRpm: num(f.engine.redlineRpm),
+      veCurve: f.engine.veCurve.map((r) => ({ rpm: num(r.rpm), ve: num(r.ve) / 100 })),
+    },
+    blower: {
+      kind: f.blower.kind,
+      displacementPerRev: q("blower.displacementPerRev", f.blower.displacementPerRev),
+      builtInVolumeRatio: num(f.blower.builtInVolumeRatio),
+      maxRpm: num(f.blower.maxRpm),
+      volumetricEfficiencyRef: q("blower.volumetricEfficiencyRef", f.blower.volumetricEfficiencyRef),
+      referenceRpm: num(f.blower.referenceRpm),
+      internalEfficiency: q("blower.internalEfficiency", f.blower.internalEfficiency),
+      mechanicalEfficiency: q("blower.mechanicalEfficiency", f.blower.mechanicalEfficiency),
+    },
+    drive: {
+      crankPulleyDiameter: q("drive.crankPulleyDiameter", f.drive.crankPulleyDiameter),
+      blowerPulleyDiameter: q("drive.blowerPulleyDiameter", f.drive.blowerPulleyDiameter),
+      beltSlip: q("drive.beltSlip", f.drive.beltSlip),
+    },
+    ambient: {
+      pressure: q("ambient.pressure", f.ambient.pressure),
+      temperature: q("ambient.temperature", f.ambient.temperature),
+      inletLoss: q("ambient.inletLoss", f.ambient.inletLoss),
+    },
+    intercooler: f.intercoolerOn
+      ? {
+          effectiveness: q("intercooler.effectiveness", f.intercooler.effectiveness),
+          pressureDrop: q("intercooler.pressureDrop", f.intercooler.pressureDrop),
+          coolantTemperature: q("intercooler.coolantTemperature", f.intercooler.coolantTemperature),
+        }
+      : null,
+    fuel: {
+      afr: num(f.fuel.afr),
+      bsfc: q("fuel.bsfc", f.fuel.bsfc),
+      injectorCount: f.fuel.injectorsOn ? num(f.fuel.injectorCount) : null,
+      injectorFlow: f.fuel.injectorsOn ? q("fuel.injectorFlow", f.fuel.injectorFlow) : null,
+      maxDuty: q("fuel.maxDuty", f.fuel.maxDuty),
+      evaporatedBeforeBlower: q("fuel.evaporatedBeforeBlower", f.fuel.evaporatedBeforeBlower),
+    },
+  };
+}
+
+/** Demo starting values for parts a saved spec leaves out (an intercooler, injectors): invented. */
+const SPARE_INTERCOOLER = { effectiveness: 0.7, pressureDrop: 3000, coolantTemperature: 308.15 };
+const SPARE_INJECTORS = { injectorCount: 8, injectorFlow: 0.005 };
+
+/** A saved combination (SI) as form values in `system`. */
+export function toForm(spec: Combination, system: UnitSystem, altitude = 0): PlannerForm {
+  const s = (path: string, v: number) => fieldFromSI(FIELD_KINDS[path], v, system);
+  const ic = spec.intercooler ?? SPARE_INTERCOOLER;
+  const hasInjectors = spec.fuel.injectorCount != null && spec.fuel.injectorFlow != null;
+  return {
+    engine: {
+      displacement: s("engine.displacement", spec.engine.displacement),
+      cylinders: spec.engine.cylinders,
+      redlineRpm: spec.engine.redlineRpm,
+      veCurve: spec.engine.veCurve.map((p) => ({ rpm: p.rpm, ve: tidy(p.ve * 100) })),
+    },
+    blower: {
+      kind: spec.blower.kind,
+      displacementPerRev: s("blower.displacementPerRev", spec.blower.displacementPerRev),
+      builtInVolumeRatio: spec.blower.builtInVolumeRatio,
+      maxRpm: spec.blower.maxRpm,
+      volumetricEfficiencyRef: s("blower.volumetricEfficiencyRef", spec.blower.volumetricEfficiencyRef),
+      referenceRpm: spec.blower.referenceRpm,
+      internalEfficiency: s("blower.internalEfficiency", spec.blower.internalEfficiency),
+      mechanicalEfficiency: s("blower.mechanicalEfficiency", spec.blower.mechanicalEfficiency),
+    },
+    drive: {
+      crankPulleyDiameter: s("drive.crankPulleyDiameter", spec.drive.crankPulleyDiameter),
+      blowerPulleyDiameter: s("drive.blowerPulleyDiameter", spec.drive.blowerPulleyDiameter),
+      beltSlip: s("drive.beltSlip", spec.drive.beltSlip),
+    },
+    ambient: {
+      altitude: s("ambient.altitude", altitude),
+      pressure: s("ambient.pressure", spec.ambient.pressure),
+      temperature: s("ambient.temperature", spec.ambient.temperature),
+      inletLoss: s("ambient.inletLoss", spec.ambient.inletLoss),
+    },
+    intercoolerOn: spec.intercooler !== null,
+    intercooler: {
+      effectiveness: s("intercooler.effectiveness", ic.effectiveness),
+      pressureDrop: s("intercooler.pressureDrop", ic.pressureDrop),
+      coolantTemperature: s("intercooler.coolantTemperature", ic.coolantTemperature),
+    },
+    fuel: {
+      afr: spec.fuel.afr,
+      bsfc: s("fuel.bsfc", spec.fuel.bsfc),
+      injectorsOn: hasInjectors,
+      injectorCount: spec.fuel.injectorCount ?? SPARE_INJECTORS.injectorCount,
+      injectorFlow: s("fuel.injectorFlow", spec.fuel.injectorFlow ?? SPARE_INJECTORS.injectorFlow),
+      maxDuty: s("fuel.maxDuty", spec.fuel.maxDuty),
+      evaporatedBeforeBlower: s("fuel.evaporatedBeforeBlower", spec.fuel.evaporatedBeforeBlower),
+    },
+  };
+}
+
+/** Every quantity of the form re-expressed from one unit system in the other (switches and counts kept). */
+export function convertForm(f: PlannerForm, from: UnitSystem, to: UnitSystem): PlannerForm {
+  if (from === to) return f;
+  const c = (path: string, v: number) => {
+    const kind = FIELD_KINDS[path];
+    return fieldFromSI(kind, fieldToSI(kind, num(v), from), to);
+  };
+  return {
+    ...f,
+    engine: { ...f.engine, displacement: c("engine.displacement", f.engine.displacement), veCurve: f.engine.veCurve.map((r) => ({ ...r })) },
+    blower: { ...f.blower, displacementPerRev: c("blower.displacementPerRev", f.blower.displacementPerRev) },
+    drive: {
+      ...f.drive,
+      crankPulleyDiameter: c("drive.crankPulleyDiameter", f.drive.crankPulleyDiameter),
+      blowerPulleyDiameter: c("drive.blowerPulleyDiameter", f.drive.blowerPulleyDiameter),
+    },
+    ambient: {
+      altitude: c("ambient.altitude", f.ambient.altitude),
+      pressure: c("ambient.pressure", f.ambient.pressure),
+      temperature: c("ambient.temperature", f.ambient.temperature),
+      inletLoss: c("ambient.inletLoss", f.ambient.inletLoss),
+    },
+    intercooler: {
+      ...f.intercooler,
+      pressureDrop: c("intercooler.pressureDrop", f.intercooler.pressureDrop),
+      coolantTemperature: c("intercooler.coolantTemperature", f.intercooler.coolantTemperature),
+    },
+    fuel: { ...f.fuel, bsfc: c("fuel.bsfc", f.fuel.bsfc), injectorFlow: c("fuel.injectorFlow", f.fuel.injectorFlow) },
+  };
+}
+
+const SI_UNITS = /^(m³\/rev|m³|m|Pa|K|kg\/s|kg\/J|rpm)$/;
+
+/**
+ * calc's message for a field, with its limits put in the user's units: "Blower pulley diameter
+ * must be between 0.03 and 0.5 m" reads "… between 1.18 and 19.7 in" to an imperial user.
+ */
+export function localizeMessage(path: string, message: string, system: UnitSystem): string {
+  const kind = kindOf(path);
+  const m = /^(.*) between (\S+) and (\S+?)(?: (\S+))?(?: \((.*)\))?$/.exec(message);
+  if (!kind || !m) return message;
+  const [, head, lo, hi, unit] = m;
+  if (unit !== undefined && !SI_UNITS.test(unit)) return message;
+  const a = Number(lo);
+  const b = Number(hi);
+  if (!Number.isFinite(a) || !Number.isFinite(b)) return message;
+  const show = (v: number) => tidyText(kind === "plain" || kind === "speed" ? v : fieldFromSI(kind, v, system));
+  const u = unitOf(path, system);
+  return `${head} between ${show(a)} and ${show(b)}${u ? (u === "%" ? " %" : ` ${u}`) : ""}`;
+}
+
+const tidyText = (v: number): string => String(Number(v.toPrecision(3)));
+
+/** Field errors keyed by the form's dotted paths, in words and in the user's units. */
+export type FormErrors = Record<string, string>;
+
+/** Validates form values with calc's combinationSchema; returns the SI combination or errors by field. */
+export function validateForm(f: PlannerForm, system: UnitSystem): { ok: true; spec: Combination } | { ok: false; errors: FormErrors } {
+  const r = combinationSchema.safeParse(toSpec(f, system));
+  if (r.success) return { ok: true, spec: r.data };
+  return { ok: false, errors: issuesToErrors(r.error.issues, system) };
+}
+
+/** zod issues (paths of the SI combination, which match the form's) to messages per form field. */
+export function issuesToErrors(issues: readonly z.core.$ZodIssue[], system: UnitSystem): FormErrors {
+  const out: FormErrors = {};
+  for (const issue of issues) {
+    const path = issue.path.map(String).join(".");
+    if (!(path in out)) out[path] = localizeMessage(path, issue.message, system);
+  }
+  return out;
+}
+
+/** Relative closeness of two saved specs, so a unit round trip is not mistaken for an edit. */
+export function sameSpec(a: unknown, b: unknown, rel = 1e-5): boolean {
+  if (typeof a === "number" && typeof b === "number") {
+    if (Number.isNaN(a) || Number.isNaN(b)) return Number.isNaN(a) && Number.isNaN(b);
+    return Math.abs(a - b) <= rel * Math.max(Math.abs(a), Math.abs(b), 1e-12);
+  }
+  if (a === null || b === null || typeof a !== "object" || typeof b !== "object") return a === b;
+  if (Array.isArray(a) !== Array.isArray(b)) return false;
+  const ka = Object.keys(a as object).filter((k) => (a as Record<string, unknown>)[k] !== undefined);
+  const kb = Object.keys(b as object).filter((k) => (b as Record<string, unknown>)[k] !== undefined);
+  if (ka.length !== kb.length) return false;
+  return ka.every((k) => sameSpec((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], rel));
+}

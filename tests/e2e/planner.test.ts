@@ -1,0 +1,219 @@
+// The planner in Chromium: a tuner opens the demo small-block, tries a smaller blower pulley,
+// finds the pulley for a target boost, saves, meets a conflict, and compares revisions. Every
+// figure checked on screen is recomputed here with calc for the same inputs.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { and, eq } from "drizzle-orm";
+import type { Browser, BrowserContext, Page } from "playwright-core";
+import { combinationSchema, inToM, mToIn, paToPsi, pulleyForBoost, psiToPa, solvePoint, type Combination } from "@/calc";
+import { connect } from "@/db/connect";
+import { createCombination, getRevision, saveCombination } from "@/db/repo/combinations";
+import { toActor } from "@/db/repo/users";
+import { combinations, users } from "@/db/schema";
+import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
+import { Client, signedIn } from "../support/http";
+
+const { pool, db } = connect(process.env.DATABASE_URL!, 2);
+const DEMO = "Small-block 5.0 L street build";
+
+type Exposed = { label: string; rpm: number[]; boost: number[]; boostUnit: string };
+
+/** The main chart's exposed series (the first chart on the page). */
+async function chartSeries(page: Page): Promise<Exposed[]> {
+  return JSON.parse((await page.getByTestId("curve-chart").first().getAttribute("data-series")) ?? "[]");
+}
+
+/** The number at the start of a read-out such as "7.4 psi". */
+async function readoutNumber(page: Page, id: string): Promise<number> {
+  const text = (await page.getByTestId(`readout-${id}`).textContent()) ?? "";
+  return Number(text.replace(/,/g, "").match(/-?\d+(\.\d+)?/)?.[0]);
+}
+
+/** Waits until the planner has hydrated: the form holds its values and the chart is drawn. */
+async function plannerReady(page: Page) {
+  await page.waitForFunction(() => {
+    const input = document.getElementById("f-drive.blowerPulleyDiameter") as HTMLInputElement | null;
+    return !!input && input.value !== "" && !!document.querySelector('[data-testid="curve-chart"] canvas');
+  });
+}
+
+/** Blower pulley field, by the name the end-to-end tests of other screens rely on too. */
+const pulleyField = (page: Page) => page.getByLabel(/^Blower pulley diameter/);
+
+describe("planner in Chromium", () => {
+  let browser: Browser;
+  let context: BrowserContext;
+  let page: Page;
+  let errors: string[];
+  let demoId: string;
+  let demoSpec: Combination;
+
+  beforeAll(async () => {
+    const [tuner] = await db.select().from(users).where(eq(users.email, "tuner@example.com"));
+    await db.update(users).set({ unitSystem: "imperial" }).where(eq(users.id, tuner.id));
+    const [row] = await db.select().from(combinations).where(and(eq(combinations.name, DEMO), eq(combinations.ownerId, tuner.id)));
+    demoId = row.id;
+    demoSpec = combinationSchema.parse(row.spec);
+    browser = await launchBrowser();
+    context = await browser.newContext({ viewport: { width: 1400, height: 1000 } });
+    page = await signIn(context, "tuner@example.com");
+    // Leaving with unsaved edits asks first; these tests accept.
+    page.on("dialog", (d) => void d.accept());
+    errors = watchErrors(page);
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it("shows the demo's figures as calc computes them", async () => {
+    await page.goto(`${BASE_URL}/combinations/${demoId}`);
+    await page.getByRole("heading", { name: DEMO, level: 1 }).waitFor();
+    await plannerReady(page);
+    await expect(pulleyField(page).inputValue()).resolves.toBe(String(Number(mToIn(demoSpec.drive.blowerPulleyDiameter).toPrecision(6))));
+    const redline = demoSpec.engine.redlineRpm;
+    // source: calc's solvePoint for the same spec, shown to 0.1 psi
+    const expected = paToPsi(solvePoint(demoSpec, redline).boostGauge);
+    expect(Math.abs((await readoutNumber(page, "boost-redline")) - expected)).toBeLessThanOrEqual(0.05 + 1e-9);
+    const [current] = await chartSeries(page);
+    expect(current.boostUnit).toBe("psi");
+    const i = current.rpm.indexOf(4000);
+    // The chart exposes boost as displayed, to 0.1 psi.
+    expect(Math.abs(current.boost[i] - paToPsi(solvePoint(demoSpec, 4000).boostGauge))).toBeLessThanOrEqual(0.05 + 1e-9);
+    // Neighbouring pulleys are overlaid.
+    expect((await chartSeries(page)).length).toBeGreaterThanOrEqual(2);
+  });
+
+  it("draws a non-empty chart canvas", async () => {
+    const canvas = page.getByRole("img", { name: /Boost, net power and torque against engine speed/ });
+    const shot = await canvas.screenshot();
+    expect(shot.subarray(1, 4).toString()).toBe("PNG");
+    const painted = await canvas.evaluate((el) => {
+      const c = el as HTMLCanvasElement;
+      const data = c.getContext("2d")!.getImageData(0, 0, c.width, c.height).data;
+      let n = 0;
+      for (let k = 3; k < data.length; k += 4) if (data[k] > 0) n++;
+      return { n, total: c.width * c.height };
+    });
+    expect(painted.n).toBeGreaterThan(painted.total * 0.01);
+  });
+
+  it("raises boost in the chart and the ladder when a smaller pulley is typed, by keyboard", async () => {
+    const before = await chartSeries(page);
+    const ladderBefore = Number(await page.locator('[data-testid="ladder-row"][aria-current="true"]').getAttribute("data-boost-redline-pa"));
+    await page.getByLabel(/^Crank pulley diameter/).focus();
+    await page.keyboard.press("Tab");
+    await expect(page.evaluate(() => document.activeElement?.id)).resolves.toBe("f-drive.blowerPulleyDiameter");
+    await page.keyboard.press("ControlOrMeta+a");
+    await page.keyboard.type("3.0");
+    const smaller: Combination = { ...demoSpec, drive: { ...demoSpec.drive, blowerPulleyDiameter: inToM(3.0) } };
+    const expected = paToPsi(solvePoint(smaller, demoSpec.engine.redlineRpm).boostGauge).toFixed(1);
+    await page.getByTestId("readout-boost-redline").filter({ hasText: `${expected} psi` }).waitFor({ timeout: 10_000 });
+    const after = await chartSeries(page);
+    // common practice, no published source: a smaller blower pulley raises boost at every engine speed
+    after[0].rpm.forEach((n, k) => expect(after[0].boost[k]).toBeGreaterThan(before[0].boost[before[0].rpm.indexOf(n)]));
+    const currentRow = page.locator('[data-testid="ladder-row"][aria-current="true"]');
+    await expect(currentRow.getAttribute("data-diameter-m").then(Number)).resolves.toBeCloseTo(inToM(3.0), 9);
+    const ladderAfter = Number(await currentRow.getAttribute("data-boost-redline-pa"));
+    expect(ladderAfter).toBeGreaterThan(ladderBefore);
+    // The form holds six significant digits of each figure (e.g. 305.119 in³), so the page's spec
+    // may differ from the stored one in the sixth digit: compare to a relative 1e-4.
+    const want = solvePoint(smaller, demoSpec.engine.redlineRpm).boostGauge;
+    expect(Math.abs(ladderAfter - want) / want).toBeLessThan(1e-4);
+    await expect(page.getByText("Unsaved changes", { exact: true }).isVisible()).resolves.toBe(true);
+  });
+
+  it("finds the pulley for a target boost and applies it", async () => {
+    await page.getByLabel(/^Target boost/).fill("8");
+    await page.getByLabel(/^At engine speed/).fill("5000");
+    await page.getByRole("button", { name: "Find pulley" }).click();
+    const exact = page.getByTestId("finder-exact");
+    await exact.waitFor();
+    const shown = Number(await exact.getAttribute("data-diameter-m"));
+    // source: calc's pulleyForBoost for the same spec (the finder ignores the current pulley size)
+    const want = pulleyForBoost(demoSpec, 5000, psiToPa(8)).diameter;
+    expect(Math.abs(shown - want) / want).toBeLessThan(1e-4); // six significant digits in the form, as above
+    await page.getByRole("button", { name: "Use the exact size in the editor" }).click();
+    await expect(pulleyField(page).inputValue().then(Number)).resolves.toBeCloseTo(mToIn(want), 4);
+    await expect(page.getByRole("heading", { name: "Cautions" }).isVisible()).resolves.toBe(true);
+    await expect(page.getByText("Respect the blower maker's speed limit.").isVisible()).resolves.toBe(true);
+    expect(errors.filter((e) => !/\/revisions/.test(e))).toEqual([]);
+  });
+
+  it("saves a revision, keeps the edits on a conflict, and switches units", async () => {
+    const [tunerRow] = await db.select().from(users).where(eq(users.email, "tuner@example.com"));
+    const tuner = toActor(tunerRow);
+    const mine = await createCombination(db, tuner, { name: `Planner e2e ${Date.now()}`, spec: demoSpec, note: "For the planner test" });
+    await page.goto(`${BASE_URL}/combinations/${mine.id}`);
+    await plannerReady(page);
+    await pulleyField(page).fill("3.2");
+    await page.getByRole("textbox", { name: "Revision note" }).fill("Tried 3.2 in");
+    await page.getByRole("button", { name: "Save revision" }).click();
+    await page.getByText("Saved revision 2").waitFor();
+    const [saved] = await db.select().from(combinations).where(eq(combinations.id, mine.id));
+    expect(saved.revision).toBe(2);
+    expect((saved.spec as Combination).drive.blowerPulleyDiameter).toBeCloseTo(inToM(3.2), 9);
+    expect((await getRevision(db, tuner, mine.id, 2)).note).toBe("Tried 3.2 in");
+
+    // Someone else saves meanwhile; our next save is refused and our edit stays on screen.
+    await saveCombination(db, tuner, mine.id, { baseRevision: 2, note: "Elsewhere" });
+    await pulleyField(page).fill("3.1");
+    await page.getByRole("button", { name: "Save revision" }).click();
+    await page.getByText(/saved by someone else/).waitFor();
+    await expect(pulleyField(page).inputValue()).resolves.toBe("3.1");
+
+    await page.getByRole("radio", { name: "Metric" }).check();
+    // source: 3.1 in × 25.4 mm/in = 78.74 mm (exact)
+    await expect(pulleyField(page).inputValue().then(Number)).resolves.toBeCloseTo(78.74, 6);
+    await expect(page.getByLabel(/^Blower pulley diameter\s*\(mm\)/).count()).resolves.toBe(1);
+    await page.getByText(/saved as your preference/).waitFor();
+    const [u] = await db.select({ unitSystem: users.unitSystem }).from(users).where(eq(users.id, tuner.id));
+    expect(u.unitSystem).toBe("metric");
+    await page.getByRole("radio", { name: "Imperial" }).check();
+    await page.getByText(/Units set to imperial/).waitFor();
+  });
+
+  it("compares revisions 1 and 2: heads and cam lower the boost", async () => {
+    await db.update(users).set({ unitSystem: "imperial" }).where(eq(users.email, "tuner@example.com"));
+    await page.goto(`${BASE_URL}/compare?items=${demoId}:1,${demoId}:2&at=3000,4500`);
+    const cell = page.getByTestId("delta-boostGauge-4500-1");
+    await cell.waitFor();
+    const [tunerRow] = await db.select().from(users).where(eq(users.email, "tuner@example.com"));
+    const rev2 = combinationSchema.parse((await getRevision(db, toActor(tunerRow), demoId, 2)).spec);
+    // common practice, no published source: a better-breathing engine lowers boost under the same blower and pulley
+    expect(Number(await cell.getAttribute("data-delta-si"))).toBeLessThan(0);
+    // source: calc's solvePoint for revision 2 at 4500 rpm
+    expect(Number(await cell.getAttribute("data-value-si"))).toBeCloseTo(solvePoint(rev2, 4500).boostGauge, 3);
+    await expect(cell.textContent()).resolves.toMatch(/psi \(−\d+\.\d psi\)/);
+    const labels = (await chartSeries(page)).map((s) => s.label);
+    expect(labels.some((l) => /revision 1/.test(l)) && labels.some((l) => /revision 2/.test(l))).toBe(true);
+
+    // The pickers build the same kind of link.
+    await page.getByLabel("Revision of item 2").selectOption("3");
+    await page.getByRole("button", { name: "Show side by side" }).click();
+    await page.waitForURL((u) => u.searchParams.get("items")?.endsWith(":3") ?? false);
+    await page.getByTestId("delta-boostGauge-4500-1").waitFor();
+    // common practice, no published source: revision 3 is revision 2 with a smaller pulley, so its boost is higher
+    expect(Number(await page.getByTestId("delta-boostGauge-4500-1").getAttribute("data-value-si"))).toBeGreaterThan(solvePoint(rev2, 4500).boostGauge);
+  });
+});
+
+afterAll(async () => {
+  await pool.end();
+});
+
+describe("POST /api/calc", () => {
+  it("computes for signed-in users, names bad fields, and refuses the signed-out", async () => {
+    const spec = combinationSchema.parse((await db.select().from(combinations).where(eq(combinations.name, DEMO)))[0].spec);
+    const c = await signedIn("member@example.com");
+    const ok = await c.json("/api/calc", "POST", { op: "point", combination: spec, rpm: 4000 });
+    expect(ok.status).toBe(200);
+    expect(ok.data.point.boostGauge).toBeCloseTo(solvePoint(spec, 4000).boostGauge, 6);
+    const bad = await c.json("/api/calc", "POST", { op: "curve", combination: { ...spec, engine: { ...spec.engine, displacement: -1 } }, rpms: [3000] });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.data.fieldErrors)).toContain("combination.engine.displacement");
+    const op = await c.json("/api/calc", "POST", { op: "nonsense" });
+    expect(op.status).toBe(400);
+    const out = await new Client().json("/api/calc", "POST", { op: "point", combination: spec, rpm: 4000 });
+    expect(out.status).toBe(401);
+  });
+});

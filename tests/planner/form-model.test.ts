@@ -1,0 +1,125 @@
+// The planner's form: user units in, SI out, and calc's rules as field errors in the user's units.
+import { describe, expect, it } from "vitest";
+import { combinationSchema, type Combination } from "@/calc";
+import { convertForm, localizeMessage, sameSpec, toForm, toSpec, unitOf, validateForm } from "@/components/planner/form-model";
+import { smallBlockBaseline } from "@/db/seed/demo-specs";
+
+const demo: Combination = combinationSchema.parse(smallBlockBaseline);
+
+describe("form values and SI", () => {
+  it("shows the demo's blower and crank pulleys in inches and millimetres", () => {
+    // source: the demo seed defines 3.4 in and 6.5 in; 1 in = 25.4 mm exactly (NIST SP 811)
+    const imperial = toForm(demo, "imperial");
+    expect(imperial.drive.blowerPulleyDiameter).toBe(3.4);
+    expect(imperial.drive.crankPulleyDiameter).toBe(6.5);
+    const metric = toForm(demo, "metric");
+    expect(metric.drive.blowerPulleyDiameter).toBeCloseTo(86.36, 6);
+    expect(metric.drive.crankPulleyDiameter).toBeCloseTo(165.1, 6);
+    // source: 5.0 L = 5.0 / 0.016387064 in³ = 305.12 in³ (1 in³ = 16.387064 cm³, NIST SP 811)
+    expect(imperial.engine.displacement).toBeCloseTo(305.12, 1);
+    expect(metric.engine.displacement).toBeCloseTo(5.0, 9);
+  });
+
+  it("round-trips a form in either system to the same SI combination", () => {
+    for (const system of ["imperial", "metric"] as const) {
+      const back = combinationSchema.parse(toSpec(toForm(demo, system), system));
+      expect(sameSpec(back, demo)).toBe(true);
+    }
+  });
+
+  it("turns percentages into fractions and a typed pulley size into metres", () => {
+    const f = toForm(demo, "imperial");
+    f.engine.veCurve[0].ve = 90;
+    f.drive.blowerPulleyDiameter = 3.0;
+    f.drive.beltSlip = 3;
+    const spec = toSpec(f, "imperial");
+    expect(spec.engine.veCurve[0].ve).toBeCloseTo(0.9, 12);
+    // source: 3.0 in × 0.0254 m/in = 0.0762 m (exact)
+    expect(spec.drive.blowerPulleyDiameter).toBeCloseTo(0.0762, 12);
+    expect(spec.drive.beltSlip).toBeCloseTo(0.03, 12);
+  });
+
+  it("converts imperial to metric and back without drift", () => {
+    const f = toForm(demo, "imperial");
+    const again = convertForm(convertForm(f, "imperial", "metric"), "metric", "imperial");
+    expect(again.drive.blowerPulleyDiameter).toBe(3.4);
+    expect(again.ambient.temperature).toBeCloseTo(f.ambient.temperature, 3);
+    expect(sameSpec(toSpec(again, "imperial"), toSpec(f, "imperial"))).toBe(true);
+    // source: 25 °C = 77 °F (°F = °C × 9/5 + 32)
+    expect(f.ambient.temperature).toBeCloseTo(77, 6);
+  });
+
+  it("leaves out a switched-off intercooler and injectors", () => {
+    const f = toForm(demo, "metric");
+    expect(f.intercoolerOn).toBe(false);
+    expect(toSpec(f, "metric").intercooler).toBeNull();
+    f.intercoolerOn = true;
+    expect(toSpec(f, "metric").intercooler).toMatchObject({ effectiveness: expect.any(Number) });
+    f.fuel.injectorsOn = false;
+    expect(toSpec(f, "metric").fuel.injectorCount).toBeNull();
+  });
+
+  it("notices a 0.1 in pulley change as an unsaved edit, and a unit round trip as none", () => {
+    const f = toForm(demo, "imperial");
+    expect(sameSpec(toSpec(f, "imperial"), demo)).toBe(true);
+    f.drive.blowerPulleyDiameter = 3.3;
+    expect(sameSpec(toSpec(f, "imperial"), demo)).toBe(false);
+  });
+});
+
+describe("validation names the field, in the user's units", () => {
+  it("rejects a blower pulley too large and gives the limits in inches", () => {
+    const f = toForm(demo, "imperial");
+    f.drive.blowerPulleyDiameter = 25;
+    const r = validateForm(f, "imperial");
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(Object.keys(r.errors)).toEqual(["drive.blowerPulleyDiameter"]);
+    // source: calc's limits 0.03–0.5 m; 0.03 / 0.0254 = 1.18 in, 0.5 / 0.0254 = 19.7 in
+    expect(r.errors["drive.blowerPulleyDiameter"]).toBe("Blower pulley diameter must be between 1.18 and 19.7 in");
+  });
+
+  it("gives the same limits in millimetres to a metric user", () => {
+    const f = toForm(demo, "metric");
+    f.drive.blowerPulleyDiameter = 10;
+    const r = validateForm(f, "metric");
+    expect(r.ok ? null : r.errors["drive.blowerPulleyDiameter"]).toBe("Blower pulley diameter must be between 30 and 500 mm");
+  });
+
+  it("names an empty box", () => {
+    const f = toForm(demo, "imperial");
+    f.engine.displacement = Number.NaN;
+    const r = validateForm(f, "imperial");
+    expect(r.ok ? null : r.errors["engine.displacement"]).toMatch(/^Engine displacement must be between 12\.2 and 1220 in³$/);
+  });
+
+  it("puts fractions as percentages", () => {
+    expect(localizeMessage("drive.beltSlip", "Belt slip must be between 0 and 0.2 (as a fraction)", "metric")).toBe("Belt slip must be between 0 and 20 %");
+    const f = toForm(demo, "metric");
+    f.engine.veCurve[2].ve = 250;
+    const r = validateForm(f, "metric");
+    expect(r.ok ? null : r.errors["engine.veCurve.2.ve"]).toBe("Volumetric efficiency must be between 20 and 200 %");
+  });
+
+  it("catches the rules across fields: a Roots blower's volume ratio, a repeated VE speed, half-given injectors", () => {
+    const f = toForm(demo, "imperial");
+    f.blower.builtInVolumeRatio = 1.5;
+    f.engine.veCurve[1].rpm = f.engine.veCurve[0].rpm;
+    f.fuel.injectorFlow = Number.NaN;
+    const r = validateForm(f, "imperial");
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.errors["blower.builtInVolumeRatio"]).toMatch(/Roots blower has no internal compression/);
+    expect(r.errors["engine.veCurve.1.rpm"]).toMatch(/twice/);
+    expect(r.errors["fuel.injectorFlow"]).toMatch(/Injector flow/);
+  });
+
+  it("shows every field's unit", () => {
+    expect(unitOf("drive.blowerPulleyDiameter", "imperial")).toBe("in");
+    expect(unitOf("drive.blowerPulleyDiameter", "metric")).toBe("mm");
+    expect(unitOf("ambient.pressure", "imperial")).toBe("psi");
+    expect(unitOf("engine.veCurve.3.ve", "metric")).toBe("%");
+    expect(unitOf("fuel.bsfc", "metric")).toBe("g/(kW·h)");
+    expect(unitOf("engine.cylinders", "metric")).toBe("");
+  });
+});
