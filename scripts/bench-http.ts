@@ -28,7 +28,7 @@ async function measure(url: string, cookie: string, t: Target, connections: numb
 const server = await serveThrowaway({ distDir: ".next-bench", build: !args.includes("--skip-build") });
 try {
   const cookie = await signInCookie(server.url, "tuner@example.com");
-  const calcBody = JSON.stringify({ combination: exampleCombination(), rpms: Array.from({ length: 56 }, (_, i) => 1000 + i * 100) });
+  const calcBody = JSON.stringify({ op: "curve", combination: exampleCombination(), rpms: Array.from({ length: 56 }, (_, i) => 1000 + i * 100) });
   const targets: Target[] = [
     { name: "trivial (/api/health)", path: "/api/health" },
     { name: "combinations list", path: "/api/combinations?pageSize=20" },

@@ -5,11 +5,20 @@ import { and, asc, count, desc, eq, ilike, isNull, or, sql, type SQL } from "dri
 import { z } from "zod";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
-import { ConflictError, NotFoundError } from "../errors";
+import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "../errors";
 import { assert, canCreateForCustomer, canReadOwned, canWriteOwned, isShopStaff, type Actor } from "../policy";
 import { combinationRevisions, combinations, users, type CombinationRow } from "../schema";
 
-const text = (label: string, max: number) => z.string().trim().max(max, `${label} must be at most ${max} characters.`);
+// PostgreSQL text cannot hold NUL, and control characters in a name only cause trouble later
+// (files, e-mails, terminals): refuse them here with a message instead of a database error.
+const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
+const CONTROL_OR_NEWLINE = /[\u0000-\u001F\u007F]/;
+const text = (label: string, max: number, opts: { multiline?: boolean } = {}) =>
+  z
+    .string({ error: `${label} must be text.` })
+    .trim()
+    .max(max, `${label} must be at most ${max} characters.`)
+    .refine((v) => !(opts.multiline ? CONTROL : CONTROL_OR_NEWLINE).test(v), `${label} must not contain control characters.`);
 
 /** Fields a person edits besides the spec. */
 export const combinationMetaSchema = z.object({
@@ -20,14 +29,24 @@ export const combinationMetaSchema = z.object({
 
 export const createCombinationSchema = combinationMetaSchema.extend({
   spec: combinationSchema,
-  note: text("Note", 500).nullish(),
+  note: text("Note", 500, { multiline: true }).nullish(),
 });
 
 export const saveCombinationSchema = combinationMetaSchema.partial().extend({
   spec: combinationSchema.optional(),
-  note: text("Note", 500).nullish(),
+  note: text("Note", 500, { multiline: true }).nullish(),
   /** The revision the edit started from; the save is refused if someone saved since. */
-  baseRevision: z.number({ error: "baseRevision (the revision you started from) is required." }).int().min(1),
+  baseRevision: z
+    .number({ error: "baseRevision (the revision you started from) is required." })
+    .int("baseRevision must be a whole number.")
+    .min(1, "baseRevision must be 1 or more."),
+});
+
+/** A restore request: which revision to bring back, and the revision the person was looking at. */
+export const restoreRevisionSchema = z.object({
+  action: z.literal("restore", { error: 'action must be "restore"' }),
+  number: z.number({ error: "number (the revision to restore) is required." }).int("number must be a whole number.").min(1, "number must be 1 or more."),
+  baseRevision: saveCombinationSchema.shape.baseRevision,
 });
 
 export const listQuerySchema = z.object({
@@ -36,7 +55,8 @@ export const listQuerySchema = z.object({
   dir: z.enum(["asc", "desc"]).default("desc"),
   page: z.coerce.number().int().min(1, "page must be 1 or more").default(1),
   pageSize: z.coerce.number().int().min(1).max(100, "pageSize must be at most 100").default(20),
-  scope: z.enum(["mine", "shop", "demo"]).optional(),
+  /** mine: owned by me; shop: every visible combination but the demo ones; demo: the shop's examples. */
+  scope: z.enum(["mine", "shop", "demo"], { error: "scope must be mine, shop or demo" }).optional(),
 });
 
 export type CreateCombinationInput = z.input<typeof createCombinationSchema>;
@@ -60,6 +80,7 @@ export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuer
   const q = listQuerySchema.parse(query);
   const conds: (SQL | undefined)[] = [isNull(combinations.deletedAt), visibleTo(actor)];
   if (q.scope === "mine") conds.push(eq(combinations.ownerId, actor.id));
+  if (q.scope === "shop") conds.push(eq(combinations.isDemo, false));
   if (q.scope === "demo") conds.push(eq(combinations.isDemo, true));
   if (q.search) {
     const like = `%${q.search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
@@ -120,20 +141,24 @@ async function getWritable(db: DbOrTx, actor: Actor, id: string, opts: { include
   return row;
 }
 
+/** Customer details are the shop's business: only staff may set them (refused, not silently dropped). */
+function assertMayKeepCustomer(actor: Actor, v: { customerName?: string | null; customerContact?: string | null }) {
+  if ((v.customerName || v.customerContact) && !canCreateForCustomer(actor)) {
+    throw new ForbiddenError("Only shop staff (tuner, sales, admin) can keep a combination for a customer.");
+  }
+}
+
 export async function createCombination(db: DbOrTx, actor: Actor, input: CreateCombinationInput, opts: { isDemo?: boolean } = {}) {
   const v = createCombinationSchema.parse(input);
-  if ((v.customerName || v.customerContact) && !canCreateForCustomer(actor)) {
-    // Members keep their own cars; customer details are the shop's business.
-    v.customerName = null;
-    v.customerContact = null;
-  }
+  assertMayKeepCustomer(actor, v);
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(combinations)
       .values({ ownerId: actor.id, name: v.name, customerName: v.customerName, customerContact: v.customerContact, spec: v.spec, ...listed(v.spec), revision: 1, isDemo: !!opts.isDemo })
       .returning();
     await tx.insert(combinationRevisions).values({ combinationId: row.id, number: 1, name: v.name, spec: v.spec, note: v.note || "First version", authorId: actor.id });
-    return row;
+    // The stored spec is the one calc's schema just parsed.
+    return row as CombinationRow & { spec: Combination };
   });
 }
 
@@ -145,6 +170,7 @@ export async function createCombination(db: DbOrTx, actor: Actor, input: CreateC
 export async function saveCombination(db: DbOrTx, actor: Actor, id: string, input: SaveCombinationInput) {
   const v = saveCombinationSchema.parse(input);
   const current = await getWritable(db, actor, id);
+  assertMayKeepCustomer(actor, v);
   const spec = (v.spec ?? current.spec) as Combination;
   const name = v.name ?? current.name;
   const customer = canCreateForCustomer(actor)
@@ -164,7 +190,7 @@ export async function saveCombination(db: DbOrTx, actor: Actor, id: string, inpu
       );
     }
     await tx.insert(combinationRevisions).values({ combinationId: id, number: row.revision, name, spec, note: v.note || null, authorId: actor.id });
-    return row;
+    return row as CombinationRow & { spec: Combination };
   });
 }
 
@@ -243,7 +269,10 @@ export const importDocumentSchema = z.object({
     .array(
       combinationMetaSchema.extend({
         spec: combinationSchema,
-        revisions: z.array(z.object({ number: z.number().int().min(1), name: z.string().max(120), note: z.string().max(500).nullish(), spec: combinationSchema })).optional(),
+        revisions: z
+          .array(z.object({ number: z.number().int().min(1), name: text("Revision name", 120).min(1, "Each revision needs a name."), note: text("Revision note", 500, { multiline: true }).nullish(), spec: combinationSchema }))
+          .max(500, "At most 500 revisions per combination.")
+          .optional(),
       }),
     )
     .min(1, "The file holds no combinations.")
@@ -251,6 +280,7 @@ export const importDocumentSchema = z.object({
 });
 
 export async function exportCombinations(db: DbOrTx, actor: Actor, ids?: string[]) {
+  if (ids && ids.length > 200) throw new FieldError("ids", "Export at most 200 combinations at a time.");
   const targets = ids?.length
     ? await Promise.all(ids.map((id) => getCombination(db, actor, id)))
     : await db.select().from(combinations).where(and(eq(combinations.ownerId, actor.id), isNull(combinations.deletedAt))).orderBy(asc(combinations.name));

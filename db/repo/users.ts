@@ -1,10 +1,11 @@
-import { and, count, eq, gt, ilike, isNull, or } from "drizzle-orm";
+import { and, count, desc, eq, gt, ilike, isNull, or } from "drizzle-orm";
 import bcrypt from "bcryptjs";
 import crypto from "node:crypto";
+import { z } from "zod";
 import type { DbOrTx } from "../connect";
 import { authTokens, signInAttempts, users, type Role, type User } from "../schema";
 import { ConflictError, NotFoundError } from "../errors";
-import { assert, canManageUsers, type Actor } from "../policy";
+import { assert, canManageUsers, ROLES, type Actor } from "../policy";
 
 export const normalizeEmail = (e: string) => e.trim().toLowerCase();
 
@@ -29,12 +30,28 @@ export function toActor(u: User): Actor {
 /** Sign-up: always a member. Refuses an e-mail already taken (409). */
 export async function createMember(db: DbOrTx, input: { email: string; name: string; password: string }) {
   const email = normalizeEmail(input.email);
-  if (await getUserByEmail(db, email)) throw new ConflictError("An account with that e-mail already exists.", { field: "email" });
-  const [u] = await db
-    .insert(users)
-    .values({ email, name: input.name.trim(), passwordHash: await hashPassword(input.password), role: "member" })
-    .returning();
-  return u;
+  const taken = () => new ConflictError("An account with that e-mail already exists.", { field: "email" });
+  if (await getUserByEmail(db, email)) throw taken();
+  try {
+    const [u] = await db
+      .insert(users)
+      .values({ email, name: input.name.trim(), passwordHash: await hashPassword(input.password), role: "member" })
+      .returning();
+    return u;
+  } catch (e) {
+    // Two sign-ups with one address at the same moment: the unique index decides, the loser gets a 409.
+    if (pgCode(e) === "23505") throw taken();
+    throw e;
+  }
+}
+
+function pgCode(e: unknown): string | undefined {
+  for (let x: unknown = e, i = 0; x && i < 4; i++) {
+    const c = (x as { code?: unknown }).code;
+    if (typeof c === "string") return c;
+    x = (x as { cause?: unknown }).cause;
+  }
+  return undefined;
 }
 
 // Rate limits: a few wrong passwords per account, more per address, in a sliding window.
@@ -43,15 +60,25 @@ export const MAX_FAILURES_PER_ACCOUNT = 5;
 export const MAX_FAILURES_PER_ADDRESS = 20;
 
 export async function isRateLimited(db: DbOrTx, email: string, ip: string): Promise<boolean> {
-  const since = new Date(Date.now() - WINDOW_MS);
+  const addr = normalizeEmail(email);
+  // Per account, failures count since the last success: a person who mistypes now and then is
+  // never locked out by failures they already got past.
+  const [lastOk] = await db
+    .select({ at: signInAttempts.createdAt })
+    .from(signInAttempts)
+    .where(and(eq(signInAttempts.email, addr), eq(signInAttempts.success, true)))
+    .orderBy(desc(signInAttempts.createdAt))
+    .limit(1);
+  const windowStart = new Date(Date.now() - WINDOW_MS);
+  const since = lastOk && lastOk.at > windowStart ? lastOk.at : windowStart;
   const [byEmail] = await db
     .select({ n: count() })
     .from(signInAttempts)
-    .where(and(eq(signInAttempts.email, normalizeEmail(email)), eq(signInAttempts.success, false), gt(signInAttempts.createdAt, since)));
+    .where(and(eq(signInAttempts.email, addr), eq(signInAttempts.success, false), gt(signInAttempts.createdAt, since)));
   const [byIp] = await db
     .select({ n: count() })
     .from(signInAttempts)
-    .where(and(eq(signInAttempts.ip, ip), eq(signInAttempts.success, false), gt(signInAttempts.createdAt, since)));
+    .where(and(eq(signInAttempts.ip, ip), eq(signInAttempts.success, false), gt(signInAttempts.createdAt, windowStart)));
   return byEmail.n >= MAX_FAILURES_PER_ACCOUNT || byIp.n >= MAX_FAILURES_PER_ADDRESS;
 }
 
@@ -59,11 +86,16 @@ export async function recordSignInAttempt(db: DbOrTx, email: string, ip: string,
   await db.insert(signInAttempts).values({ email: normalizeEmail(email), ip, success });
 }
 
+const DUMMY_HASH = bcrypt.hashSync("not-a-password-" + crypto.randomBytes(8).toString("hex"), 10);
+
 /** Checks a password sign-in. Returns the user, or null for any failure (without saying which). */
 export async function verifyPassword(db: DbOrTx, email: string, password: string, ip: string): Promise<User | null | "rate-limited"> {
   if (await isRateLimited(db, email, ip)) return "rate-limited";
   const u = await getUserByEmail(db, email);
-  const ok = !!u && !u.disabled && !!u.passwordHash && (await bcrypt.compare(password, u.passwordHash));
+  // Always pay for one bcrypt comparison, so the answer time does not tell which addresses have accounts.
+  const hash = u && !u.disabled && u.passwordHash ? u.passwordHash : DUMMY_HASH;
+  const matches = await bcrypt.compare(password, hash);
+  const ok = matches && hash !== DUMMY_HASH;
   await recordSignInAttempt(db, email, ip, ok);
   return ok ? u! : null;
 }
@@ -110,9 +142,24 @@ export async function setUnitSystem(db: DbOrTx, actor: Actor, unitSystem: "imper
 }
 
 // Admin: the accounts table.
-export async function listUsers(db: DbOrTx, actor: Actor, q: { search?: string; page: number; pageSize: number }) {
+export const listUsersQuerySchema = z.object({
+  search: z.string().trim().max(100, "Search must be at most 100 characters.").optional(),
+  page: z.coerce.number().int().min(1, "page must be 1 or more").default(1),
+  pageSize: z.coerce.number().int().min(1).max(100, "pageSize must be at most 100").default(25),
+});
+
+export const userAccessSchema = z
+  .object({
+    role: z.enum(ROLES as [Role, ...Role[]], { error: `role must be one of ${ROLES.join(", ")}` }).optional(),
+    disabled: z.boolean({ error: "disabled must be true or false" }).optional(),
+  })
+  .strict();
+
+export async function listUsers(db: DbOrTx, actor: Actor, query: { search?: string; page?: number; pageSize?: number }) {
   assert(canManageUsers(actor));
-  const where = q.search ? or(ilike(users.email, `%${q.search}%`), ilike(users.name, `%${q.search}%`)) : undefined;
+  const q = listUsersQuerySchema.parse(query);
+  const like = q.search ? `%${q.search.replace(/[%_\\]/g, (c) => "\\" + c)}%` : undefined;
+  const where = like ? or(ilike(users.email, like), ilike(users.name, like)) : undefined;
   const [rows, [{ n }]] = await Promise.all([
     db
       .select({ id: users.id, email: users.email, name: users.name, role: users.role, disabled: users.disabled, createdAt: users.createdAt })
@@ -126,8 +173,15 @@ export async function listUsers(db: DbOrTx, actor: Actor, q: { search?: string; 
   return { rows, total: n, page: q.page, pageSize: q.pageSize };
 }
 
-export async function updateUserAccess(db: DbOrTx, actor: Actor, userId: string, patch: { role?: Role; disabled?: boolean }) {
+export async function updateUserAccess(db: DbOrTx, actor: Actor, userId: string, input: { role?: Role; disabled?: boolean }) {
   assert(canManageUsers(actor));
+  const patch = userAccessSchema.parse(input);
+  if (!z.uuid().safeParse(userId).success) throw new NotFoundError("No such user.");
+  if (patch.role === undefined && patch.disabled === undefined) {
+    const u = await getUserById(db, userId);
+    if (!u) throw new NotFoundError("No such user.");
+    return u;
+  }
   if (userId === actor.id && (patch.role !== undefined && patch.role !== "admin" || patch.disabled)) {
     throw new ConflictError("You cannot remove your own admin access.", { field: "role" });
   }
