@@ -14,6 +14,8 @@ export function connect(url: string, max = 10) {
   });
   // An idle client losing its server must not crash the process.
   pool.on("error", (err) => console.error("[db] idle client error:", err.message));
+  // A checked-out client whose server goes away emits "error" too; unhandled, it would end the process.
+  pool.on("connect", (client) => client.on("error", (err) => console.error("[db] client error:", err.message)));
   return { pool, db: drizzle(pool, { schema }) };
 }
 

@@ -1,0 +1,66 @@
+// The local mail fake's inbox, for an admin in development and demos: sign-in links, password
+// resets and recommendation sheets "sent" by the app land here instead of in real mailboxes.
+import type { Metadata } from "next";
+import { env } from "@/app/_lib/env";
+import { requirePageUser } from "@/app/_lib/session";
+import { Notice } from "@/components/ui/notice";
+
+export const metadata: Metadata = { title: "Mailbox" };
+export const dynamic = "force-dynamic";
+
+type Captured = { id: number; from: string; to: string[]; subject: string; text: string; date: string };
+
+async function readInbox(base: string): Promise<{ messages: Captured[] } | { error: string }> {
+  try {
+    const res = await fetch(`${base.replace(/\/$/, "")}/messages`, { cache: "no-store", signal: AbortSignal.timeout(5_000) });
+    if (!res.ok) return { error: `The mail fake answered HTTP ${res.status}.` };
+    const list = (await res.json()) as Captured[];
+    return { messages: Array.isArray(list) ? list.slice(0, 100) : [] };
+  } catch {
+    return { error: "The local mail fake is not answering. Is it running (npm start starts it)?" };
+  }
+}
+
+export default async function MailboxPage() {
+  await requirePageUser(["admin"]);
+  const base = env().MAIL_FAKE_URL;
+  return (
+    <div className="flex max-w-4xl flex-col gap-4">
+      <div>
+        <h1 className="text-2xl font-semibold">Mailbox</h1>
+        <p className="text-sm text-muted">Messages the app sent, as captured by the local mail fake, newest first.</p>
+      </div>
+      {!base ? (
+        <Notice tone="info" title="No local mail fake is configured">
+          MAIL_FAKE_URL is not set, so mail goes to the real SMTP server ({env().SMTP_URL.replace(/\/\/[^@/]*@/, "//")}) and
+          nothing is captured here.
+        </Notice>
+      ) : (
+        <Inbox base={base} />
+      )}
+    </div>
+  );
+}
+
+async function Inbox({ base }: { base: string }) {
+  const inbox = await readInbox(base);
+  if ("error" in inbox) return <Notice tone="danger">{inbox.error}</Notice>;
+  if (!inbox.messages.length) return <p className="text-sm">No messages yet.</p>;
+  return (
+    <ul className="flex flex-col gap-2">
+      {inbox.messages.map((m) => (
+        <li key={m.id} className="rounded-lg border border-line bg-panel">
+          <details>
+            <summary className="cursor-pointer px-3 py-2">
+              <span className="font-medium">{m.subject || "(no subject)"}</span>
+              <span className="ml-2 text-sm text-muted">
+                to {m.to.join(", ")} · <time dateTime={m.date}>{new Date(m.date).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })}</time>
+              </span>
+            </summary>
+            <pre className="overflow-x-auto border-t border-line px-3 py-2 text-xs whitespace-pre-wrap">{m.text}</pre>
+          </details>
+        </li>
+      ))}
+    </ul>
+  );
+}

@@ -1,0 +1,17 @@
+import type { Metadata } from "next";
+import { requirePageUser } from "@/app/_lib/session";
+import { CombinationsList } from "@/components/combinations/combinations-list";
+import { Notice } from "@/components/ui/notice";
+
+export const metadata: Metadata = { title: "Combinations" };
+
+export default async function CombinationsPage({ searchParams }: { searchParams: Promise<{ denied?: string }> }) {
+  const user = await requirePageUser();
+  const { denied } = await searchParams;
+  return (
+    <div className="flex flex-col gap-4">
+      {denied ? <Notice tone="warning">That page is not open to your role ({user.role}).</Notice> : null}
+      <CombinationsList role={user.role} unitSystem={user.unitSystem} />
+    </div>
+  );
+}

@@ -1,0 +1,71 @@
+"use client";
+import { useActionState, useState } from "react";
+import { createCombinationAction } from "@/app/(app)/combinations/actions";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import type { TemplateKey } from "./templates";
+
+type NewCombinationFormProps = {
+  templates: { key: TemplateKey; label: string; summary: string }[];
+  /** Tuners, sales and admins may keep it for a customer. */
+  staff: boolean;
+};
+
+export function NewCombinationForm({ templates, staff }: NewCombinationFormProps) {
+  const [state, action, pending] = useActionState(createCombinationAction, undefined);
+  // Controlled, so what was typed survives the form reset React does after an action answers.
+  const [v, setV] = useState({ name: "", template: templates[0]?.key ?? "", customerName: "", customerContact: "", note: "" });
+  const bind = (k: keyof typeof v) => ({ value: v[k], onChange: (e: React.ChangeEvent<HTMLInputElement>) => setV({ ...v, [k]: e.target.value }) });
+  const fe = state && !state.ok ? (state.fieldErrors ?? {}) : {};
+  const specErrors = Object.entries(fe).filter(([k]) => k.startsWith("spec"));
+  const shown = new Set(["name", "template", "customerName", "customerContact", "note"]);
+  const other = state && !state.ok && !Object.keys(fe).some((k) => shown.has(k)) ? state.message : null;
+
+  return (
+    <form action={action} className="flex flex-col gap-5" noValidate>
+      <Field label="Name" name="name" required maxLength={120} placeholder="e.g. Weekend small-block" errors={fe.name} autoComplete="off" {...bind("name")} />
+
+      <fieldset className="flex flex-col gap-2" aria-describedby={fe.template ? "template-error" : undefined}>
+        <legend className="mb-1 text-sm font-medium">Starting point</legend>
+        {templates.map((t) => (
+          <label key={t.key} className="flex cursor-pointer gap-3 rounded-md border border-line bg-panel p-3 has-[:checked]:border-accent">
+            <input type="radio" name="template" value={t.key} checked={v.template === t.key} onChange={() => setV({ ...v, template: t.key })} className="mt-1" />
+            <span>
+              <span className="block text-sm font-medium">{t.label}</span>
+              <span className="block text-xs text-muted tabular-nums">{t.summary}</span>
+            </span>
+          </label>
+        ))}
+        {fe.template ? (
+          <p id="template-error" role="alert" className="text-xs text-danger">
+            {fe.template.join(" ")}
+          </p>
+        ) : null}
+      </fieldset>
+
+      {staff ? (
+        <fieldset className="flex flex-col gap-3 rounded-md border border-line p-3">
+          <legend className="px-1 text-sm font-medium">On behalf of a customer (optional)</legend>
+          <Field label="Customer name" name="customerName" maxLength={120} autoComplete="off" errors={fe.customerName} {...bind("customerName")} />
+          <Field label="Customer contact" name="customerContact" maxLength={200} hint="Phone or e-mail." autoComplete="off" errors={fe.customerContact} {...bind("customerContact")} />
+        </fieldset>
+      ) : null}
+
+      <Field label="Note for the first revision (optional)" name="note" maxLength={500} placeholder="As it came in" errors={fe.note} {...bind("note")} />
+
+      {specErrors.length ? (
+        <p role="alert" className="text-sm text-danger">
+          The starting point could not be used: {specErrors.map(([k, v]) => `${k}: ${v.join(" ")}`).join("; ")}
+        </p>
+      ) : null}
+      {other ? (
+        <p role="alert" className="text-sm text-danger">
+          {other}
+        </p>
+      ) : null}
+      <Button type="submit" disabled={pending} className="self-start">
+        {pending ? "Creating…" : "Create and open in the planner"}
+      </Button>
+    </form>
+  );
+}

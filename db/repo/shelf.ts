@@ -1,0 +1,657 @@
+// The parts shelf: the shop's blowers and pulleys with price and stock. Everyone signed in reads
+// it; only the admin changes it (db/policy.ts canEditShelf). Quantities are SI like calc/, money
+// is numeric in the database (read back as strings) and decimal.js here, never binary floats.
+// The zod schemas below are the one set of rules for the API, the admin's forms and CSV import.
+import Decimal from "decimal.js";
+import { and, asc, count, desc, eq, gt, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
+import Papa from "papaparse";
+import { z } from "zod";
+import { blowerKindSchema, blowerSchema, fromSI, toSI, type UnitSystem } from "@/calc";
+import type { DbOrTx } from "../connect";
+import { FieldError, NotFoundError } from "../errors";
+import { assert, canEditShelf, canSeeShelf, type Actor } from "../policy";
+import { blowers, pulleys, type BlowerRow, type PulleyRow } from "../schema";
+
+// ---------------------------------------------------------------- money
+
+/** Decimal arithmetic for prices: plenty of digits, half-up rounding to cents like a till. */
+export const Money = Decimal.clone({ precision: 40, rounding: Decimal.ROUND_HALF_UP });
+export type MoneyValue = InstanceType<typeof Money>;
+
+const MONEY_TEXT = /^\d{1,10}(\.\d{1,2})?$/;
+export const MAX_PRICE = "9999999999.99";
+
+/** A price: "19.99" or 19.99 in, "19.99" out (two decimals, at most 9 999 999 999.99, not negative). */
+export const moneySchema = z
+  .union([z.string(), z.number()], { error: "Price must be an amount like 19.99." })
+  .transform((v, ctx) => {
+    const t = (typeof v === "number" ? (Number.isFinite(v) ? String(v) : "") : v).trim().replace(/^\$/, "");
+    if (!MONEY_TEXT.test(t)) {
+      ctx.addIssue({ code: "custom", message: "Price must be an amount with at most two decimals, like 19.99 (no minus sign)." });
+      return z.NEVER;
+    }
+    return new Money(t).toFixed(2);
+  });
+
+/** Price × quantity, exact, as a two-decimal string. */
+export function lineTotal(unitPrice: string, quantity: number): string {
+  return new Money(unitPrice).times(quantity).toDecimalPlaces(2).toFixed(2);
+}
+
+/** Sum of amounts, exact, as a two-decimal string. */
+export function sumMoney(amounts: readonly string[]): string {
+  return amounts.reduce((acc, a) => acc.plus(new Money(a)), new Money(0)).toDecimalPlaces(2).toFixed(2);
+}
+
+/** "1234.5" → "1,234.50" for display (no currency symbol: the shop's currency is its own). */
+export function formatMoney(amount: string): string {
+  const [whole, frac = ""] = new Money(amount).toFixed(2).split(".");
+  return `${whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",")}.${frac}`;
+}
+
+// ---------------------------------------------------------------- records
+
+const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).trim().max(max, `${label} must be at most ${max} characters.`);
+
+/** Our own part numbers: capitals, digits and dashes, e.g. PW-BP-0340-8. */
+export const partNumberSchema = z
+  .string({ error: "Part number is required." })
+  .trim()
+  .toUpperCase()
+  .regex(/^[A-Z0-9][A-Z0-9-]{2,39}$/, "Part number must be 3–40 capitals, digits or dashes, like PW-BP-0340-8.");
+
+export const stockSchema = z
+  .number({ error: "Stock must be a whole number (0 or more)." })
+  .int("Stock must be a whole number (0 or more).")
+  .min(0, "Stock must be a whole number (0 or more).")
+  .max(1_000_000, "Stock must be at most 1 000 000.");
+
+function boundedSI(label: string, min: number, max: number, unit: string) {
+  const message = `${label} must be between ${min} and ${max} ${unit}.`;
+  return z.number({ error: message }).min(min, message).max(max, message);
+}
+
+/** A blower on the shelf (SI): the model's blower fields plus what the shop sells it as. */
+export const blowerRecordSchema = blowerSchema.safeExtend({
+  partNumber: partNumberSchema,
+  name: text("Name", 120).min(1, "Give the blower a name, e.g. “Roots 1.9 L/rev”."),
+  notes: text("Notes", 2000).default(""),
+  price: moneySchema,
+  stock: stockSchema,
+});
+
+export const PULLEY_DIAMETER_MIN = 0.03;
+export const PULLEY_DIAMETER_MAX = 0.5;
+export const BELT_MINIMUM_MIN = 0.02;
+export const BELT_MINIMUM_MAX = 0.3;
+
+/** A pulley on the shelf (SI: diameters in m). */
+export const pulleyRecordSchema = z.object({
+  partNumber: partNumberSchema,
+  position: z.enum(["crank", "blower"], { error: "Position must be crank or blower." }),
+  diameter: boundedSI("Diameter", PULLEY_DIAMETER_MIN, PULLEY_DIAMETER_MAX, "m"),
+  ribCount: z.number({ error: "Rib count must be a whole number from 3 to 16." }).int("Rib count must be a whole number from 3 to 16.").min(3, "Rib count must be a whole number from 3 to 16.").max(16, "Rib count must be a whole number from 3 to 16."),
+  minBeltDiameter: boundedSI("Minimum belt diameter", BELT_MINIMUM_MIN, BELT_MINIMUM_MAX, "m").nullable().default(null),
+  price: moneySchema,
+  stock: stockSchema,
+  notes: text("Notes", 2000).default(""),
+});
+
+export type BlowerRecordInput = z.input<typeof blowerRecordSchema>;
+export type BlowerRecord = z.output<typeof blowerRecordSchema>;
+export type PulleyRecordInput = z.input<typeof pulleyRecordSchema>;
+export type PulleyRecord = z.output<typeof pulleyRecordSchema>;
+
+// Forms take lengths and volumes in the user's units and efficiencies in percent; their output is
+// the SI record above, so the browser and the API apply the same rules.
+const numberIn = (label: string, unit: string) =>
+  z.union([z.string(), z.number()]).transform((v, ctx) => {
+    const n = typeof v === "number" ? v : v.trim() === "" ? NaN : Number(v.trim());
+    if (!Number.isFinite(n)) {
+      ctx.addIssue({ code: "custom", message: `${label} must be a number${unit ? ` in ${unit}` : ""}.` });
+      return z.NEVER;
+    }
+    return n;
+  });
+const optionalNumberIn = (label: string, unit: string) =>
+  z.union([z.string(), z.number(), z.null()]).transform((v, ctx) => {
+    if (v === null || (typeof v === "string" && v.trim() === "")) return null;
+    const n = typeof v === "number" ? v : Number(v.trim());
+    if (!Number.isFinite(n)) {
+      ctx.addIssue({ code: "custom", message: `${label} must be a number in ${unit}, or left empty.` });
+      return z.NEVER;
+    }
+    return n;
+  });
+const round = (v: number, digits: number) => Number(v.toFixed(digits));
+
+/** Validates a form's converted output with a record schema, keeping each issue on its field. */
+function into<S extends z.ZodType>(schema: S) {
+  return (value: unknown, ctx: z.RefinementCtx): z.output<S> => {
+    const r = schema.safeParse(value);
+    if (r.success) return r.data;
+    for (const issue of r.error.issues) ctx.addIssue({ code: "custom", path: issue.path as (string | number)[], message: issue.message });
+    return z.NEVER;
+  };
+}
+
+/** The pulley form in the user's units; parses to a SI pulley record. */
+export function pulleyFormSchema(system: UnitSystem) {
+  const unit = system === "metric" ? "mm" : "in";
+  const lo = round(fromSI("length-small", PULLEY_DIAMETER_MIN, system), 2);
+  const hi = round(fromSI("length-small", PULLEY_DIAMETER_MAX, system), 2);
+  return z
+    .object({
+      partNumber: z.string(),
+      position: z.string(),
+      diameter: numberIn("Diameter", unit).refine((d) => d >= lo && d <= hi, `Diameter must be between ${lo} and ${hi} ${unit}.`),
+      ribCount: numberIn("Rib count", ""),
+      minBeltDiameter: optionalNumberIn("Minimum belt diameter", unit),
+      price: z.union([z.string(), z.number()]),
+      stock: numberIn("Stock", ""),
+      notes: z.string().default(""),
+    })
+    .transform((f) => ({
+      ...f,
+      diameter: toSI("length-small", f.diameter, system),
+      minBeltDiameter: f.minBeltDiameter === null ? null : toSI("length-small", f.minBeltDiameter, system),
+    }))
+    .transform(into(pulleyRecordSchema));
+}
+
+/** The blower form in the user's units (displacement per rev) and percent (efficiencies). */
+export function blowerFormSchema(system: UnitSystem) {
+  const unit = system === "metric" ? "L/rev" : "in³/rev";
+  return z
+    .object({
+      partNumber: z.string(),
+      name: z.string(),
+      kind: blowerKindSchema,
+      displacementPerRev: numberIn("Blower displacement", unit),
+      builtInVolumeRatio: numberIn("Built-in volume ratio", ""),
+      maxRpm: numberIn("Blower speed limit", "rpm"),
+      volumetricEfficiencyRef: numberIn("Reference volumetric efficiency", "%"),
+      referenceRpm: numberIn("Reference speed", "rpm"),
+      internalEfficiency: numberIn("Internal efficiency", "%"),
+      mechanicalEfficiency: numberIn("Drive mechanical efficiency", "%"),
+      notes: z.string().default(""),
+      price: z.union([z.string(), z.number()]),
+      stock: numberIn("Stock", ""),
+    })
+    .transform((f) => ({
+      ...f,
+      displacementPerRev: toSI("blower-displacement", f.displacementPerRev, system),
+      volumetricEfficiencyRef: f.volumetricEfficiencyRef / 100,
+      internalEfficiency: f.internalEfficiency / 100,
+      mechanicalEfficiency: f.mechanicalEfficiency / 100,
+    }))
+    .transform(into(blowerRecordSchema));
+}
+
+// ---------------------------------------------------------------- lists
+
+const flag = z
+  .union([z.boolean(), z.enum(["1", "0", "true", "false", ""])], { error: "inStock must be 1 or 0." })
+  .optional()
+  .transform((v) => v === true || v === "1" || v === "true");
+
+const listBase = {
+  search: text("Search", 100).optional(),
+  dir: z.enum(["asc", "desc"], { error: "dir must be asc or desc." }).default("asc"),
+  page: z.coerce.number().int().min(1, "page must be 1 or more").default(1),
+  pageSize: z.coerce.number().int().min(1).max(200, "pageSize must be at most 200").default(25),
+  inStock: flag,
+};
+
+export const pulleyListQuerySchema = z.object({
+  ...listBase,
+  position: z.enum(["crank", "blower", ""], { error: "position must be crank or blower." }).optional(),
+  ribCount: z.union([z.literal(""), z.coerce.number().int().min(3).max(16)], { error: "ribCount must be a whole number from 3 to 16." }).optional(),
+  sort: z.enum(["partNumber", "diameter", "ribCount", "price", "stock"], { error: "sort must be partNumber, diameter, ribCount, price or stock." }).default("diameter"),
+});
+
+export const blowerListQuerySchema = z.object({
+  ...listBase,
+  kind: z.enum(["roots", "twin-screw", ""], { error: "kind must be roots or twin-screw." }).optional(),
+  sort: z.enum(["partNumber", "name", "displacementPerRev", "maxRpm", "price", "stock"], { error: "sort must be partNumber, name, displacementPerRev, maxRpm, price or stock." }).default("displacementPerRev"),
+});
+
+export type PulleyListQuery = z.input<typeof pulleyListQuerySchema>;
+export type BlowerListQuery = z.input<typeof blowerListQuerySchema>;
+export type Page<T> = { rows: T[]; total: number; page: number; pageSize: number };
+
+const likeOf = (s: string) => `%${s.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
+
+export async function listPulleys(db: DbOrTx, actor: Actor, query: PulleyListQuery = {}): Promise<Page<PulleyRow>> {
+  assert(canSeeShelf(actor));
+  const q = pulleyListQuerySchema.parse(query);
+  const conds: (SQL | undefined)[] = [];
+  if (q.search) conds.push(or(ilike(pulleys.partNumber, likeOf(q.search)), ilike(pulleys.notes, likeOf(q.search))));
+  if (q.position) conds.push(eq(pulleys.position, q.position));
+  if (typeof q.ribCount === "number") conds.push(eq(pulleys.ribCount, q.ribCount));
+  if (q.inStock) conds.push(gt(pulleys.stock, 0));
+  const where = and(...conds);
+  const col = pulleys[q.sort];
+  const [rows, [{ n }]] = await Promise.all([
+    db
+      .select()
+      .from(pulleys)
+      .where(where)
+      .orderBy(q.dir === "asc" ? asc(col) : desc(col), asc(pulleys.partNumber))
+      .limit(q.pageSize)
+      .offset((q.page - 1) * q.pageSize),
+    db.select({ n: count() }).from(pulleys).where(where),
+  ]);
+  return { rows, total: n, page: q.page, pageSize: q.pageSize };
+}
+
+export async function listBlowers(db: DbOrTx, actor: Actor, query: BlowerListQuery = {}): Promise<Page<BlowerRow>> {
+  assert(canSeeShelf(actor));
+  const q = blowerListQuerySchema.parse(query);
+  const conds: (SQL | undefined)[] = [];
+  if (q.search) conds.push(or(ilike(blowers.partNumber, likeOf(q.search)), ilike(blowers.name, likeOf(q.search)), ilike(blowers.notes, likeOf(q.search))));
+  if (q.kind) conds.push(eq(blowers.kind, q.kind));
+  if (q.inStock) conds.push(gt(blowers.stock, 0));
+  const where = and(...conds);
+  const col = blowers[q.sort];
+  const [rows, [{ n }]] = await Promise.all([
+    db
+      .select()
+      .from(blowers)
+      .where(where)
+      .orderBy(q.dir === "asc" ? asc(col) : desc(col), asc(blowers.partNumber))
+      .limit(q.pageSize)
+      .offset((q.page - 1) * q.pageSize),
+    db.select({ n: count() }).from(blowers).where(where),
+  ]);
+  return { rows, total: n, page: q.page, pageSize: q.pageSize };
+}
+
+/** Every blower pulley on the shelf, smallest first: the candidates of the pulley ladder. */
+export async function listBlowerPulleys(db: DbOrTx, actor: Actor): Promise<PulleyRow[]> {
+  assert(canSeeShelf(actor));
+  return db.select().from(pulleys).where(eq(pulleys.position, "blower")).orderBy(asc(pulleys.diameter), asc(pulleys.ribCount));
+}
+
+/** Everything on the shelf as parts-list choices: pulleys by position and size, then blowers. */
+export async function listShelfParts(db: DbOrTx, actor: Actor) {
+  assert(canSeeShelf(actor));
+  const [ps, bs] = await Promise.all([
+    db.select().from(pulleys).orderBy(asc(pulleys.position), asc(pulleys.diameter), asc(pulleys.ribCount)),
+    db.select().from(blowers).orderBy(asc(blowers.displacementPerRev)),
+  ]);
+  return [
+    ...ps.map((p) => ({ partNumber: p.partNumber, description: describePulley(p), price: p.price, stock: p.stock, position: p.position as string, diameter: p.diameter })),
+    ...bs.map((b) => ({ partNumber: b.partNumber, description: `Blower, ${b.name}`, price: b.price, stock: b.stock, position: "blower-unit" })),
+  ];
+}
+
+/** Shelf items by part number (for parts lists). */
+export async function findParts(db: DbOrTx, actor: Actor, partNumbers: readonly string[]) {
+  assert(canSeeShelf(actor));
+  const wanted = [...new Set(partNumbers.map((p) => p.toUpperCase()))];
+  if (!wanted.length) return new Map<string, { partNumber: string; description: string; price: string }>();
+  const [ps, bs] = await Promise.all([
+    db.select().from(pulleys).where(inArray(pulleys.partNumber, wanted)),
+    db.select().from(blowers).where(inArray(blowers.partNumber, wanted)),
+  ]);
+  const out = new Map<string, { partNumber: string; description: string; price: string }>();
+  for (const p of ps) out.set(p.partNumber, { partNumber: p.partNumber, description: describePulley(p), price: p.price });
+  for (const b of bs) out.set(b.partNumber, { partNumber: b.partNumber, description: `Blower, ${b.name}`, price: b.price });
+  return out;
+}
+
+/** "Blower pulley 3.40 in (86.4 mm), 8-rib". */
+export function describePulley(p: Pick<PulleyRow, "position" | "diameter" | "ribCount">): string {
+  const inches = fromSI("length-small", p.diameter, "imperial");
+  const mm = fromSI("length-small", p.diameter, "metric");
+  return `${p.position === "crank" ? "Crank" : "Blower"} pulley ${inches.toFixed(2)} in (${mm.toFixed(1)} mm), ${p.ribCount}-rib`;
+}
+
+// ---------------------------------------------------------------- edits (admin)
+
+const ONLY_ADMIN = "Only the admin changes the parts shelf.";
+const isUuid = (id: string) => z.uuid().safeParse(id).success;
+
+async function partNumberTaken(db: DbOrTx, partNumber: string, exceptId?: string) {
+  const [p] = await db.select({ id: pulleys.id }).from(pulleys).where(eq(pulleys.partNumber, partNumber));
+  const [b] = await db.select({ id: blowers.id }).from(blowers).where(eq(blowers.partNumber, partNumber));
+  const hit = p?.id ?? b?.id;
+  return hit !== undefined && hit !== exceptId;
+}
+
+export async function createPulley(db: DbOrTx, actor: Actor, input: PulleyRecordInput): Promise<PulleyRow> {
+  assert(canEditShelf(actor), ONLY_ADMIN);
+  const v = pulleyRecordSchema.parse(input);
+  if (await partNumberTaken(db, v.partNumber)) throw new FieldError("partNumber", `Part number ${v.partNumber} is already on the shelf.`);
+  const [row] = await db.insert(pulleys).values(v).returning();
+  return row;
+}
+
+export async function updatePulley(db: DbOrTx, actor: Actor, id: string, input: PulleyRecordInput): Promise<PulleyRow> {
+  assert(canEditShelf(actor), ONLY_ADMIN);
+  const v = pulleyRecordSchema.parse(input);
+  if (!isUuid(id)) throw new NotFoundError("No such pulley.");
+  if (await partNumberTaken(db, v.partNumber, id)) throw new FieldError("partNumber", `Part number ${v.partNumber} is already on the shelf.`);
+  const [row] = await db.update(pulleys).set({ ...v, updatedAt: new Date() }).where(eq(pulleys.id, id)).returning();
+  if (!row) throw new NotFoundError("No such pulley.");
+  return row;
+}
+
+export async function deletePulley(db: DbOrTx, actor: Actor, id: string) {
+  assert(canEditShelf(actor), ONLY_ADMIN);
+  if (!isUuid(id)) throw new NotFoundError("No such pulley.");
+  const [row] = await db.delete(pulleys).where(eq(pulleys.id, id)).returning({ id: pulleys.id });
+  if (!row) throw new NotFoundError("No such pulley.");
+}
+
+export async function createBlower(db: DbOrTx, actor: Actor, input: BlowerRecordInput): Promise<BlowerRow> {
+  assert(canEditShelf(actor), ONLY_ADMIN);
+  const v = blowerRecordSchema.parse(input);
+  if (await partNumberTaken(db, v.partNumber)) throw new FieldError("partNumber", `Part number ${v.partNumber} is already on the shelf.`);
+  const [row] = await db.insert(blowers).values(v).returning();
+  return row;
+}
+
+export async function updateBlower(db: DbOrTx, actor: Actor, id: string, input: BlowerRecordInput): Promise<BlowerRow> {
+  assert(canEditShelf(actor), ONLY_ADMIN);
+  const v = blowerRecordSchema.parse(input);
+  if (!isUuid(id)) throw new NotFoundError("No such blower.");
+  if (await partNumberTaken(db, v.partNumber, id)) throw new FieldError("partNumber", `Part number ${v.partNumber} is already on the shelf.`);
+  const [row] = await db.update(blowers).set({ ...v, updatedAt: new Date() }).where(eq(blowers.id, id)).returning();
+  if (!row) throw new NotFoundError("No such blower.");
+  return row;
+}
+
+export async function deleteBlower(db: DbOrTx, actor: Actor, id: string) {
+  assert(canEditShelf(actor), ONLY_ADMIN);
+  if (!isUuid(id)) throw new NotFoundError("No such blower.");
+  const [row] = await db.delete(blowers).where(eq(blowers.id, id)).returning({ id: blowers.id });
+  if (!row) throw new NotFoundError("No such blower.");
+}
+
+// ---------------------------------------------------------------- CSV
+
+export type ShelfKind = "pulleys" | "blowers";
+export const shelfKindSchema = z.enum(["pulleys", "blowers"], { error: "kind must be pulleys or blowers." });
+
+/** Largest CSV accepted, in bytes and in data rows. */
+export const MAX_CSV_BYTES = 1_000_000;
+export const MAX_CSV_ROWS = 5_000;
+
+// Column names carry their unit so a file means the same thing to everyone who opens it.
+export const PULLEY_CSV_COLUMNS = ["part_number", "position", "diameter_mm", "rib_count", "min_belt_diameter_mm", "price", "stock", "notes"] as const;
+export const BLOWER_CSV_COLUMNS = [
+  "part_number",
+  "name",
+  "kind",
+  "displacement_l_per_rev",
+  "built_in_volume_ratio",
+  "max_rpm",
+  "volumetric_efficiency_ref",
+  "reference_rpm",
+  "internal_efficiency",
+  "mechanical_efficiency",
+  "price",
+  "stock",
+  "notes",
+] as const;
+const OPTIONAL_COLUMNS = new Set(["notes", "min_belt_diameter_mm"]);
+
+export const csvColumns = (kind: ShelfKind): readonly string[] => (kind === "pulleys" ? PULLEY_CSV_COLUMNS : BLOWER_CSV_COLUMNS);
+
+/** One problem in a CSV file: its line in the file (1 = the header), the column, the message. */
+export type CsvRowError = { line: number; column: string; message: string };
+export type CsvPreviewRow<T> = { line: number; record: T };
+export type CsvParseResult<T> = { rows: CsvPreviewRow<T>[]; errors: CsvRowError[] };
+
+// Schema paths back to the file's column names, so an error names what the person sees.
+const PULLEY_FIELD_TO_COLUMN: Record<string, string> = {
+  partNumber: "part_number",
+  position: "position",
+  diameter: "diameter_mm",
+  ribCount: "rib_count",
+  minBeltDiameter: "min_belt_diameter_mm",
+  price: "price",
+  stock: "stock",
+  notes: "notes",
+};
+const BLOWER_FIELD_TO_COLUMN: Record<string, string> = {
+  partNumber: "part_number",
+  name: "name",
+  kind: "kind",
+  displacementPerRev: "displacement_l_per_rev",
+  builtInVolumeRatio: "built_in_volume_ratio",
+  maxRpm: "max_rpm",
+  volumetricEfficiencyRef: "volumetric_efficiency_ref",
+  referenceRpm: "reference_rpm",
+  internalEfficiency: "internal_efficiency",
+  mechanicalEfficiency: "mechanical_efficiency",
+  price: "price",
+  stock: "stock",
+  notes: "notes",
+};
+
+/** A text cell: a leading apostrophe that export added to defuse spreadsheet formulas is dropped. */
+const textCell = (s: string | undefined) => (s ?? "").replace(/^'(?=[=+\-@])/, "");
+/** On export, text that a spreadsheet would run as a formula gets a leading apostrophe. */
+const safeText = (s: string) => (/^[=+\-@]/.test(s) ? `'${s}` : s);
+
+/** A cell as a number; empty or not a number → NaN so the schema names the field. */
+const num = (s: string | undefined) => (s === undefined || s.trim() === "" ? NaN : Number(s.trim()));
+
+/** Checks the size, the header and every row; returns the records (SI) and per-line errors. Never writes. */
+export function parseShelfCsv(kind: "pulleys", text: string): CsvParseResult<PulleyRecord>;
+export function parseShelfCsv(kind: "blowers", text: string): CsvParseResult<BlowerRecord>;
+export function parseShelfCsv(kind: ShelfKind, text: string): CsvParseResult<PulleyRecord | BlowerRecord>;
+export function parseShelfCsv(kind: ShelfKind, text: string): CsvParseResult<PulleyRecord | BlowerRecord> {
+  const bytes = new TextEncoder().encode(text).length;
+  if (bytes > MAX_CSV_BYTES) {
+    throw new FieldError("file", `The file is ${(bytes / 1_000_000).toFixed(1)} MB; the limit is 1 MB and ${MAX_CSV_ROWS.toLocaleString("en-US")} rows. Split it into smaller files.`);
+  }
+  const body = text.replace(/^\uFEFF/, "");
+  if (!body.trim()) throw new FieldError("file", `The file is empty. Expected a header line with the columns: ${csvColumns(kind).join(", ")}.`);
+  const parsed = Papa.parse<string[]>(body, { header: false, skipEmptyLines: false });
+  const table = parsed.data;
+  const expected = csvColumns(kind);
+  const header = (table[0] ?? []).map((h) => h.trim().toLowerCase());
+  const missing = expected.filter((c) => !OPTIONAL_COLUMNS.has(c) && !header.includes(c));
+  const unknown = header.filter((h) => h !== "" && !expected.includes(h));
+  if (missing.length || unknown.length) {
+    const parts = [missing.length ? `missing ${missing.join(", ")}` : "", unknown.length ? `unknown ${unknown.join(", ")}` : ""].filter(Boolean);
+    throw new FieldError("file", `The columns do not match a ${kind === "pulleys" ? "pulley" : "blower"} file (${parts.join("; ")}). Expected columns: ${expected.join(", ")}.`);
+  }
+
+  const rows: CsvPreviewRow<PulleyRecord | BlowerRecord>[] = [];
+  const errors: CsvRowError[] = [];
+  const seen = new Map<string, number>();
+  const toColumn = kind === "pulleys" ? PULLEY_FIELD_TO_COLUMN : BLOWER_FIELD_TO_COLUMN;
+  let line = 1;
+  let dataRows = 0;
+  for (let i = 0; i < table.length; i++) {
+    const cells = table[i];
+    const here = line;
+    // A quoted cell may span lines: the next row starts after them.
+    line += 1 + cells.reduce((n, c) => n + (c.match(/\n/g)?.length ?? 0), 0);
+    if (i === 0) continue;
+    if (cells.every((c) => c.trim() === "")) continue;
+    if (++dataRows > MAX_CSV_ROWS) {
+      throw new FieldError("file", `The file has more than ${MAX_CSV_ROWS.toLocaleString("en-US")} rows; the limit is ${MAX_CSV_ROWS.toLocaleString("en-US")} rows and 1 MB. Split it into smaller files.`);
+    }
+    if (cells.length !== header.length) {
+      errors.push({ line: here, column: "", message: `This line has ${cells.length} cells; the header has ${header.length}.` });
+      continue;
+    }
+    const cell = (name: string) => {
+      const k = header.indexOf(name);
+      return k < 0 ? undefined : cells[k];
+    };
+    const raw =
+      kind === "pulleys"
+        ? {
+            partNumber: cell("part_number") ?? "",
+            position: (cell("position") ?? "").trim().toLowerCase(),
+            diameter: num(cell("diameter_mm")) / 1000,
+            ribCount: num(cell("rib_count")),
+            minBeltDiameter: (cell("min_belt_diameter_mm") ?? "").trim() === "" ? null : num(cell("min_belt_diameter_mm")) / 1000,
+            price: cell("price") ?? "",
+            stock: num(cell("stock")),
+            notes: textCell(cell("notes")),
+          }
+        : {
+            partNumber: cell("part_number") ?? "",
+            name: textCell(cell("name")),
+            kind: (cell("kind") ?? "").trim().toLowerCase(),
+            displacementPerRev: num(cell("displacement_l_per_rev")) / 1000,
+            builtInVolumeRatio: num(cell("built_in_volume_ratio")),
+            maxRpm: num(cell("max_rpm")),
+            volumetricEfficiencyRef: num(cell("volumetric_efficiency_ref")),
+            referenceRpm: num(cell("reference_rpm")),
+            internalEfficiency: num(cell("internal_efficiency")),
+            mechanicalEfficiency: num(cell("mechanical_efficiency")),
+            price: cell("price") ?? "",
+            stock: num(cell("stock")),
+            notes: textCell(cell("notes")),
+          };
+    const result = (kind === "pulleys" ? pulleyRecordSchema : blowerRecordSchema).safeParse(raw);
+    if (!result.success) {
+      for (const issue of result.error.issues) {
+        const field = String(issue.path[0] ?? "");
+        // SI bounds in a message would confuse: the file is in mm and L/rev.
+        const message = issue.message.replace(/between ([\d.]+) and ([\d.]+) m\b\.?/, (_m, a, b) => `between ${Number(a) * 1000} and ${Number(b) * 1000} mm.`);
+        errors.push({ line: here, column: toColumn[field] ?? field, message });
+      }
+      continue;
+    }
+    const pn = result.data.partNumber;
+    const first = seen.get(pn);
+    if (first !== undefined) {
+      errors.push({ line: here, column: "part_number", message: `Part number ${pn} is already on line ${first} of this file.` });
+      continue;
+    }
+    seen.set(pn, here);
+    rows.push({ line: here, record: result.data });
+  }
+  if (!rows.length && !errors.length) throw new FieldError("file", "The file has a header but no rows.");
+  return { rows, errors };
+}
+
+export type ImportOutcome = {
+  kind: ShelfKind;
+  committed: boolean;
+  rows: CsvPreviewRow<PulleyRecord | BlowerRecord>[];
+  errors: CsvRowError[];
+  inserted: number;
+  updated: number;
+};
+
+/**
+ * CSV import: `commit: false` is the preview; `commit: true` writes every row (upsert by part
+ * number) in one transaction, or nothing at all if any row has an error.
+ */
+export async function importShelfCsv(db: DbOrTx, actor: Actor, kind: ShelfKind, csv: string, opts: { commit: boolean }): Promise<ImportOutcome> {
+  assert(canEditShelf(actor), ONLY_ADMIN);
+  const { rows, errors } = parseShelfCsv(kind, csv);
+  const outcome: ImportOutcome = { kind, committed: false, rows, errors, inserted: 0, updated: 0 };
+  if (!opts.commit || errors.length) return outcome;
+
+  // A part number is one thing: a pulley's number may not name a blower and the other way round.
+  const numbers = rows.map((r) => r.record.partNumber);
+  const other = kind === "pulleys" ? blowers : pulleys;
+  const clashes = await db.select({ partNumber: other.partNumber }).from(other).where(inArray(other.partNumber, numbers));
+  if (clashes.length) {
+    const lineOf = new Map(rows.map((r) => [r.record.partNumber, r.line]));
+    outcome.errors = clashes.map((c) => ({ line: lineOf.get(c.partNumber) ?? 0, column: "part_number", message: `Part number ${c.partNumber} belongs to a ${kind === "pulleys" ? "blower" : "pulley"} on the shelf.` }));
+    return outcome;
+  }
+
+  const CHUNK = 500;
+  await db.transaction(async (tx) => {
+    for (let i = 0; i < rows.length; i += CHUNK) {
+      const chunk = rows.slice(i, i + CHUNK).map((r) => r.record);
+      const now = new Date();
+      const written =
+        kind === "pulleys"
+          ? await tx
+              .insert(pulleys)
+              .values(chunk as PulleyRecord[])
+              .onConflictDoUpdate({
+                target: pulleys.partNumber,
+                set: {
+                  position: sql`excluded.position`,
+                  diameter: sql`excluded.diameter`,
+                  ribCount: sql`excluded.rib_count`,
+                  minBeltDiameter: sql`excluded.min_belt_diameter`,
+                  price: sql`excluded.price`,
+                  stock: sql`excluded.stock`,
+                  notes: sql`excluded.notes`,
+                  updatedAt: now,
+                },
+              })
+              .returning({ inserted: sql<boolean>`(xmax = 0)` })
+          : await tx
+              .insert(blowers)
+              .values(chunk as BlowerRecord[])
+              .onConflictDoUpdate({
+                target: blowers.partNumber,
+                set: {
+                  name: sql`excluded.name`,
+                  kind: sql`excluded.kind`,
+                  displacementPerRev: sql`excluded.displacement_per_rev`,
+                  builtInVolumeRatio: sql`excluded.built_in_volume_ratio`,
+                  maxRpm: sql`excluded.max_rpm`,
+                  volumetricEfficiencyRef: sql`excluded.volumetric_efficiency_ref`,
+                  referenceRpm: sql`excluded.reference_rpm`,
+                  internalEfficiency: sql`excluded.internal_efficiency`,
+                  mechanicalEfficiency: sql`excluded.mechanical_efficiency`,
+                  price: sql`excluded.price`,
+                  stock: sql`excluded.stock`,
+                  notes: sql`excluded.notes`,
+                  updatedAt: now,
+                },
+              })
+              .returning({ inserted: sql<boolean>`(xmax = 0)` });
+      for (const w of written) {
+        if (w.inserted) outcome.inserted++;
+        else outcome.updated++;
+      }
+    }
+  });
+  outcome.committed = true;
+  return outcome;
+}
+
+// Lengths in mm and volumes in L with enough digits to survive a round trip through the file.
+const mm = (m: number) => String(Number((m * 1000).toFixed(4)));
+const litres = (m3: number) => String(Number((m3 * 1000).toFixed(6)));
+
+/** The whole shelf of one kind as CSV, in the import's columns. */
+export async function exportShelfCsv(db: DbOrTx, actor: Actor, kind: ShelfKind): Promise<string> {
+  assert(canSeeShelf(actor));
+  if (kind === "pulleys") {
+    const rows = await db.select().from(pulleys).orderBy(asc(pulleys.position), asc(pulleys.diameter), asc(pulleys.partNumber));
+    return Papa.unparse({
+      fields: [...PULLEY_CSV_COLUMNS],
+      data: rows.map((p) => [p.partNumber, p.position, mm(p.diameter), p.ribCount, p.minBeltDiameter === null ? "" : mm(p.minBeltDiameter), p.price, p.stock, safeText(p.notes)]),
+    });
+  }
+  const rows = await db.select().from(blowers).orderBy(asc(blowers.partNumber));
+  return Papa.unparse({
+    fields: [...BLOWER_CSV_COLUMNS],
+    data: rows.map((b) => [
+      b.partNumber,
+      safeText(b.name),
+      b.kind,
+      litres(b.displacementPerRev),
+      b.builtInVolumeRatio,
+      b.maxRpm,
+      b.volumetricEfficiencyRef,
+      b.referenceRpm,
+      b.internalEfficiency,
+      b.mechanicalEfficiency,
+      b.price,
+      b.stock,
+      safeText(b.notes),
+    ]),
+  });
+}
