@@ -1,0 +1,26 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { loadForStaff } from "@/components/recommendation/load";
+import { SheetActions } from "@/components/recommendation/sheet-actions";
+import { SheetView } from "@/components/recommendation/sheet-view";
+
+export const metadata: Metadata = { title: "Recommendation sheet" };
+
+export default async function RecommendationPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const { sheet, shop, unitSystem } = await loadForStaff(id);
+  return (
+    <div className="flex flex-col gap-4">
+      <nav aria-label="Breadcrumb" className="no-print text-sm">
+        <Link href="/recommendations" className="underline">
+          Recommendations
+        </Link>{" "}
+        / {sheet.customerName}
+      </nav>
+      <SheetActions id={sheet.id} status={sheet.status} customerEmail={sheet.customerEmail} sentAt={sheet.sentAt ? sheet.sentAt.toISOString() : null} lastError={sheet.lastError} />
+      <div className="rounded-md border border-line bg-panel p-4">
+        <SheetView sheet={sheet} shop={shop} unitSystem={unitSystem} />
+      </div>
+    </div>
+  );
+}

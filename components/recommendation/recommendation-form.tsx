@@ -1,0 +1,321 @@
+"use client";
+// Making or editing a recommendation sheet: pick the blower pulley (ladder and finder help), the
+// customer, the vehicle, a parts list priced from the shelf, and notes. The server re-prices the
+// shelf lines and computes the total; the total shown here uses the same decimal.js helpers.
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useFieldArray, useForm, useWatch } from "react-hook-form";
+import type { z } from "zod";
+import { fromSI, unitLabel, type Combination, type UnitSystem } from "@/calc";
+import { ApiError, apiJson } from "@/components/shelf/api";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { recommendationInputSchema } from "@/db/repo/recommendations";
+import { formatMoney, lineTotal, sumMoney } from "@/db/repo/shelf";
+import { PulleyHelp, type ShelfPulley } from "./pulley-help";
+
+export type ShelfPart = { partNumber: string; description: string; price: string; stock: number; diameter?: number; position?: string };
+type FormIn = z.input<typeof recommendationInputSchema>;
+type FormOut = z.output<typeof recommendationInputSchema>;
+
+export type RecommendationFormProps = {
+  mode: "create" | "edit";
+  id?: string;
+  combination: { id: string; name: string; revision: number; spec: Combination };
+  pulleys: ShelfPulley[];
+  parts: ShelfPart[];
+  unitSystem: UnitSystem;
+  initial: Omit<FormIn, "combinationId">;
+};
+
+const MONEY = /^\d{1,10}(\.\d{1,2})?$/;
+const same = (a: number, b: number) => Math.abs(a - b) < 1e-6;
+
+export function RecommendationForm({ mode, id, combination, pulleys, parts, unitSystem, initial }: RecommendationFormProps) {
+  const router = useRouter();
+  const [pick, setPick] = useState("");
+  const form = useForm<FormIn, unknown, FormOut>({
+    resolver: zodResolver(recommendationInputSchema),
+    defaultValues: { ...initial, combinationId: combination.id },
+  });
+  const lines = useFieldArray({ control: form.control, name: "parts" });
+  const { errors, isSubmitting } = form.formState;
+  const chosen = Number(useWatch({ control: form.control, name: "blowerPulleyDiameter" }));
+  const watched = useWatch({ control: form.control, name: "parts" }) ?? [];
+  const unit = unitLabel("length-small", unitSystem);
+  const size = (m: number) => `${fromSI("length-small", m, unitSystem).toFixed(unitSystem === "metric" ? 1 : 2)} ${unit}`;
+
+  const amounts = watched.map((l) => {
+    const price = String(l?.unitPrice ?? "").trim();
+    const qty = Number(l?.quantity);
+    return MONEY.test(price) && Number.isInteger(qty) && qty >= 1 && qty <= 999 ? lineTotal(price, qty) : null;
+  });
+  const total = amounts.every((a) => a !== null) ? sumMoney(amounts as string[]) : null;
+
+  const sizes = [...new Set([...pulleys.map((p) => Number(p.diameter.toFixed(6))), Number(combination.spec.drive.blowerPulleyDiameter.toFixed(6)), Number(initial.blowerPulleyDiameter.toFixed(6))])].sort((a, b) => a - b);
+
+  function choose(d: number) {
+    form.setValue("blowerPulleyDiameter", d, { shouldDirty: true, shouldValidate: true });
+  }
+
+  function addShelfPart(partNumber: string) {
+    const p = parts.find((x) => x.partNumber === partNumber);
+    if (!p) return;
+    lines.append({ partNumber: p.partNumber, description: p.description, unitPrice: p.price, quantity: 1 });
+  }
+
+  function addChosenPulley() {
+    const candidates = parts.filter((p) => p.position === "blower" && p.diameter !== undefined && same(p.diameter, chosen));
+    const best = candidates.find((p) => p.stock > 0) ?? candidates[0];
+    if (best) addShelfPart(best.partNumber);
+  }
+
+  const submit = form.handleSubmit(async (values) => {
+    try {
+      if (mode === "create") {
+        const out = await apiJson<{ id: string }>("/api/recommendations", { method: "POST", json: values });
+        router.push(`/recommendations/${out.id}`);
+      } else {
+        await apiJson(`/api/recommendations/${id}`, { method: "PUT", json: values });
+        router.push(`/recommendations/${id}`);
+      }
+      router.refresh();
+    } catch (e) {
+      if (e instanceof ApiError) for (const [k, msgs] of Object.entries(e.fieldErrors)) form.setError(k as "customerName", { message: msgs.join(" ") });
+      form.setError("root", { message: e instanceof Error ? e.message : "Could not save the sheet." });
+    }
+  });
+
+  const lineError = (i: number, k: "description" | "unitPrice" | "quantity" | "partNumber") => errors.parts?.[i]?.[k]?.message as string | undefined;
+  const hasChosenOnShelf = parts.some((p) => p.position === "blower" && p.diameter !== undefined && same(p.diameter, chosen));
+
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-6" aria-label="Recommendation">
+      <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
+        <h2 className="text-lg font-semibold">1. Blower pulley</h2>
+        <p className="text-sm text-muted">
+          {combination.name}, revision {combination.revision}: today it runs a {size(combination.spec.drive.blowerPulleyDiameter)} blower pulley on a {size(combination.spec.drive.crankPulleyDiameter)} crank pulley.
+        </p>
+        <div className="flex flex-wrap items-end gap-3">
+          <div className="flex flex-col gap-1">
+            <label htmlFor="f-blowerPulleyDiameter" className="text-sm font-medium">
+              Recommended blower pulley <span className="font-normal text-muted">({unit})</span>
+            </label>
+            <select
+              id="f-blowerPulleyDiameter"
+              value={String(Number(chosen.toFixed(6)))}
+              onChange={(e) => choose(Number(e.target.value))}
+              aria-describedby={errors.blowerPulleyDiameter ? "f-blowerPulleyDiameter-error" : undefined}
+              className="rounded-md border border-line bg-panel px-2 py-1.5 text-sm"
+            >
+              {sizes.map((d) => (
+                <option key={d} value={String(d)}>
+                  {size(d)}
+                  {same(d, combination.spec.drive.blowerPulleyDiameter) ? " (fitted now)" : ""}
+                  {pulleys.some((p) => same(p.diameter, d)) ? "" : " (not on the shelf)"}
+                </option>
+              ))}
+            </select>
+            {errors.blowerPulleyDiameter ? (
+              <p id="f-blowerPulleyDiameter-error" role="alert" className="text-xs text-danger">
+                {errors.blowerPulleyDiameter.message}
+              </p>
+            ) : null}
+          </div>
+          <Button type="button" variant="secondary" onClick={addChosenPulley} disabled={!hasChosenOnShelf}>
+            Add this pulley to the parts
+          </Button>
+        </div>
+        <PulleyHelp spec={combination.spec} pulleys={pulleys} unitSystem={unitSystem} chosen={chosen} onChoose={choose} />
+      </section>
+
+      <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
+        <h2 className="text-lg font-semibold">2. Customer and vehicle</h2>
+        <div className="grid gap-3 sm:grid-cols-2">
+          <Field label="Customer name" autoComplete="off" {...form.register("customerName")} errors={errors.customerName?.message} />
+          <Field label="Customer e-mail" type="email" autoComplete="off" {...form.register("customerEmail")} errors={errors.customerEmail?.message} hint="Needed to send the sheet." />
+        </div>
+        <div className="flex flex-col gap-1">
+          <label htmlFor="f-vehicleNotes" className="text-sm font-medium">
+            Vehicle notes
+          </label>
+          <textarea id="f-vehicleNotes" rows={2} {...form.register("vehicleNotes")} aria-describedby={errors.vehicleNotes ? "f-vehicleNotes-error" : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
+          {errors.vehicleNotes ? (
+            <p id="f-vehicleNotes-error" role="alert" className="text-xs text-danger">
+              {errors.vehicleNotes.message}
+            </p>
+          ) : null}
+        </div>
+      </section>
+
+      <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
+        <h2 className="text-lg font-semibold">3. Parts</h2>
+        <div className="flex flex-wrap items-end gap-3">
+          <div className="flex flex-col gap-1">
+            <label htmlFor="add-part" className="text-sm font-medium">
+              Add a part from the shelf
+            </label>
+            <select id="add-part" value={pick} onChange={(e) => setPick(e.target.value)} className="max-w-md rounded-md border border-line bg-panel px-2 py-1.5 text-sm">
+              <option value="">Choose a part…</option>
+              {parts.map((p) => (
+                <option key={p.partNumber} value={p.partNumber}>
+                  {p.partNumber}: {p.description}, {formatMoney(p.price)}
+                  {p.stock === 0 ? " (out of stock)" : ""}
+                </option>
+              ))}
+            </select>
+          </div>
+          <Button
+            type="button"
+            variant="secondary"
+            disabled={!pick}
+            onClick={() => {
+              addShelfPart(pick);
+              setPick("");
+            }}
+          >
+            Add part
+          </Button>
+          <Button type="button" variant="secondary" onClick={() => lines.append({ partNumber: null, description: "", unitPrice: "", quantity: 1 })}>
+            Add a free line
+          </Button>
+        </div>
+        {lines.fields.length === 0 ? <p className="text-sm text-muted">No parts yet.</p> : null}
+        {lines.fields.length ? (
+          <table className="w-full text-sm">
+            <caption className="sr-only">Parts list</caption>
+            <thead>
+              <tr className="border-b border-line text-left">
+                <th scope="col" className="py-1 font-medium">
+                  Description
+                </th>
+                <th scope="col" className="w-32 py-1 text-right font-medium">
+                  Each
+                </th>
+                <th scope="col" className="w-24 py-1 text-right font-medium">
+                  Qty
+                </th>
+                <th scope="col" className="w-28 py-1 text-right font-medium">
+                  Amount
+                </th>
+                <th scope="col" className="w-20 py-1">
+                  <span className="sr-only">Remove</span>
+                </th>
+              </tr>
+            </thead>
+            <tbody>
+              {lines.fields.map((f, i) => {
+                const fromShelf = !!watched[i]?.partNumber;
+                return (
+                  <tr key={f.id} className="border-b border-line align-top">
+                    <td className="py-1 pr-2">
+                      <label htmlFor={`line-${i}-description`} className="sr-only">
+                        Description of line {i + 1}
+                      </label>
+                      <input
+                        id={`line-${i}-description`}
+                        readOnly={fromShelf}
+                        {...form.register(`parts.${i}.description`)}
+                        aria-invalid={lineError(i, "description") ? true : undefined}
+                        aria-describedby={lineError(i, "description") ? `line-${i}-description-error` : undefined}
+                        placeholder="e.g. Belt, 8-rib"
+                        className="w-full rounded-md border border-line bg-panel px-2 py-1 read-only:border-transparent read-only:bg-transparent"
+                      />
+                      {fromShelf ? <span className="text-xs text-muted">{watched[i]?.partNumber} · shelf price</span> : null}
+                      {lineError(i, "description") || lineError(i, "partNumber") ? (
+                        <p id={`line-${i}-description-error`} role="alert" className="text-xs text-danger">
+                          {lineError(i, "description") ?? lineError(i, "partNumber")}
+                        </p>
+                      ) : null}
+                    </td>
+                    <td className="py-1 pr-2 text-right">
+                      <label htmlFor={`line-${i}-price`} className="sr-only">
+                        Price each, line {i + 1}
+                      </label>
+                      <input
+                        id={`line-${i}-price`}
+                        readOnly={fromShelf}
+                        inputMode="decimal"
+                        {...form.register(`parts.${i}.unitPrice`)}
+                        aria-invalid={lineError(i, "unitPrice") ? true : undefined}
+                        aria-describedby={lineError(i, "unitPrice") ? `line-${i}-price-error` : undefined}
+                        className="w-full rounded-md border border-line bg-panel px-2 py-1 text-right read-only:border-transparent read-only:bg-transparent"
+                      />
+                      {lineError(i, "unitPrice") ? (
+                        <p id={`line-${i}-price-error`} role="alert" className="text-xs text-danger">
+                          {lineError(i, "unitPrice")}
+                        </p>
+                      ) : null}
+                    </td>
+                    <td className="py-1 pr-2 text-right">
+                      <label htmlFor={`line-${i}-quantity`} className="sr-only">
+                        Quantity, line {i + 1}
+                      </label>
+                      <input
+                        id={`line-${i}-quantity`}
+                        inputMode="numeric"
+                        {...form.register(`parts.${i}.quantity`)}
+                        aria-invalid={lineError(i, "quantity") ? true : undefined}
+                        aria-describedby={lineError(i, "quantity") ? `line-${i}-quantity-error` : undefined}
+                        className="w-full rounded-md border border-line bg-panel px-2 py-1 text-right"
+                      />
+                      {lineError(i, "quantity") ? (
+                        <p id={`line-${i}-quantity-error`} role="alert" className="text-xs text-danger">
+                          {lineError(i, "quantity")}
+                        </p>
+                      ) : null}
+                    </td>
+                    <td className="py-1 text-right num">{amounts[i] == null ? "–" : formatMoney(amounts[i]!)}</td>
+                    <td className="py-1 text-right">
+                      <Button type="button" variant="ghost" onClick={() => lines.remove(i)} aria-label={`Remove line ${i + 1}`}>
+                        Remove
+                      </Button>
+                    </td>
+                  </tr>
+                );
+              })}
+            </tbody>
+            <tfoot>
+              <tr>
+                <th scope="row" colSpan={3} className="py-1 text-right">
+                  Total
+                </th>
+                <td className="py-1 text-right font-semibold" data-testid="form-total">
+                  {total === null ? "–" : formatMoney(total)}
+                </td>
+                <td />
+              </tr>
+            </tfoot>
+          </table>
+        ) : null}
+      </section>
+
+      <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
+        <h2 className="text-lg font-semibold">4. Notes</h2>
+        <div className="flex flex-col gap-1">
+          <label htmlFor="f-notes" className="text-sm font-medium">
+            Notes for the customer
+          </label>
+          <textarea id="f-notes" rows={3} {...form.register("notes")} aria-describedby={errors.notes ? "f-notes-error" : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
+          {errors.notes ? (
+            <p id="f-notes-error" role="alert" className="text-xs text-danger">
+              {errors.notes.message}
+            </p>
+          ) : null}
+        </div>
+      </section>
+
+      {errors.root?.message ? <Notice tone="danger">{errors.root.message}</Notice> : null}
+      <div className="flex gap-2">
+        <Button type="submit" disabled={isSubmitting}>
+          {isSubmitting ? "Saving…" : mode === "create" ? "Save draft sheet" : "Save changes"}
+        </Button>
+        <Button type="button" variant="secondary" onClick={() => router.back()}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}
