@@ -1,5 +1,5 @@
 // Small process helpers shared by the start, test and bench scripts.
-import { spawn, type ChildProcess } from "node:child_process";
+import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
 
@@ -69,4 +69,13 @@ export async function buildNext(env: Env, opts: { quiet?: boolean } = {}): Promi
 /** Environment for `next build` / `next start`: telemetry off, our own build folder when asked. */
 export function nextEnv(extra: Env = {}): Env {
   return { NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: "production", ...extra };
+}
+
+/** Installs Debian's Chromium when it is missing (server-side PDFs and the browser tests use it). */
+export function ensureChromium(purpose: string) {
+  if (fs.existsSync("/usr/bin/chromium")) return;
+  if (process.getuid?.() !== 0) throw new Error(`Chromium is missing (needed for ${purpose}): sudo apt-get install -y chromium`);
+  console.log(`Installing Debian's chromium for ${purpose} …`);
+  execFileSync("apt-get", ["update", "-qq"], { stdio: "inherit" });
+  execFileSync("apt-get", ["install", "-y", "-qq", "chromium"], { stdio: "inherit", env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" } });
 }

@@ -8,7 +8,7 @@ import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from "../db/seed";
 import { startMailFake, type MailFake } from "./mail-fake";
-import { buildNext, nextEnv, root, startNext, stopGroup } from "./proc";
+import { buildNext, ensureChromium, nextEnv, root, startNext, stopGroup } from "./proc";
 
 const dataDir = path.resolve(process.env.PW_DATA_DIR ?? path.join(root, ".data"));
 const port = Number(process.env.PORT ?? 3000);
@@ -79,6 +79,12 @@ async function main() {
     smtpUrl = mail.smtpUrl;
     mailFakeUrl = mail.inboxUrl;
     console.log(`Local mail fake: SMTP ${mail.smtpUrl}; admins read it under Mailbox.`);
+  }
+
+  try {
+    ensureChromium("PDF recommendation sheets");
+  } catch (err) {
+    console.warn(`${err instanceof Error ? err.message : err}. Everything else works; "Download PDF" will not.`);
   }
 
   const env = nextEnv({

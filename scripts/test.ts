@@ -7,7 +7,6 @@
 //   npm test -- --unit              no build, no browser
 //   npm test -- --e2e [--skip-build] only the served-app phase
 //   npm test -- some/file           only test files whose path contains the word
-import { execFileSync } from "node:child_process";
 import crypto from "node:crypto";
 import fs from "node:fs";
 import os from "node:os";
@@ -18,7 +17,7 @@ import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { seedDemo } from "../db/seed";
 import { startMailFake, type MailFake } from "./mail-fake";
-import { buildNext, nextEnv, root, run, startNext, stopGroup, waitForHttp, type Env } from "./proc";
+import { buildNext, ensureChromium, nextEnv, root, run, startNext, stopGroup, waitForHttp, type Env } from "./proc";
 
 const argv = process.argv.slice(2);
 const flags = new Set(argv.filter((a) => a.startsWith("--")));
@@ -89,14 +88,6 @@ async function check(label: string, cmd: string, args: string[]) {
   }
 }
 
-function ensureChromium() {
-  if (fs.existsSync("/usr/bin/chromium")) return;
-  if (process.getuid?.() !== 0) throw new Error("Chromium is missing: sudo apt-get install -y chromium");
-  console.log("Installing Debian's chromium for the browser tests …");
-  execFileSync("apt-get", ["update", "-qq"], { stdio: "inherit" });
-  execFileSync("apt-get", ["install", "-y", "-qq", "chromium"], { stdio: "inherit", env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" } });
-}
-
 async function main() {
   if (doChecks) {
     await check("ESLint", process.execPath, [path.join(root, "node_modules/eslint/bin/eslint.js"), "."]);
@@ -121,7 +112,7 @@ async function main() {
   }
 
   if (doE2e) {
-    ensureChromium();
+    ensureChromium("the browser tests");
     const admin = new pg.Client({ connectionString: cluster.url });
     await admin.connect();
     await admin.query("CREATE DATABASE e2e TEMPLATE app");
