@@ -345,7 +345,7 @@ function Row(props: {
             ) : null}
           </form>
         ) : (
-          <Link href={`/combinations/${c.id}`} className="font-medium text-accent hover:underline">
+          <Link href={`/combinations/${c.id}`} className="font-medium text-accent underline underline-offset-2">
             {c.name}
           </Link>
         )}

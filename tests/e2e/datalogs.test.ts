@@ -11,7 +11,7 @@ import { toActor } from "@/db/repo/users";
 import { users } from "@/db/schema";
 import { DEMO_DATALOG_MAPPING, DEMO_DATALOG_NAME } from "@/db/seed/datalogs";
 import { smallBlockSmallerPulley } from "@/db/seed/demo-specs";
-import { BASE_URL, launchBrowser, signIn } from "../support/browser";
+import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { Client, signedIn } from "../support/http";
 
 const SAMPLE = path.join(import.meta.dirname, "../../public/samples/demo-datalog.csv");
@@ -34,22 +34,6 @@ afterAll(async () => {
   await pool.end();
 });
 
-/**
- * Console errors, page errors and failed requests, like watchErrors, except link prefetches (404)
- * of other areas' pages still being built elsewhere: those are not this flow's concern.
- */
-function watchOwnErrors(page: Page) {
-  const errors: string[] = [];
-  const foreign = (url: string) => /_rsc=/.test(url) && !/\/datalogs/.test(new URL(url).pathname);
-  page.on("console", (m) => {
-    if (m.type() === "error" && !foreign(m.location().url || "http://x/datalogs")) errors.push(m.text());
-  });
-  page.on("pageerror", (e) => errors.push(String(e)));
-  page.on("response", (r) => {
-    if (r.status() >= 400 && !foreign(r.url())) errors.push(`${r.status()} ${r.url()}`);
-  });
-  return errors;
-}
 
 describe("datalog routes", () => {
   const text = "rpm,boost\n2000,5\n2100,5.5\n2200,6\n";
@@ -118,7 +102,7 @@ describe("upload, overlay, calibrate and the ladder in Chromium", () => {
     const combo = await freshCombination("tuner@example.com", "Datalog e2e small-block");
     const context = await browser.newContext();
     const page = await signIn(context, "tuner@example.com");
-    const errors = watchOwnErrors(page);
+    const errors = watchErrors(page);
 
     // The planner's ladder before: boost at redline on the current pulley.
     await page.goto(`${BASE_URL}/combinations/${combo.id}`);

@@ -23,7 +23,7 @@ export async function launchBrowser(): Promise<Browser> {
 export function watchErrors(page: Page) {
   const errors: string[] = [];
   page.on("console", (m) => {
-    if (m.type() === "error") errors.push(m.text());
+    if (m.type() === "error") errors.push(`${m.text()} (${m.location().url})`);
   });
   page.on("pageerror", (e) => errors.push(String(e)));
   page.on("response", (r) => {

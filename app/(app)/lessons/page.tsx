@@ -55,8 +55,8 @@ export default async function LessonsPage() {
                     <td className="py-2 pr-3">{l.published ? <span className="text-ok">Published</span> : <span className="text-muted">Draft</span>}</td>
                     <td className="py-2 pr-3 font-mono tracking-widest">{l.classCode}</td>
                     <td className="py-2 text-right whitespace-nowrap">
-                      <Link href={`/lessons/${l.id}/edit`} className="mr-3 text-accent hover:underline">Edit</Link>
-                      <Link href={`/classroom/${l.id}`} className="text-accent hover:underline">Classroom view</Link>
+                      <Link href={`/lessons/${l.id}/edit`} className="mr-3 text-accent underline underline-offset-2">Edit</Link>
+                      <Link href={`/classroom/${l.id}`} className="text-accent underline underline-offset-2">Classroom view</Link>
                     </td>
                   </tr>
                 ))}
@@ -78,7 +78,7 @@ export default async function LessonsPage() {
           <ul className="flex flex-col gap-2">
             {joined.map((l) => (
               <li key={l.id} className="rounded-lg border border-line bg-panel p-3">
-                <Link href={`/classroom/${l.id}`} className="font-medium text-accent hover:underline">{l.title}</Link>
+                <Link href={`/classroom/${l.id}`} className="font-medium text-accent underline underline-offset-2">{l.title}</Link>
                 <p className="text-sm text-muted">
                   {l.ownerName} · {l.steps} {l.steps === 1 ? "step" : "steps"}
                 </p>

@@ -240,11 +240,11 @@ export function Planner(props: PlannerProps) {
           <p className="text-sm text-muted">
             Planner · revision <span data-testid="base-revision">{baseRevision}</span>
             {props.isDemo ? " · shop demo (invented data)" : ""} ·{" "}
-            <Link href={`/combinations/${combinationId}/revisions`} className="text-accent hover:underline">
+            <Link href={`/combinations/${combinationId}/revisions`} className="text-accent underline underline-offset-2">
               History
             </Link>{" "}
             ·{" "}
-            <Link href={`/compare?items=${combinationId}:current`} className="text-accent hover:underline">
+            <Link href={`/compare?items=${combinationId}:current`} className="text-accent underline underline-offset-2">
               Side by side
             </Link>
           </p>

@@ -28,7 +28,7 @@ export default async function ClassroomPage({ params, searchParams }: { params: 
           <span className="text-muted">
             Class code <span className="font-mono text-base tracking-widest text-fg">{lesson.classCode}</span>
           </span>
-          <Link href={`/lessons/${lesson.id}/edit`} className="text-accent hover:underline">
+          <Link href={`/lessons/${lesson.id}/edit`} className="text-accent underline underline-offset-2">
             Edit this lesson
           </Link>
         </div>
