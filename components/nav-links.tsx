@@ -14,6 +14,8 @@ export function NavLinks({ items }: { items: NavItem[] }) {
           <Link
             key={i.href}
             href={i.href}
+            // Prefetching every section on every page load renders them all on the server for nothing.
+            prefetch={false}
             aria-current={active ? "page" : undefined}
             className={`rounded-md px-2.5 py-1.5 ${active ? "bg-bg font-semibold text-accent" : "hover:bg-bg"}`}
           >
