@@ -89,6 +89,41 @@ try {
   times.sort((a, b) => a - b);
   ttfb.sort((a, b) => a - b);
   console.log(`\nplanner: navigation to a drawn chart, median of 5: ${times[2]} ms (min ${times[0]}, max ${times[4]}); first byte of the page: median ${ttfb[2]} ms`);
+
+  // A slider move: from the input event to the frame after React re-rendered and the chart redrew.
+  const page = await context.newPage();
+  await page.goto(`${server.url}/combinations/${demo.id}`, { waitUntil: "networkidle" });
+  await page.waitForSelector("canvas");
+  const slider = page.getByRole("slider", { name: "Blower pulley slider" });
+  await slider.waitFor();
+  const frameTimes = await slider.evaluate(async (el) => {
+    const input = el as HTMLInputElement;
+    const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value")!.set!;
+    const out: number[] = [];
+    const idle: number[] = [];
+    for (let i = 0; i < 30; i++) {
+      const t0 = performance.now();
+      await new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)));
+      idle.push(performance.now() - t0);
+    }
+    const min = Number(input.min);
+    const max = Number(input.max);
+    for (let i = 0; i < 30; i++) {
+      const v = min + ((max - min) * (i % 10)) / 10;
+      const t0 = performance.now();
+      setter.call(input, String(v));
+      input.dispatchEvent(new Event("input", { bubbles: true }));
+      await new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r)));
+      out.push(performance.now() - t0);
+    }
+    return { out, idle };
+  });
+  const med = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+  const p90 = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length * 0.9)];
+  console.log(
+    `planner: slider move to the second frame after it, median of 30: ${med(frameTimes.out).toFixed(1)} ms (p90 ${p90(frameTimes.out).toFixed(1)} ms) ` +
+      `against ${med(frameTimes.idle).toFixed(1)} ms for two idle frames: ratio ${(med(frameTimes.out) / med(frameTimes.idle)).toFixed(2)}`,
+  );
 } finally {
   await browser.close();
   await server.stop();

@@ -38,3 +38,36 @@ describe("session cookie", () => {
     expect((await c.json("/api/combinations")).status).toBe(401);
   });
 });
+
+describe("stored text renders as text", () => {
+  it("markup saved as a name shows literally and runs nothing, in the list and the planner", async () => {
+    const { exampleCombination } = await import("@/calc");
+    const { signedIn } = await import("../support/http");
+    const { launchBrowser, signIn, BASE_URL } = await import("../support/browser");
+    const hostile = `<img src=x onerror="window.__pwned=1">"'; DROP TABLE combinations; --`;
+    const member = await signedIn("member@example.com");
+    const created = await member.json("/api/combinations", "POST", { name: hostile, spec: exampleCombination() });
+    expect(created.status).toBe(201);
+    const id = created.data.id;
+    const browser = await launchBrowser();
+    try {
+      const context = await browser.newContext();
+      const page = await signIn(context, "member@example.com");
+      let dialog = false;
+      page.on("dialog", async (d) => {
+        dialog = true;
+        await d.dismiss();
+      });
+      for (const path of ["/combinations", `/combinations/${id}`, `/combinations/${id}/revisions`]) {
+        await page.goto(BASE_URL + path, { waitUntil: "networkidle" });
+        await page.getByText(hostile, { exact: false }).first().waitFor({ timeout: 15_000 });
+        expect(await page.evaluate(() => (window as unknown as { __pwned?: number }).__pwned)).toBeUndefined();
+        expect(await page.locator('img[src="x"]').count()).toBe(0);
+      }
+      expect(dialog).toBe(false);
+    } finally {
+      await browser.close();
+      await member.json(`/api/combinations/${id}`, "DELETE");
+    }
+  });
+});
