@@ -11,7 +11,12 @@ import { freshDatabase, makeUser, type TestDb } from "../support/db";
 const ctx = vi.hoisted(() => ({ db: undefined as unknown, userId: null as string | null }));
 vi.mock("@/db/client", () => ({ getDb: () => ctx.db }));
 vi.mock("@/app/_lib/auth-options", () => ({ authOptions: () => ({}) }));
-vi.mock("next-auth", () => ({ getServerSession: async () => (ctx.userId ? { user: { id: ctx.userId } } : null) }));
+// The session as app/_lib/session.ts reads it: next-auth's cookie, decrypted by next-auth/jwt.
+vi.mock("@/app/_lib/env", () => ({ authSecret: () => "a-test-secret-of-enough-length", env: () => ({}) }));
+vi.mock("next/headers", () => ({
+  cookies: async () => ({ get: (name: string) => (ctx.userId && name === "next-auth.session-token" ? { value: "session" } : undefined) }),
+}));
+vi.mock("next-auth/jwt", () => ({ decode: async () => (ctx.userId ? { sub: ctx.userId } : null) }));
 vi.mock("next/cache", () => ({ revalidatePath: () => {} }));
 
 const { requireActor } = await import("@/app/_lib/session");
