@@ -1,6 +1,6 @@
 "use server";
 import { z } from "zod";
-import { act, type ActionState } from "@/app/_lib/action";
+import { act, type ActionState, formFields } from "@/app/_lib/action";
 import { appUrl, sendMail } from "@/app/_lib/mail";
 import { getDb } from "@/db/client";
 import { FieldError } from "@/db/errors";
@@ -14,7 +14,7 @@ const signUpSchema = z.object({ name: z.string().trim().min(1, "Enter your name.
 /** Sign-up makes a member account; the form then signs in with the same password. */
 export async function signUp(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
   return act(async () => {
-    const input = signUpSchema.parse(Object.fromEntries(form));
+    const input = signUpSchema.parse(formFields(form));
     try {
       await createMember(getDb(), input);
     } catch (e) {
@@ -30,7 +30,7 @@ const SAME_ANSWER = "If an account exists for that address, we have sent it an e
 /** E-mails a one-time sign-in link (valid 15 minutes). Answers the same whether or not the account exists. */
 export async function requestSignInLink(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
   const r = await act(async () => {
-    const addr = email.parse(form.get("email"));
+    const addr = email.parse(formFields(form).email);
     const u = await getUserByEmail(getDb(), addr);
     if (u && !u.disabled) {
       const token = await issueToken(getDb(), u.id, "magic-link", 15);
@@ -49,7 +49,7 @@ export async function requestSignInLink(_prev: ActionState | undefined, form: Fo
 /** E-mails a password-reset link (valid 30 minutes). */
 export async function requestPasswordReset(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
   const r = await act(async () => {
-    const addr = email.parse(form.get("email"));
+    const addr = email.parse(formFields(form).email);
     const u = await getUserByEmail(getDb(), addr);
     if (u && !u.disabled) {
       const token = await issueToken(getDb(), u.id, "password-reset", 30);
@@ -71,7 +71,7 @@ const resetSchema = z
 
 export async function resetPassword(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
   return act(async () => {
-    const input = resetSchema.parse(Object.fromEntries(form));
+    const input = resetSchema.parse(formFields(form));
     const u = await consumeToken(getDb(), input.token, "password-reset");
     if (!u) throw new FieldError("token", "This reset link has expired or was already used. Ask for a new one.");
     await setPassword(getDb(), u.id, input.password);

@@ -1,4 +1,5 @@
 import "server-only";
+import { FieldError } from "@/db/errors";
 import { toFailure } from "./errors";
 
 /** What every server action returns to its form (for useActionState): ok, or a message with per-field errors. */
@@ -17,4 +18,13 @@ export async function act<T>(fn: () => Promise<T>): Promise<ActionState<T>> {
     const f = toFailure(err);
     return { ok: false, message: f.message, fieldErrors: f.fieldErrors, status: f.status };
   }
+}
+
+/**
+ * The fields of a submitted form. A server action is a public endpoint: a hand-made request can
+ * send anything in place of the form, and that is a 400, not a crash.
+ */
+export function formFields(form: unknown): Record<string, FormDataEntryValue> {
+  if (!(form instanceof FormData)) throw new FieldError("_", "The request did not carry a form.");
+  return Object.fromEntries(form);
 }

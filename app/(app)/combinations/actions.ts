@@ -4,7 +4,7 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { z } from "zod";
-import { act, type ActionState } from "@/app/_lib/action";
+import { act, type ActionState, formFields } from "@/app/_lib/action";
 import { requireActor } from "@/app/_lib/session";
 import { TEMPLATE_KEYS, templateSpec } from "@/components/combinations/templates";
 import { getDb } from "@/db/client";
@@ -31,7 +31,7 @@ export async function createCombinationAction(_prev: ActionState | undefined, fo
   let id = "";
   const state = await act(async () => {
     const actor = await requireActor();
-    const f = newCombinationForm.parse(Object.fromEntries(form));
+    const f = newCombinationForm.parse(formFields(form));
     const row = await createCombination(getDb(), actor, {
       name: f.name,
       spec: templateSpec(f.template),

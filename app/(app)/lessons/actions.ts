@@ -3,7 +3,7 @@
 // ownership and role (db/repo/lessons.ts), so these are as safe as the REST routes they mirror.
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
-import { act, type ActionState } from "@/app/_lib/action";
+import { act, type ActionState, formFields } from "@/app/_lib/action";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import {
@@ -21,7 +21,7 @@ import {
 } from "@/db/repo/lessons";
 
 const field = (form: FormData, name: string) => {
-  const v = form.get(name);
+  const v = formFields(form)[name];
   return typeof v === "string" ? v : undefined;
 };
 

@@ -1,7 +1,7 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { act, type ActionState } from "@/app/_lib/action";
+import { act, type ActionState, formFields } from "@/app/_lib/action";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import { setUnitSystem } from "@/db/repo/users";
@@ -12,7 +12,7 @@ const schema = z.object({ unitSystem: z.enum(["imperial", "metric"], { error: "U
 export async function saveUnitSystem(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
   return act(async () => {
     const actor = await requireActor();
-    const { unitSystem } = schema.parse(Object.fromEntries(form));
+    const { unitSystem } = schema.parse(formFields(form));
     await setUnitSystem(getDb(), actor, unitSystem);
     revalidatePath("/", "layout");
   });

@@ -3,7 +3,7 @@
 // cannot demote or disable themselves, so the shop never loses its last admin by accident.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { act, type ActionState } from "@/app/_lib/action";
+import { act, type ActionState, formFields } from "@/app/_lib/action";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import { updateUserAccess, userAccessSchema } from "@/db/repo/users";
@@ -13,7 +13,7 @@ const userId = z.string().min(1).max(64);
 export async function setUserRoleAction(id: string, _prev: ActionState | undefined, form: FormData): Promise<ActionState<{ role: string }>> {
   return act(async () => {
     const actor = await requireActor(["admin"]);
-    const u = await updateUserAccess(getDb(), actor, userId.parse(id), userAccessSchema.parse({ role: form.get("role") ?? undefined }));
+    const u = await updateUserAccess(getDb(), actor, userId.parse(id), userAccessSchema.parse({ role: formFields(form).role ?? undefined }));
     revalidatePath("/admin/users");
     return { role: u.role };
   });
