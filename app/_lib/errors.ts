@@ -30,6 +30,12 @@ export function toFailure(err: unknown): Failure {
   if (err instanceof ForbiddenError) return { status: 403, message: err.message };
   if (err instanceof NotFoundError) return { status: 404, message: err.message };
   if (err instanceof ConflictError) return { status: 409, message: err.message, details: err.details };
+  // PostgreSQL's "data exception" class (22…): a value it cannot store or read, such as a NUL
+  // character or a malformed id that got past the schemas. The request is at fault, not the server.
+  const pgCode = (err as { code?: unknown; cause?: { code?: unknown } })?.code ?? (err as { cause?: { code?: unknown } })?.cause?.code;
+  if (typeof pgCode === "string" && pgCode.startsWith("22")) {
+    return { status: 400, message: "A value in the request has characters or a form that cannot be stored (for example a NUL character)." };
+  }
   if (isDatabaseUnavailable(err)) {
     return { status: 503, message: "The database is not reachable right now. Nothing was changed; please try again in a moment." };
   }
