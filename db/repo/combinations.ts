@@ -89,33 +89,34 @@ export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuer
   const where = and(...conds);
   const col = combinations[q.sort];
   const order = q.dir === "asc" ? asc(col) : desc(col);
-  const [rows, [{ n }]] = await Promise.all([
-    db
-      .select({
-        id: combinations.id,
-        name: combinations.name,
-        ownerId: combinations.ownerId,
-        ownerName: users.name,
-        ownerEmail: users.email,
-        customerName: combinations.customerName,
-        customerContact: combinations.customerContact,
-        displacement: combinations.displacement,
-        blowerKind: combinations.blowerKind,
-        blowerPulleyDiameter: combinations.blowerPulleyDiameter,
-        revision: combinations.revision,
-        isDemo: combinations.isDemo,
-        createdAt: combinations.createdAt,
-        updatedAt: combinations.updatedAt,
-      })
-      .from(combinations)
-      .innerJoin(users, eq(users.id, combinations.ownerId))
-      .where(where)
-      .orderBy(order, asc(combinations.id))
-      .limit(q.pageSize)
-      .offset((q.page - 1) * q.pageSize),
-    db.select({ n: count() }).from(combinations).where(where),
-  ]);
-  return { items: rows, total: n, page: q.page, pageSize: q.pageSize };
+  // One query for the page and the total (a window count), so a list costs one round trip.
+  const rows = await db
+    .select({
+      id: combinations.id,
+      name: combinations.name,
+      ownerId: combinations.ownerId,
+      ownerName: users.name,
+      ownerEmail: users.email,
+      customerName: combinations.customerName,
+      customerContact: combinations.customerContact,
+      displacement: combinations.displacement,
+      blowerKind: combinations.blowerKind,
+      blowerPulleyDiameter: combinations.blowerPulleyDiameter,
+      revision: combinations.revision,
+      isDemo: combinations.isDemo,
+      createdAt: combinations.createdAt,
+      updatedAt: combinations.updatedAt,
+      total: sql<number>`count(*) over ()`.mapWith(Number),
+    })
+    .from(combinations)
+    .innerJoin(users, eq(users.id, combinations.ownerId))
+    .where(where)
+    .orderBy(order, asc(combinations.id))
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize);
+  // Past the last page there is no row to carry the total: count separately then.
+  const total = rows.length ? rows[0].total : (await db.select({ n: count() }).from(combinations).where(where))[0].n;
+  return { items: rows.map(({ total: _t, ...r }) => r), total, page: q.page, pageSize: q.pageSize };
 }
 
 async function findRow(db: DbOrTx, id: string, opts: { includeDeleted?: boolean } = {}) {
