@@ -33,7 +33,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
           <NavLinks items={items} />
           <div className="ml-auto flex items-center gap-3 text-sm">
             <ThemeSwitch />
-            <Link href="/settings" className="hover:underline" title="Your settings">
+            <Link href="/settings" prefetch={false} className="hover:underline" title="Your settings">
               {user.name || user.email} <span className="text-muted">· {roleNames[user.role]}</span>
             </Link>
             <SignOutButton />
