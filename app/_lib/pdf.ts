@@ -1,19 +1,10 @@
 import "server-only";
 import { chromium } from "playwright-core";
+import { CHROMIUM_ARGS } from "./chromium-args";
 
 // Server-side PDFs: Debian's Chromium, driven by playwright-core, prints one of our own pages.
 // One render at a time: a browser is heavy and this machine is small.
 
-const CHROMIUM_ARGS = [
-  "--headless",
-  "--no-sandbox",
-  "--disable-gpu",
-  "--disable-quic",
-  "--no-first-run",
-  "--disable-background-networking",
-  "--disable-component-update",
-  "--disable-sync",
-];
 
 export type Paper = "a4" | "letter";
 

@@ -1,21 +1,13 @@
 // Debian's Chromium driven by playwright-core (no browser download).
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import { CHROMIUM_ARGS } from "../../app/_lib/chromium-args";
 
 export const BASE_URL = process.env.PW_BASE_URL ?? "http://127.0.0.1:3000";
 
 export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
-    args: [
-      "--headless",
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-    ],
+    args: CHROMIUM_ARGS,
   });
 }
 
