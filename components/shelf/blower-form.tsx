@@ -9,7 +9,7 @@ import { fromSI, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { blowerFormSchema } from "@/db/repo/shelf";
+import { blowerFormSchema } from "@/db/shelf-rules";
 import type { BlowerRow } from "@/db/schema";
 import { ApiError, apiJson } from "./api";
 

@@ -5,7 +5,7 @@ import { useState } from "react";
 import { fromSI, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { formatMoney } from "@/db/repo/shelf";
+import { formatMoney } from "@/db/shelf-rules";
 import { apiJson, queryString } from "./api";
 import { PulleyForm, type PulleyJson } from "./pulley-form";
 import { Pager, SelectField, SortHeader, type SortState } from "./table-parts";
