@@ -2,7 +2,7 @@
 // Upload a log: pick the combination, read the file (progress), map its columns, preview what
 // will be stored and every bad line, then send it (upload progress). The server parses it again.
 import { useRouter } from "next/navigation";
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { fromSI, toSI, unitLabel, type UnitSystem } from "@/calc";
 import {
   DATALOG_LIMITS,
@@ -92,6 +92,14 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
     baro: baro.trim() === "" || !(ambientPa >= 30_000 && ambientPa <= 110_000) ? `Barometer must be between ${withUnit("pressure", 30_000, unitSystem, 1)} and ${withUnit("pressure", 110_000, unitSystem, 1)}` : null,
     airT: airT.trim() === "" || !(ambientK >= 220 && ambientK <= 330) ? `Air temperature must be between ${withUnit("temperature", 220, unitSystem)} and ${withUnit("temperature", 330, unitSystem)}` : null,
   };
+
+  // A file picked before the page finished loading raised its change event before React was
+  // listening: read it once the form is live.
+  const fileInput = useRef<HTMLInputElement>(null);
+  useEffect(() => {
+    const early = fileInput.current?.files?.[0];
+    if (early) queueMicrotask(() => readFile(early));
+  }, []);
 
   function readFile(f: File) {
     setFile(null);
@@ -227,6 +235,7 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
           </label>
           <input
             id="log-file"
+            ref={fileInput}
             type="file"
             accept=".csv,.txt,.tsv,.log,text/csv,text/plain"
             aria-describedby="log-file-hint"
