@@ -127,28 +127,8 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
           </h2>
           <form method="get" className="flex flex-wrap items-end gap-3">
             {sp.view ? <input type="hidden" name="view" value={sp.view} /> : null}
-            <label className="flex flex-col gap-1 text-sm font-medium">
-              From revision
-              <select name="a" defaultValue={a?.number} className="rounded-md border border-line bg-panel px-2 py-1.5 text-sm font-normal">
-                {revisions.map((r) => (
-                  <option key={r.number} value={r.number}>
-                    {r.number}
-                    {r.note ? ` · ${r.note.slice(0, 40)}` : ""}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label className="flex flex-col gap-1 text-sm font-medium">
-              To revision
-              <select name="b" defaultValue={b?.number} className="rounded-md border border-line bg-panel px-2 py-1.5 text-sm font-normal">
-                {revisions.map((r) => (
-                  <option key={r.number} value={r.number}>
-                    {r.number}
-                    {r.note ? ` · ${r.note.slice(0, 40)}` : ""}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <RevisionSelect label="From revision" name="a" value={a?.number} revisions={revisions} />
+            <RevisionSelect label="To revision" name="b" value={b?.number} revisions={revisions} />
             <button type="submit" className="rounded-md border border-line bg-panel px-3 py-1.5 text-sm font-medium hover:bg-bg">
               Compare
             </button>
@@ -186,5 +166,21 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
         </section>
       ) : null}
     </div>
+  );
+}
+
+function RevisionSelect({ label, name, value, revisions }: { label: string; name: string; value?: number; revisions: { number: number; note: string | null }[] }) {
+  return (
+    <label className="flex flex-col gap-1 text-sm font-medium">
+      {label}
+      <select name={name} defaultValue={value} className="rounded-md border border-line bg-panel px-2 py-1.5 text-sm font-normal">
+        {revisions.map((r) => (
+          <option key={r.number} value={r.number}>
+            {r.number}
+            {r.note ? ` · ${r.note.slice(0, 40)}` : ""}
+          </option>
+        ))}
+      </select>
+    </label>
   );
 }
