@@ -19,8 +19,8 @@ export function run(cmd: string, args: string[], opts: { env?: Env; quiet?: bool
 }
 
 /** Starts `next start` in its own process group, so stopping it stops its workers too. */
-export function startNext(opts: { port: number; host: string; env: Env; quiet?: boolean }): ChildProcess {
-  return spawn(process.execPath, [nextBin, "start", "-p", String(opts.port), "-H", opts.host], {
+export function startNext(opts: { port: number; host: string; env: Env; quiet?: boolean; nodeArgs?: string[] }): ChildProcess {
+  return spawn(process.execPath, [...(opts.nodeArgs ?? []), nextBin, "start", "-p", String(opts.port), "-H", opts.host], {
     cwd: root,
     env: { ...process.env, ...opts.env },
     stdio: opts.quiet ? ["ignore", "ignore", "inherit"] : "inherit",

@@ -11,7 +11,7 @@ import { seedDemo } from "../db/seed";
 import { startMailFake } from "./mail-fake";
 import { buildNext, nextEnv, root, startNext, stopGroup, waitForHttp } from "./proc";
 
-export async function serveThrowaway(opts: { distDir: string; build: boolean }) {
+export async function serveThrowaway(opts: { distDir: string; build: boolean; nodeArgs?: string[] }) {
   const workDir = fs.mkdtempSync(path.join(os.tmpdir(), "pw-bench-"));
   fs.chmodSync(workDir, 0o711);
   const cluster = await startCluster({ dir: path.join(workDir, "pg"), port: await freePort(), log: () => {} });
@@ -36,10 +36,12 @@ export async function serveThrowaway(opts: { distDir: string; build: boolean }) 
     const code = await buildNext(env, { quiet: true });
     if (code !== 0) throw new Error("next build failed");
   }
-  const app = startNext({ port, host: "127.0.0.1", env, quiet: true });
+  const app = startNext({ port, host: "127.0.0.1", env, quiet: true, nodeArgs: opts.nodeArgs });
   await waitForHttp(`${url}/api/health`);
   return {
     url,
+    /** The app's process group (it was started detached, so the group id is its pid). */
+    appGroup: app.pid!,
     stop: async () => {
       stopGroup(app);
       await mail.stop();

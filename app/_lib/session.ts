@@ -1,5 +1,4 @@
 import "server-only";
-import { decode } from "next-auth/jwt";
 import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
 import { cache } from "react";
@@ -9,6 +8,7 @@ import type { Actor } from "@/db/policy";
 import { getUserById, toActor } from "@/db/repo/users";
 import type { Role, User } from "@/db/schema";
 import { authSecret } from "./env";
+import { tokenSubject } from "./session-token";
 
 // next-auth's own names for the session cookie, over https and over plain http.
 const SESSION_COOKIES = ["__Secure-next-auth.session-token", "next-auth.session-token"];
@@ -23,12 +23,8 @@ async function sessionUserId(): Promise<string | null> {
   for (const name of SESSION_COOKIES) {
     const token = jar.get(name)?.value;
     if (!token) continue;
-    try {
-      const payload = await decode({ token, secret: authSecret() });
-      if (typeof payload?.sub === "string") return payload.sub;
-    } catch {
-      // Forged, expired or made with an old secret: treat as signed out.
-    }
+    const sub = await tokenSubject(token, authSecret());
+    if (sub) return sub;
   }
   return null;
 }

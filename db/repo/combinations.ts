@@ -70,27 +70,32 @@ const listed = (spec: Combination) => ({
 });
 
 /** Which combinations `actor` may see: their own; staff see the shop's; instructors also see the demo ones. */
-function visibleTo(actor: Actor): SQL | undefined {
-  if (isShopStaff(actor)) return undefined;
-  if (actor.role === "instructor") return or(eq(combinations.ownerId, actor.id), eq(combinations.isDemo, true));
-  return eq(combinations.ownerId, actor.id);
+function visibilityOf(actor: Actor) {
+  if (isShopStaff(actor)) return "all" as const;
+  return actor.role === "instructor" ? ("own-and-demo" as const) : ("own" as const);
 }
 
-export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuery = {}) {
-  const q = listQuerySchema.parse(query);
-  const conds: (SQL | undefined)[] = [isNull(combinations.deletedAt), visibleTo(actor)];
-  if (q.scope === "mine") conds.push(eq(combinations.ownerId, actor.id));
-  if (q.scope === "shop") conds.push(eq(combinations.isDemo, false));
-  if (q.scope === "demo") conds.push(eq(combinations.isDemo, true));
-  if (q.search) {
-    const like = `%${q.search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
+type ListShape = Required<Pick<z.output<typeof listQuerySchema>, "sort" | "dir">> &
+  Pick<z.output<typeof listQuerySchema>, "scope"> & { visibility: ReturnType<typeof visibilityOf>; search: boolean };
+
+const actorId = sql.placeholder("actorId");
+
+/** The list query for one shape, with the actor, search text and page as placeholders. */
+function buildListQuery(db: DbOrTx, shape: ListShape) {
+  const conds: (SQL | undefined)[] = [isNull(combinations.deletedAt)];
+  if (shape.visibility === "own") conds.push(eq(combinations.ownerId, actorId));
+  if (shape.visibility === "own-and-demo") conds.push(or(eq(combinations.ownerId, actorId), eq(combinations.isDemo, true)));
+  if (shape.scope === "mine") conds.push(eq(combinations.ownerId, actorId));
+  if (shape.scope === "shop") conds.push(eq(combinations.isDemo, false));
+  if (shape.scope === "demo") conds.push(eq(combinations.isDemo, true));
+  if (shape.search) {
+    const like = sql.placeholder("like");
     conds.push(or(ilike(combinations.name, like), ilike(combinations.customerName, like), ilike(combinations.customerContact, like)));
   }
   const where = and(...conds);
-  const col = combinations[q.sort];
-  const order = q.dir === "asc" ? asc(col) : desc(col);
+  const col = combinations[shape.sort];
   // One query for the page and the total (a window count), so a list costs one round trip.
-  const rows = await db
+  const page = db
     .select({
       id: combinations.id,
       name: combinations.name,
@@ -111,11 +116,36 @@ export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuer
     .from(combinations)
     .innerJoin(users, eq(users.id, combinations.ownerId))
     .where(where)
-    .orderBy(order, asc(combinations.id))
-    .limit(q.pageSize)
-    .offset((q.page - 1) * q.pageSize);
-  // Past the last page there is no row to carry the total: count separately then.
-  const total = rows.length ? rows[0].total : (await db.select({ n: count() }).from(combinations).where(where))[0].n;
+    .orderBy(shape.dir === "asc" ? asc(col) : desc(col), asc(combinations.id))
+    .limit(sql.placeholder("limit"))
+    .offset(sql.placeholder("offset"));
+  const key = [shape.visibility, shape.scope ?? "any", shape.search ? "search" : "all", shape.sort, shape.dir].join(" "); // at most 50 characters
+  // Past the last page there is no row to carry the total: that rare case counts separately.
+  const total = db.select({ n: count() }).from(combinations).where(where);
+  return { page: page.prepare(`list ${key}`), total: total.prepare(`count ${key}`) };
+}
+
+// The list is the busiest query in the app. Its shapes are few (visibility × scope × search × sort
+// × direction), so each is a named prepared statement: built once per client, and parsed and
+// planned once per database connection instead of on every request.
+const listQueries = new WeakMap<DbOrTx, Map<string, ReturnType<typeof buildListQuery>>>();
+
+export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuery = {}) {
+  const q = listQuerySchema.parse(query);
+  const shape: ListShape = { visibility: visibilityOf(actor), scope: q.scope, search: !!q.search, sort: q.sort, dir: q.dir };
+  const key = JSON.stringify(shape);
+  let byShape = listQueries.get(db);
+  if (!byShape) listQueries.set(db, (byShape = new Map()));
+  let prepared = byShape.get(key);
+  if (!prepared) byShape.set(key, (prepared = buildListQuery(db, shape)));
+  const params = {
+    actorId: actor.id,
+    like: q.search ? `%${q.search.replace(/[%_\\]/g, (c) => "\\" + c)}%` : undefined,
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  };
+  const rows = await prepared.page.execute(params);
+  const total = rows.length ? rows[0].total : (await prepared.total.execute(params))[0].n;
   return { items: rows.map(({ total: _t, ...r }) => r), total, page: q.page, pageSize: q.pageSize };
 }
 

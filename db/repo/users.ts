@@ -1,4 +1,4 @@
-import { and, count, desc, eq, gt, ilike, isNull, or } from "drizzle-orm";
+import { and, count, desc, eq, gt, ilike, isNull, or, sql } from "drizzle-orm";
 import bcrypt from "bcryptjs";
 import crypto from "node:crypto";
 import { z } from "zod";
@@ -18,8 +18,16 @@ export async function getUserByEmail(db: DbOrTx, email: string): Promise<User | 
   return u;
 }
 
+// Every signed-in request looks its user up, so that query is a named prepared statement: built
+// once per client rather than per call, and parsed and planned once per database connection.
+const userByIdQueries = new WeakMap<DbOrTx, ReturnType<typeof prepareUserById>>();
+const prepareUserById = (db: DbOrTx) =>
+  db.select().from(users).where(eq(users.id, sql.placeholder("id"))).prepare("user_by_id");
+
 export async function getUserById(db: DbOrTx, id: string): Promise<User | undefined> {
-  const [u] = await db.select().from(users).where(eq(users.id, id));
+  let query = userByIdQueries.get(db);
+  if (!query) userByIdQueries.set(db, (query = prepareUserById(db)));
+  const [u] = await query.execute({ id });
   return u;
 }
 
