@@ -152,21 +152,39 @@ export function pulleyFormSchema(system: UnitSystem) {
     .transform(into(pulleyRecordSchema));
 }
 
+/** calc's limits for one of the blower's fields (SI), so the form states them in the user's units. */
+function blowerLimits(field: "displacementPerRev" | "volumetricEfficiencyRef" | "internalEfficiency" | "mechanicalEfficiency") {
+  const s = blowerSchema.shape[field];
+  const n = s instanceof z.ZodDefault ? (s.unwrap() as z.ZodNumber) : (s as z.ZodNumber);
+  return { min: n.minValue!, max: n.maxValue! };
+}
+
+/** A number in the user's units within calc's SI limits, which the message gives in those units. */
+function withinIn(label: string, unit: string, si: { min: number; max: number }, fromSi: (v: number) => number, digits: number) {
+  // Inward to the shown precision, so every value inside the stated range is accepted.
+  const step = 10 ** digits;
+  const lo = Math.ceil(fromSi(si.min) * step - 1e-9) / step;
+  const hi = Math.floor(fromSi(si.max) * step + 1e-9) / step;
+  return numberIn(label, unit).refine((v) => v >= lo && v <= hi, `${label} must be between ${lo} and ${hi} ${unit}.`);
+}
+
 /** The blower form in the user's units (displacement per rev) and percent (efficiencies). */
 export function blowerFormSchema(system: UnitSystem) {
   const unit = system === "metric" ? "L/rev" : "in³/rev";
+  const displacement = (m3: number) => fromSI("blower-displacement", m3, system);
+  const percent = (f: number) => f * 100;
   return z
     .object({
       partNumber: z.string(),
       name: z.string(),
       kind: blowerKindSchema,
-      displacementPerRev: numberIn("Blower displacement", unit),
+      displacementPerRev: withinIn("Blower displacement", unit, blowerLimits("displacementPerRev"), displacement, system === "metric" ? 2 : 1),
       builtInVolumeRatio: numberIn("Built-in volume ratio", ""),
       maxRpm: numberIn("Blower speed limit", "rpm"),
-      volumetricEfficiencyRef: numberIn("Reference volumetric efficiency", "%"),
+      volumetricEfficiencyRef: withinIn("Reference volumetric efficiency", "%", blowerLimits("volumetricEfficiencyRef"), percent, 0),
       referenceRpm: numberIn("Reference speed", "rpm"),
-      internalEfficiency: numberIn("Internal efficiency", "%"),
-      mechanicalEfficiency: numberIn("Drive mechanical efficiency", "%"),
+      internalEfficiency: withinIn("Internal efficiency", "%", blowerLimits("internalEfficiency"), percent, 0),
+      mechanicalEfficiency: withinIn("Drive mechanical efficiency", "%", blowerLimits("mechanicalEfficiency"), percent, 0),
       notes: z.string().default(""),
       price: z.union([z.string(), z.number()]),
       stock: numberIn("Stock", ""),

@@ -1,6 +1,7 @@
 // The parts shelf against a real database: CSV import is all-or-nothing with per-line errors,
 // size and column checks; the admin alone edits; the demo shelf seeds idempotently.
 import { count, eq } from "drizzle-orm";
+import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { FieldError, ForbiddenError } from "@/db/errors";
 import {
@@ -12,6 +13,7 @@ import {
   MAX_CSV_ROWS,
   parseShelfCsv,
   PULLEY_CSV_COLUMNS,
+  blowerFormSchema,
   pulleyFormSchema,
   updatePulley,
 } from "@/db/repo/shelf";
@@ -113,6 +115,53 @@ describe("parts shelf", () => {
       expect(metric.success).toBe(false);
       expect(metric.error?.issues[0].path).toEqual(["diameter"]);
       expect(metric.error?.issues[0].message).toMatch(/mm/);
+    });
+  });
+
+  describe("the blower form", () => {
+    const blowerForm = (displacementPerRev: string, extra: Record<string, string> = {}) => ({
+      partNumber: "PW-BL-T1",
+      name: "Test",
+      kind: "twin-screw",
+      displacementPerRev,
+      builtInVolumeRatio: "1.5",
+      maxRpm: "15000",
+      volumetricEfficiencyRef: "90",
+      referenceRpm: "10000",
+      internalEfficiency: "85",
+      mechanicalEfficiency: "95",
+      notes: "",
+      price: "100",
+      stock: "1",
+      ...extra,
+    });
+
+    it("states its limits in the user's units and percent, on the field", () => {
+      const imperial = blowerFormSchema("imperial").safeParse(blowerForm("2"));
+      expect(imperial.error?.issues.map((i) => i.path)).toEqual([["displacementPerRev"]]);
+      // calc's 0.1–10 L/rev is 6.1–610.2 in³/rev (1 in³ = 16.387064 cm³, NIST SP 811, App. B), stated inward.
+      expect(imperial.error?.issues[0].message).toBe("Blower displacement must be between 6.2 and 610.2 in³/rev.");
+      const pct = blowerFormSchema("metric").safeParse(blowerForm("2", { internalEfficiency: "0.85" }));
+      expect(pct.error?.issues[0].path).toEqual(["internalEfficiency"]);
+      expect(pct.error?.issues[0].message).toBe("Internal efficiency must be between 30 and 100 %.");
+    });
+
+    it("accepts every displacement inside the range it states (property)", () => {
+      for (const system of ["metric", "imperial"] as const) {
+        const schema = blowerFormSchema(system);
+        const limits = schema.safeParse(blowerForm("-1")).error!.issues[0].message.match(/between ([\d.]+) and ([\d.]+)/)!;
+        const [lo, hi] = [Number(limits[1]), Number(limits[2])];
+        fc.assert(
+          fc.property(fc.double({ min: lo, max: hi, noNaN: true }), (d) => {
+            const r = schema.safeParse(blowerForm(String(d)));
+            expect(r.error?.issues ?? []).toEqual([]);
+          }),
+          { numRuns: 200 },
+        );
+        // and the stated ends themselves
+        expect(schema.safeParse(blowerForm(String(lo))).success).toBe(true);
+        expect(schema.safeParse(blowerForm(String(hi))).success).toBe(true);
+      }
     });
   });
 
