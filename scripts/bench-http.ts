@@ -10,6 +10,7 @@
 //   --seconds N       duration of each measured run (default 5)
 //   --runs N          measured runs per cell (default 3)
 //   --connections L   comma-separated connection counts (default 1,16,64)
+//   --routes L        comma-separated subset of list,calc,point (the trivial route is always measured)
 //   --profile DIR     write a CPU profile of the app to DIR (for `node --cpu-prof`'s viewers)
 import autocannon from "autocannon";
 import fs from "node:fs";
@@ -24,8 +25,9 @@ const seconds = Number(opt("--seconds")) || 5;
 const runs = Number(opt("--runs")) || 3;
 const levels = (opt("--connections") ?? "1,16,64").split(",").map(Number);
 const profileDir = opt("--profile");
+const routes = new Set(["trivial", ...(opt("--routes") ?? "list,calc,point").split(",")]);
 
-type Target = { name: string; path: string; method?: "GET" | "POST"; body?: string };
+type Target = { key: string; name: string; path: string; method?: "GET" | "POST"; body?: string };
 type Run = { rps: number; p50: number; p99: number; bad: number; appMs: number; pgMs: number };
 
 const median = (xs: number[]) => {
@@ -63,11 +65,14 @@ const server = await serveThrowaway({
 try {
   const cookie = await signInCookie(server.url, "tuner@example.com");
   const calcBody = JSON.stringify({ op: "curve", combination: exampleCombination(), rpms: Array.from({ length: 56 }, (_, i) => 1000 + i * 100) });
-  const targets: Target[] = [
-    { name: "trivial (/api/health)", path: "/api/health" },
-    { name: "combinations list", path: "/api/combinations?pageSize=20" },
-    { name: "calc (56-speed curve)", path: "/api/calc", method: "POST", body: calcBody },
-  ];
+  const pointBody = JSON.stringify({ op: "point", combination: exampleCombination(), rpm: 5000 });
+  const targets = ([
+    { key: "trivial", name: "trivial (/api/health)", path: "/api/health" },
+    { key: "list", name: "combinations list", path: "/api/combinations?pageSize=20" },
+    { key: "calc", name: "calc (56-speed curve)", path: "/api/calc", method: "POST", body: calcBody },
+    // The same route with a one-point answer (0.7 kB instead of 37 kB): what the route costs apart from the size of its answer.
+    { key: "point", name: "calc (one point)", path: "/api/calc", method: "POST", body: pointBody },
+  ] satisfies Target[] as Target[]).filter((t) => routes.has(t.key));
   console.log(`autocannon: per cell a 3 s warm-up, then ${runs} runs of ${seconds} s; medians of the runs, with the p99 range.`);
   console.log("The app, PostgreSQL and the load generator share this machine's cores.\n");
   console.log("route                       conns     req/s   p50 ms   p99 ms   p99 range   app ms/req   pg ms/req   non-2xx   ratio to trivial");
@@ -108,12 +113,14 @@ try {
   const list16 = at16("combinations list");
   const trivial16 = at16(targets[0].name);
   const calc16 = at16("calc (56-speed curve)");
+  const point16 = at16("calc (one point)");
   if (list16 && trivial16 && calc16) {
     const verdict = (ok: boolean) => (ok ? "(met)" : "(NOT met)");
     console.log("\nTargets (p99 under 50 ms at 16 connections; list at least 1/3 of trivial throughput), on the medians:");
     console.log(`  trivial p99 at 16: ${trivial16.p99.toFixed(1)} ms (the floor this machine sets for any route)`);
     console.log(`  list p99 at 16: ${list16.p99.toFixed(1)} ms ${verdict(list16.p99 < 50)}`);
     console.log(`  calc p99 at 16: ${calc16.p99.toFixed(1)} ms ${verdict(calc16.p99 < 50)}`);
+    if (point16) console.log(`    (the same route with a one-point answer: p99 ${point16.p99.toFixed(1)} ms, ${point16.appMs.toFixed(2)} ms of app CPU per request against ${calc16.appMs.toFixed(2)})`);
     console.log(`  list/trivial throughput at 16: ${(list16.rps / trivial16.rps).toFixed(2)} ${verdict(list16.rps / trivial16.rps >= 1 / 3)}`);
   }
 } finally {

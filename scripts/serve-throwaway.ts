@@ -43,7 +43,10 @@ export async function serveThrowaway(opts: { distDir: string; build: boolean; no
     /** The app's process group (it was started detached, so the group id is its pid). */
     appGroup: app.pid!,
     stop: async () => {
+      // Let the app finish before its database goes, so it does not log lost connections.
+      const exited = app.exitCode !== null ? Promise.resolve() : new Promise<void>((r) => app.once("exit", () => r()));
       stopGroup(app);
+      await Promise.race([exited, new Promise((r) => setTimeout(r, 10_000))]);
       await mail.stop();
       destroyCluster(cluster);
       fs.rmSync(workDir, { recursive: true, force: true });
