@@ -116,7 +116,6 @@ const optionalNumberIn = (label: string, unit: string) =>
     }
     return n;
   });
-const round = (v: number, digits: number) => Number(v.toFixed(digits));
 
 /** Validates a form's converted output with a record schema, keeping each issue on its field. */
 function into<S extends z.ZodType>(schema: S) {
@@ -128,18 +127,48 @@ function into<S extends z.ZodType>(schema: S) {
   };
 }
 
+/** calc's limits for one of the blower's fields (SI), so the form states them in the user's units. */
+function blowerLimits(field: "displacementPerRev" | "volumetricEfficiencyRef" | "internalEfficiency" | "mechanicalEfficiency") {
+  const s = blowerSchema.shape[field];
+  const n = s instanceof z.ZodDefault ? (s.unwrap() as z.ZodNumber) : (s as z.ZodNumber);
+  return { min: n.minValue!, max: n.maxValue! };
+}
+
+/**
+ * SI limits in the user's units, rounded inward to `digits` decimals so that every value inside
+ * the stated range is accepted, and the message that states them.
+ */
+function limitsIn(label: string, unit: string, si: { min: number; max: number }, fromSi: (v: number) => number, digits: number) {
+  const step = 10 ** digits;
+  const lo = Math.ceil(fromSi(si.min) * step - 1e-9) / step;
+  const hi = Math.floor(fromSi(si.max) * step + 1e-9) / step;
+  return { inRange: (v: number | null) => v === null || (v >= lo && v <= hi), message: `${label} must be between ${lo} and ${hi} ${unit}.` };
+}
+
+/** A number in the user's units within SI limits, which the message states in those units. */
+function withinIn(label: string, unit: string, si: { min: number; max: number }, fromSi: (v: number) => number, digits: number) {
+  const { inRange, message } = limitsIn(label, unit, si, fromSi, digits);
+  return numberIn(label, unit).refine(inRange, message);
+}
+
+/** The same, where an empty field means "not known" (null). */
+function optionalWithinIn(label: string, unit: string, si: { min: number; max: number }, fromSi: (v: number) => number, digits: number) {
+  const { inRange, message } = limitsIn(label, unit, si, fromSi, digits);
+  return optionalNumberIn(label, unit).refine(inRange, message);
+}
+
 /** The pulley form in the user's units; parses to a SI pulley record. */
 export function pulleyFormSchema(system: UnitSystem) {
   const unit = system === "metric" ? "mm" : "in";
-  const lo = round(fromSI("length-small", PULLEY_DIAMETER_MIN, system), 2);
-  const hi = round(fromSI("length-small", PULLEY_DIAMETER_MAX, system), 2);
+  const length = (m: number) => fromSI("length-small", m, system);
+  const digits = system === "metric" ? 1 : 2;
   return z
     .object({
       partNumber: z.string(),
       position: z.string(),
-      diameter: numberIn("Diameter", unit).refine((d) => d >= lo && d <= hi, `Diameter must be between ${lo} and ${hi} ${unit}.`),
+      diameter: withinIn("Diameter", unit, { min: PULLEY_DIAMETER_MIN, max: PULLEY_DIAMETER_MAX }, length, digits),
       ribCount: numberIn("Rib count", ""),
-      minBeltDiameter: optionalNumberIn("Minimum belt diameter", unit),
+      minBeltDiameter: optionalWithinIn("Minimum belt diameter", unit, { min: BELT_MINIMUM_MIN, max: BELT_MINIMUM_MAX }, length, digits),
       price: z.union([z.string(), z.number()]),
       stock: numberIn("Stock", ""),
       notes: z.string().default(""),
@@ -150,22 +179,6 @@ export function pulleyFormSchema(system: UnitSystem) {
       minBeltDiameter: f.minBeltDiameter === null ? null : toSI("length-small", f.minBeltDiameter, system),
     }))
     .transform(into(pulleyRecordSchema));
-}
-
-/** calc's limits for one of the blower's fields (SI), so the form states them in the user's units. */
-function blowerLimits(field: "displacementPerRev" | "volumetricEfficiencyRef" | "internalEfficiency" | "mechanicalEfficiency") {
-  const s = blowerSchema.shape[field];
-  const n = s instanceof z.ZodDefault ? (s.unwrap() as z.ZodNumber) : (s as z.ZodNumber);
-  return { min: n.minValue!, max: n.maxValue! };
-}
-
-/** A number in the user's units within calc's SI limits, which the message gives in those units. */
-function withinIn(label: string, unit: string, si: { min: number; max: number }, fromSi: (v: number) => number, digits: number) {
-  // Inward to the shown precision, so every value inside the stated range is accepted.
-  const step = 10 ** digits;
-  const lo = Math.ceil(fromSi(si.min) * step - 1e-9) / step;
-  const hi = Math.floor(fromSi(si.max) * step + 1e-9) / step;
-  return numberIn(label, unit).refine((v) => v >= lo && v <= hi, `${label} must be between ${lo} and ${hi} ${unit}.`);
 }
 
 /** The blower form in the user's units (displacement per rev) and percent (efficiencies). */

@@ -263,12 +263,22 @@ export function localizeMessage(path: string, message: string, system: UnitSyste
   const a = Number(lo);
   const b = Number(hi);
   if (!Number.isFinite(a) || !Number.isFinite(b)) return message;
-  const show = (v: number) => tidyText(kind === "plain" || kind === "speed" ? v : fieldFromSI(kind, v, system));
+  const inUnits = (v: number) => (kind === "plain" || kind === "speed" ? v : fieldFromSI(kind, v, system));
   const u = unitOf(path, system);
-  return `${head} between ${show(a)} and ${show(b)}${u ? (u === "%" ? " %" : ` ${u}`) : ""}`;
+  return `${head} between ${inward(inUnits(a), "up")} and ${inward(inUnits(b), "down")}${u ? (u === "%" ? " %" : ` ${u}`) : ""}`;
 }
 
-const tidyText = (v: number): string => String(Number(v.toPrecision(3)));
+/**
+ * A limit to three significant digits, rounded towards the inside of the range, so that the
+ * figure the message states is itself accepted (0.03 m is 1.1811 in: "1.19", not "1.18").
+ */
+function inward(v: number, dir: "up" | "down"): string {
+  if (v === 0 || !Number.isFinite(v)) return String(v);
+  const step = 10 ** (Math.floor(Math.log10(Math.abs(v))) - 2);
+  const n = v / step;
+  const r = dir === "up" ? Math.ceil(n - 1e-9) : Math.floor(n + 1e-9);
+  return String(Number((r * step).toPrecision(3)));
+}
 
 /** Field errors keyed by the form's dotted paths, in words and in the user's units. */
 export type FormErrors = Record<string, string>;

@@ -165,6 +165,35 @@ describe("parts shelf", () => {
     });
   });
 
+  describe("the pulley form", () => {
+    const pulleyForm = (diameter: string, minBeltDiameter = "") => ({ partNumber: "PW-BP-T1", position: "blower", diameter, ribCount: "8", minBeltDiameter, price: "95", stock: "2", notes: "" });
+
+    it("states the belt minimum's limits in the user's units too", () => {
+      const r = pulleyFormSchema("imperial").safeParse(pulleyForm("3", "0.5"));
+      expect(r.error?.issues.map((i) => i.path)).toEqual([["minBeltDiameter"]]);
+      // 0.02–0.3 m is 0.787–11.81 in (1 in = 0.0254 m, NIST SP 811, App. B), stated inward.
+      expect(r.error?.issues[0].message).toBe("Minimum belt diameter must be between 0.79 and 11.81 in.");
+    });
+
+    it("accepts every diameter and belt minimum inside the ranges it states (property)", () => {
+      for (const system of ["metric", "imperial"] as const) {
+        const schema = pulleyFormSchema(system);
+        const range = (message: string) => message.match(/between ([\d.]+) and ([\d.]+)/)!.slice(1).map(Number);
+        const [dLo, dHi] = range(schema.safeParse(pulleyForm("-1")).error!.issues[0].message);
+        const beltIssue = schema.safeParse(pulleyForm(String((dLo + dHi) / 2), "-1")).error!.issues.find((i) => i.path[0] === "minBeltDiameter")!;
+        const [bLo, bHi] = range(beltIssue.message);
+        fc.assert(
+          fc.property(fc.double({ min: dLo, max: dHi, noNaN: true }), fc.option(fc.double({ min: bLo, max: bHi, noNaN: true })), (d, b) => {
+            const r = schema.safeParse(pulleyForm(String(d), b === null ? "" : String(b)));
+            expect(r.error?.issues ?? []).toEqual([]);
+          }),
+          { numRuns: 200 },
+        );
+        for (const [d, b] of [[dLo, bLo], [dHi, bHi]]) expect(schema.safeParse(pulleyForm(String(d), String(b))).success).toBe(true);
+      }
+    });
+  });
+
   describe("CSV import", () => {
     it("a good file: preview writes nothing, commit upserts every row by part number", async () => {
       const before = await counts();

@@ -75,8 +75,9 @@ describe("validation names the field, in the user's units", () => {
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(Object.keys(r.errors)).toEqual(["drive.blowerPulleyDiameter"]);
-    // source: calc's limits 0.03–0.5 m; 0.03 / 0.0254 = 1.18 in, 0.5 / 0.0254 = 19.7 in
-    expect(r.errors["drive.blowerPulleyDiameter"]).toBe("Blower pulley diameter must be between 1.18 and 19.7 in");
+    // source: calc's limits 0.03–0.5 m; 0.03 / 0.0254 = 1.1811 in, 0.5 / 0.0254 = 19.685 in
+    // (1 in = 0.0254 m, NIST SP 811, App. B), stated inward to three figures.
+    expect(r.errors["drive.blowerPulleyDiameter"]).toBe("Blower pulley diameter must be between 1.19 and 19.6 in");
   });
 
   it("gives the same limits in millimetres to a metric user", () => {
@@ -90,7 +91,33 @@ describe("validation names the field, in the user's units", () => {
     const f = toForm(demo, "imperial");
     f.engine.displacement = Number.NaN;
     const r = validateForm(f, "imperial");
-    expect(r.ok ? null : r.errors["engine.displacement"]).toMatch(/^Engine displacement must be between 12\.2 and 1220 in³$/);
+    expect(r.ok ? null : r.errors["engine.displacement"]).toMatch(/^Engine displacement must be between 12\.3 and 1220 in³$/); // 0.0002–0.02 m³ is 12.205–1220.5 in³ (NIST SP 811)
+  });
+
+  it("states limits that are themselves accepted, for each bounded size in both unit systems", () => {
+    // For every field calc bounds, typing exactly the stated minimum or maximum passes validation.
+    for (const system of ["metric", "imperial"] as const) {
+      const probe = toForm(demo, system);
+      const paths: [string, (f: typeof probe, v: number) => void][] = [
+        ["drive.blowerPulleyDiameter", (f, v) => (f.drive.blowerPulleyDiameter = v)],
+        ["drive.crankPulleyDiameter", (f, v) => (f.drive.crankPulleyDiameter = v)],
+        ["engine.displacement", (f, v) => (f.engine.displacement = v)],
+        ["blower.displacementPerRev", (f, v) => (f.blower.displacementPerRev = v)],
+      ];
+      for (const [path, set] of paths) {
+        const f = toForm(demo, system);
+        set(f, -1);
+        const r = validateForm(f, system);
+        const m = r.ok ? null : /between (\S+) and (\S+)/.exec(r.errors[path]);
+        expect(m, path).not.toBeNull();
+        for (const limit of [Number(m![1]), Number(m![2])]) {
+          const g = toForm(demo, system);
+          set(g, limit);
+          const ok = validateForm(g, system);
+          expect(ok.ok ? [] : Object.entries(ok.errors).filter(([k]) => k === path), `${path} = ${limit} ${system}`).toEqual([]);
+        }
+      }
+    }
   });
 
   it("puts fractions as percentages", () => {
