@@ -96,7 +96,8 @@ export type PulleyRecordInput = z.input<typeof pulleyRecordSchema>;
 export type PulleyRecord = z.output<typeof pulleyRecordSchema>;
 
 // Forms take lengths and volumes in the user's units and efficiencies in percent; their output is
-// the SI record above, so the browser and the API apply the same rules.
+// the SI record above, so the browser and the API apply the same rules. Fields that need no
+// conversion use the record's own schemas, so every field's problem shows at once.
 const numberIn = (label: string, unit: string) =>
   z.union([z.string(), z.number()]).transform((v, ctx) => {
     const n = typeof v === "number" ? v : v.trim() === "" ? NaN : Number(v.trim());
@@ -164,14 +165,14 @@ export function pulleyFormSchema(system: UnitSystem) {
   const digits = system === "metric" ? 1 : 2;
   return z
     .object({
-      partNumber: z.string(),
-      position: z.string(),
+      partNumber: pulleyRecordSchema.shape.partNumber,
+      position: pulleyRecordSchema.shape.position,
       diameter: withinIn("Diameter", unit, { min: PULLEY_DIAMETER_MIN, max: PULLEY_DIAMETER_MAX }, length, digits),
-      ribCount: numberIn("Rib count", ""),
+      ribCount: numberIn("Rib count", "").pipe(pulleyRecordSchema.shape.ribCount),
       minBeltDiameter: optionalWithinIn("Minimum belt diameter", unit, { min: BELT_MINIMUM_MIN, max: BELT_MINIMUM_MAX }, length, digits),
-      price: z.union([z.string(), z.number()]),
-      stock: numberIn("Stock", ""),
-      notes: z.string().default(""),
+      price: moneySchema,
+      stock: numberIn("Stock", "").pipe(stockSchema),
+      notes: pulleyRecordSchema.shape.notes,
     })
     .transform((f) => ({
       ...f,
@@ -188,19 +189,19 @@ export function blowerFormSchema(system: UnitSystem) {
   const percent = (f: number) => f * 100;
   return z
     .object({
-      partNumber: z.string(),
-      name: z.string(),
+      partNumber: blowerRecordSchema.shape.partNumber,
+      name: blowerRecordSchema.shape.name,
       kind: blowerKindSchema,
       displacementPerRev: withinIn("Blower displacement", unit, blowerLimits("displacementPerRev"), displacement, system === "metric" ? 2 : 1),
-      builtInVolumeRatio: numberIn("Built-in volume ratio", ""),
-      maxRpm: numberIn("Blower speed limit", "rpm"),
+      builtInVolumeRatio: numberIn("Built-in volume ratio", "").pipe(blowerSchema.shape.builtInVolumeRatio),
+      maxRpm: numberIn("Blower speed limit", "rpm").pipe(blowerSchema.shape.maxRpm),
       volumetricEfficiencyRef: withinIn("Reference volumetric efficiency", "%", blowerLimits("volumetricEfficiencyRef"), percent, 0),
-      referenceRpm: numberIn("Reference speed", "rpm"),
+      referenceRpm: numberIn("Reference speed", "rpm").pipe(blowerSchema.shape.referenceRpm),
       internalEfficiency: withinIn("Internal efficiency", "%", blowerLimits("internalEfficiency"), percent, 0),
       mechanicalEfficiency: withinIn("Drive mechanical efficiency", "%", blowerLimits("mechanicalEfficiency"), percent, 0),
-      notes: z.string().default(""),
-      price: z.union([z.string(), z.number()]),
-      stock: numberIn("Stock", ""),
+      notes: blowerRecordSchema.shape.notes,
+      price: moneySchema,
+      stock: numberIn("Stock", "").pipe(stockSchema),
     })
     .transform((f) => ({
       ...f,

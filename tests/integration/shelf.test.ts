@@ -146,6 +146,14 @@ describe("parts shelf", () => {
       expect(pct.error?.issues[0].message).toBe("Internal efficiency must be between 30 and 100 %.");
     });
 
+    it("names every field's problem at once, not one stage at a time", () => {
+      const empty = { partNumber: "", name: "", kind: "roots", displacementPerRev: "", builtInVolumeRatio: "1", maxRpm: "", volumetricEfficiencyRef: "", referenceRpm: "", internalEfficiency: "85", mechanicalEfficiency: "95", notes: "", price: "", stock: "0" };
+      const r = blowerFormSchema("metric").safeParse(empty);
+      expect(new Set(r.error?.issues.map((i) => i.path.join(".")))).toEqual(new Set(["partNumber", "name", "displacementPerRev", "maxRpm", "volumetricEfficiencyRef", "referenceRpm", "price"]));
+      const p = pulleyFormSchema("metric").safeParse({ partNumber: "x", position: "idler", diameter: "", ribCount: "2", minBeltDiameter: "", price: "1.234", stock: "-1", notes: "" });
+      expect(new Set(p.error?.issues.map((i) => i.path.join(".")))).toEqual(new Set(["partNumber", "position", "diameter", "ribCount", "price", "stock"]));
+    });
+
     it("accepts every displacement inside the range it states (property)", () => {
       for (const system of ["metric", "imperial"] as const) {
         const schema = blowerFormSchema(system);
