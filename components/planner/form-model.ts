@@ -114,15 +114,26 @@ export function fieldFromSI(kind: FieldKind, v: number, system: UnitSystem): num
 
 const num = (v: unknown): number => (typeof v === "number" ? v : v === "" || v == null ? Number.NaN : Number(v));
 
-/** The form values as a calc Combination input (SI, fractions); switched-off parts become null. */
-export function toSpec(f: PlannerForm, system: UnitSystem): CombinationInput {
-  const q = (path: string, v: unknown) => fieldToSI(FIELD_KINDS[path], num(v), system);
+/**
+ * The form values as a calc Combination input (SI, fractions); switched-off parts become null.
+ * Given the stored combination the form was filled from (`base`), a field still showing exactly
+ * what that stored value displays as keeps the stored value itself: a save in inches does not
+ * turn an untouched 0.005 m³ into 0.0049999997 m³.
+ */
+export function toSpec(f: PlannerForm, system: UnitSystem, base?: Combination): CombinationInput {
+  const stored = (path: string): unknown => path.split(".").reduce<unknown>((o, k) => (o && typeof o === "object" ? (o as Record<string, unknown>)[k] : undefined), base);
+  const q = (path: string, v: unknown) => {
+    const kind = kindOf(path)!;
+    const n = num(v);
+    const b = stored(path);
+    return typeof b === "number" && fieldFromSI(kind, b, system) === n ? b : fieldToSI(kind, n, system);
+  };
   return {
     engine: {
       displacement: q("engine.displacement", f.engine.displacement),
       cylinders: num(f.engine.cylinders),
       redlineRpm: num(f.engine.redlineRpm),
-      veCurve: f.engine.veCurve.map((r) => ({ rpm: num(r.rpm), ve: num(r.ve) / 100 })),
+      veCurve: f.engine.veCurve.map((r, i) => ({ rpm: num(r.rpm), ve: q(`engine.veCurve.${i}.ve`, r.ve) })),
     },
     blower: {
       kind: f.blower.kind,
@@ -284,8 +295,8 @@ function inward(v: number, dir: "up" | "down"): string {
 export type FormErrors = Record<string, string>;
 
 /** Validates form values with calc's combinationSchema; returns the SI combination or errors by field. */
-export function validateForm(f: PlannerForm, system: UnitSystem): { ok: true; spec: Combination } | { ok: false; errors: FormErrors } {
-  const r = combinationSchema.safeParse(toSpec(f, system));
+export function validateForm(f: PlannerForm, system: UnitSystem, base?: Combination): { ok: true; spec: Combination } | { ok: false; errors: FormErrors } {
+  const r = combinationSchema.safeParse(toSpec(f, system, base));
   if (r.success) return { ok: true, spec: r.data };
   return { ok: false, errors: issuesToErrors(r.error.issues, system) };
 }

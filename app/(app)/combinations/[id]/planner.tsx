@@ -85,7 +85,7 @@ export function Planner(props: PlannerProps) {
 
   // Live validation with calc's schema: errors beside the fields, results from the last valid state.
   const valuesKey = JSON.stringify(values) + system;
-  const live = useMemo(() => validateForm(values, system), [valuesKey]); // eslint-disable-line react-hooks/exhaustive-deps
+  const live = useMemo(() => validateForm(values, system, baseSpec), [valuesKey, baseSpec]); // eslint-disable-line react-hooks/exhaustive-deps
   // Keep the last valid combination (state adjusted during render, React's pattern for derived state).
   const [lastGood, setLastGood] = useState<Combination>(props.spec);
   if (live.ok && live.spec !== lastGood) setLastGood(live.spec);
@@ -159,7 +159,7 @@ export function Planner(props: PlannerProps) {
 
   const onSave = form.handleSubmit(
     (vals) => {
-      const v = validateForm(vals, system);
+      const v = validateForm(vals, system, baseSpec);
       if (!v.ok) return;
       setSaveMsg(null);
       startSaving(async () => {
