@@ -5,6 +5,7 @@ import { and, asc, count, desc, eq, ilike, isNull, or, sql, type SQL } from "dri
 import { z } from "zod";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
+import { preparedFor } from "../prepared";
 import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "../errors";
 import { assert, canCreateForCustomer, canReadOwned, canWriteOwned, isShopStaff, type Actor } from "../policy";
 import { combinationRevisions, combinations, users, type CombinationRow } from "../schema";
@@ -80,8 +81,8 @@ type ListShape = Required<Pick<z.output<typeof listQuerySchema>, "sort" | "dir">
 
 const actorId = sql.placeholder("actorId");
 
-/** The list query for one shape, with the actor, search text and page as placeholders. */
-function buildListQuery(db: DbOrTx, shape: ListShape) {
+/** The list query for one shape, with the actor, search text and page as placeholders; `key` names the shape. */
+function buildListQuery(db: DbOrTx, shape: ListShape, key: string) {
   const conds: (SQL | undefined)[] = [isNull(combinations.deletedAt)];
   if (shape.visibility === "own") conds.push(eq(combinations.ownerId, actorId));
   if (shape.visibility === "own-and-demo") conds.push(or(eq(combinations.ownerId, actorId), eq(combinations.isDemo, true)));
@@ -119,25 +120,18 @@ function buildListQuery(db: DbOrTx, shape: ListShape) {
     .orderBy(shape.dir === "asc" ? asc(col) : desc(col), asc(combinations.id))
     .limit(sql.placeholder("limit"))
     .offset(sql.placeholder("offset"));
-  const key = [shape.visibility, shape.scope ?? "any", shape.search ? "search" : "all", shape.sort, shape.dir].join(" "); // at most 50 characters
   // Past the last page there is no row to carry the total: that rare case counts separately.
   const total = db.select({ n: count() }).from(combinations).where(where);
   return { page: page.prepare(`list ${key}`), total: total.prepare(`count ${key}`) };
 }
 
 // The list is the busiest query in the app. Its shapes are few (visibility × scope × search × sort
-// × direction), so each is a named prepared statement: built once per client, and parsed and
-// planned once per database connection instead of on every request.
-const listQueries = new WeakMap<DbOrTx, Map<string, ReturnType<typeof buildListQuery>>>();
-
+// × direction), so each is a named prepared statement (db/prepared.ts).
 export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuery = {}) {
   const q = listQuerySchema.parse(query);
   const shape: ListShape = { visibility: visibilityOf(actor), scope: q.scope, search: !!q.search, sort: q.sort, dir: q.dir };
-  const key = JSON.stringify(shape);
-  let byShape = listQueries.get(db);
-  if (!byShape) listQueries.set(db, (byShape = new Map()));
-  let prepared = byShape.get(key);
-  if (!prepared) byShape.set(key, (prepared = buildListQuery(db, shape)));
+  const key = [shape.visibility, shape.scope ?? "any", shape.search ? "search" : "all", shape.sort, shape.dir].join(" "); // at most 50 characters
+  const prepared = preparedFor(db, `list ${key}`, () => buildListQuery(db, shape, key));
   const params = {
     actorId: actor.id,
     like: q.search ? `%${q.search.replace(/[%_\\]/g, (c) => "\\" + c)}%` : undefined,

@@ -3,6 +3,7 @@ import bcrypt from "bcryptjs";
 import crypto from "node:crypto";
 import { z } from "zod";
 import type { DbOrTx } from "../connect";
+import { preparedFor } from "../prepared";
 import { authTokens, signInAttempts, users, type Role, type User } from "../schema";
 import { ConflictError, NotFoundError } from "../errors";
 import { assert, canManageUsers, ROLES, type Actor } from "../policy";
@@ -18,15 +19,9 @@ export async function getUserByEmail(db: DbOrTx, email: string): Promise<User | 
   return u;
 }
 
-// Every signed-in request looks its user up, so that query is a named prepared statement: built
-// once per client rather than per call, and parsed and planned once per database connection.
-const userByIdQueries = new WeakMap<DbOrTx, ReturnType<typeof prepareUserById>>();
-const prepareUserById = (db: DbOrTx) =>
-  db.select().from(users).where(eq(users.id, sql.placeholder("id"))).prepare("user_by_id");
-
+// Every signed-in request looks its user up, so that query is a named prepared statement.
 export async function getUserById(db: DbOrTx, id: string): Promise<User | undefined> {
-  let query = userByIdQueries.get(db);
-  if (!query) userByIdQueries.set(db, (query = prepareUserById(db)));
+  const query = preparedFor(db, "user_by_id", () => db.select().from(users).where(eq(users.id, sql.placeholder("id"))).prepare("user_by_id"));
   const [u] = await query.execute({ id });
   return u;
 }
