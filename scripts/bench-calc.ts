@@ -10,6 +10,7 @@ import {
   veAt,
 } from "../calc/index";
 import { idealRatioRulePrepared, prepare } from "../calc/solve";
+import { quantile } from "./stats";
 
 const TARGET_MS = 2;
 const WARMUP_RUNS = 300;
@@ -63,9 +64,7 @@ function timeRuns(fn: () => number): { median: number; p95: number; mean: number
     samples[i] = performance.now() - t0;
   }
   if (!Number.isFinite(sink)) throw new Error("benchmark produced a non-finite result");
-  const sorted = Array.from(samples).sort((a, b) => a - b);
-  const at = (q: number): number => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
-  return { median: at(0.5), p95: at(0.95), mean: sorted.reduce((s, v) => s + v, 0) / sorted.length };
+  return { median: quantile(samples, 0.5), p95: quantile(samples, 0.95), mean: samples.reduce((s, v) => s + v, 0) / samples.length };
 }
 
 const work = `${curvePulleys.length} boost curves × ${rpms.length} engine speeds + a ${ladder.length}-size pulley ladder + one pulley finder`;

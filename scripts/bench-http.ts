@@ -17,6 +17,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { exampleCombination } from "../calc";
 import { cpuSplit } from "./cpu-time";
+import { quantile } from "./stats";
 import { serveThrowaway, signInCookie } from "./serve-throwaway";
 
 const args = process.argv.slice(2);
@@ -30,10 +31,7 @@ const routes = new Set(["trivial", ...(opt("--routes") ?? "list,calc,point").spl
 type Target = { key: string; name: string; path: string; method?: "GET" | "POST"; body?: string };
 type Run = { rps: number; p50: number; p99: number; bad: number; appMs: number; pgMs: number };
 
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b);
-  return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
-};
+const median = (xs: number[]) => quantile(xs, 0.5);
 
 async function measure(url: string, cookie: string, t: Target, connections: number, appGroup: number, duration = seconds): Promise<Run> {
   const before = cpuSplit(appGroup);

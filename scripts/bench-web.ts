@@ -5,6 +5,7 @@
 import zlib from "node:zlib";
 import { launchBrowser } from "../tests/support/browser";
 import { serveThrowaway, signInCookie } from "./serve-throwaway";
+import { quantile } from "./stats";
 
 const args = process.argv.slice(2);
 const server = await serveThrowaway({ distDir: ".next-bench", build: !args.includes("--skip-build") });
@@ -118,8 +119,8 @@ try {
     }
     return { out, idle };
   });
-  const med = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-  const p90 = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length * 0.9)];
+  const med = (xs: number[]) => quantile(xs, 0.5);
+  const p90 = (xs: number[]) => quantile(xs, 0.9);
   console.log(
     `planner: slider move to the second frame after it, median of 30: ${med(frameTimes.out).toFixed(1)} ms (p90 ${p90(frameTimes.out).toFixed(1)} ms) ` +
       `against ${med(frameTimes.idle).toFixed(1)} ms for two idle frames: ratio ${(med(frameTimes.out) / med(frameTimes.idle)).toFixed(2)}`,
