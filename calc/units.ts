@@ -228,3 +228,19 @@ export function toSI(kind: QuantityKind, value: number, system: UnitSystem): num
 export function fromSI(kind: QuantityKind, siValue: number, system: UnitSystem): number {
   return UNITS[kind][system].fromSI(siValue);
 }
+
+/**
+ * A limit converted to the user's units and rounded to a multiple of 10^exponent towards the
+ * inside of its range ("up" for a minimum, "down" for a maximum), so that the figure a message
+ * states is itself accepted: 0.03 m is 1.1811 in, so a minimum reads 1.19, not 1.18.
+ */
+export function roundInward(value: number, exponent: number, dir: "up" | "down"): number {
+  const step = (n: number) => (dir === "up" ? Math.ceil(n - 1e-9) : Math.floor(n + 1e-9));
+  // Scale by an exact power of ten, so 6.2 comes back as 6.2 rather than 6.2000000000000002.
+  if (exponent < 0) {
+    const m = 10 ** -exponent;
+    return step(value * m) / m;
+  }
+  const m = 10 ** exponent;
+  return step(value / m) * m;
+}

@@ -3,7 +3,7 @@
 // Forms in the browser import these; db/repo/shelf.ts applies them to the tables.
 import Decimal from "decimal.js";
 import { z } from "zod";
-import { blowerKindSchema, blowerSchema, fromSI, toSI, type UnitSystem } from "@/calc";
+import { blowerKindSchema, blowerSchema, fromSI, roundInward, toSI, type UnitSystem } from "@/calc";
 
 // ---------------------------------------------------------------- money
 
@@ -140,9 +140,8 @@ function blowerLimits(field: "displacementPerRev" | "volumetricEfficiencyRef" | 
  * the stated range is accepted, and the message that states them.
  */
 function limitsIn(label: string, unit: string, si: { min: number; max: number }, fromSi: (v: number) => number, digits: number) {
-  const step = 10 ** digits;
-  const lo = Math.ceil(fromSi(si.min) * step - 1e-9) / step;
-  const hi = Math.floor(fromSi(si.max) * step + 1e-9) / step;
+  const lo = roundInward(fromSi(si.min), -digits, "up");
+  const hi = roundInward(fromSi(si.max), -digits, "down");
   return { inRange: (v: number | null) => v === null || (v >= lo && v <= hi), message: `${label} must be between ${lo} and ${hi} ${unit}.` };
 }
 

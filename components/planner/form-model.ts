@@ -7,6 +7,7 @@ import { z } from "zod";
 import {
   combinationSchema,
   fromSI,
+  roundInward,
   toSI,
   unitLabel,
   type BlowerKind,
@@ -279,16 +280,10 @@ export function localizeMessage(path: string, message: string, system: UnitSyste
   return `${head} between ${inward(inUnits(a), "up")} and ${inward(inUnits(b), "down")}${u ? (u === "%" ? " %" : ` ${u}`) : ""}`;
 }
 
-/**
- * A limit to three significant digits, rounded towards the inside of the range, so that the
- * figure the message states is itself accepted (0.03 m is 1.1811 in: "1.19", not "1.18").
- */
+/** A limit to three significant digits, rounded towards the inside of the range (see roundInward). */
 function inward(v: number, dir: "up" | "down"): string {
   if (v === 0 || !Number.isFinite(v)) return String(v);
-  const step = 10 ** (Math.floor(Math.log10(Math.abs(v))) - 2);
-  const n = v / step;
-  const r = dir === "up" ? Math.ceil(n - 1e-9) : Math.floor(n + 1e-9);
-  return String(Number((r * step).toPrecision(3)));
+  return String(Number(roundInward(v, Math.floor(Math.log10(Math.abs(v))) - 2, dir).toPrecision(3)));
 }
 
 /** Field errors keyed by the form's dotted paths, in words and in the user's units. */

@@ -166,3 +166,31 @@ describe("units", () => {
     });
   });
 });
+
+describe("roundInward", () => {
+  const { roundInward } = U;
+  it("rounds a converted limit towards the inside of its range, to a clean decimal", () => {
+    // 0.03 m = 1.1811 in and 0.5 m = 19.685 in (1 in = 0.0254 m, NIST SP 811, App. B)
+    expect(roundInward(0.03 / 0.0254, -2, "up")).toBe(1.19);
+    expect(roundInward(0.5 / 0.0254, -1, "down")).toBe(19.6);
+    // 0.1 L = 6.1024 in³ (1 in³ = 16.387064 cm³, NIST SP 811): a minimum of 6.2, exactly
+    expect(roundInward(100 / 16.387064, -1, "up")).toBe(6.2);
+    expect(roundInward(1220.47, 1, "down")).toBe(1220);
+    expect(roundInward(30, -1, "up")).toBe(30);
+  });
+
+  it("lands inside the range, on the grid, within one step (property)", () => {
+    fc.assert(
+      fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.integer({ min: -4, max: 3 }), fc.constantFrom("up" as const, "down" as const), (v, e, dir) => {
+        const r = roundInward(v, e, dir);
+        const step = 10 ** e;
+        const tol = 1e-9 * Math.max(1, Math.abs(v) / step) * step;
+        if (dir === "up") expect(r).toBeGreaterThanOrEqual(v - tol);
+        else expect(r).toBeLessThanOrEqual(v + tol);
+        expect(Math.abs(r - v)).toBeLessThan(step + tol);
+        const n = r / step; // a whole number of steps, up to float error in the division
+        expect(Math.abs(n - Math.round(n))).toBeLessThan(1e-6 + 1e-12 * Math.abs(n));
+      }),
+    );
+  });
+});
