@@ -7,21 +7,10 @@ import path from "node:path";
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { seedDemo } from "@/db/seed";
+import { mockSession } from "../support/session-mock";
 import { freshDatabase, type TestDb } from "../support/db";
 
-const ctx = vi.hoisted(() => ({ db: undefined as unknown, userId: null as string | null }));
-vi.mock("@/db/client", () => ({ getDb: () => ctx.db }));
-vi.mock("@/app/_lib/env", () => ({
-  authSecret: () => "a-test-secret-of-enough-length",
-  env: () => ({ NEXTAUTH_URL: "http://127.0.0.1:1", SMTP_URL: "smtp://127.0.0.1:1", MAIL_FROM: "test@example.com" }),
-}));
-vi.mock("@/app/_lib/mail", () => ({ sendMail: async () => ({}), appUrl: (p: string) => `http://127.0.0.1:1${p}` }));
-vi.mock("next/headers", () => ({
-  cookies: async () => ({ get: (name: string) => (ctx.userId && name === "next-auth.session-token" ? { value: "session" } : undefined), getAll: () => [], has: () => false }),
-  headers: async () => new Headers(),
-}));
-vi.mock("next-auth/jwt", () => ({ decode: async () => (ctx.userId ? { sub: ctx.userId } : null) }));
-vi.mock("next/cache", () => ({ revalidatePath: () => {}, revalidateTag: () => {} }));
+const ctx = mockSession();
 
 const appDir = path.resolve(import.meta.dirname, "../../app");
 function actionFiles(dir: string): string[] {

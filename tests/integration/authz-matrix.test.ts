@@ -10,19 +10,10 @@ import { ForbiddenError, NotFoundError } from "@/db/errors";
 import type { Actor } from "@/db/policy";
 import * as repo from "@/db/repo/combinations";
 import { combinations } from "@/db/schema";
+import { mockSession } from "../support/session-mock";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";
 
-// The route handlers run for real; only "who is signed in" and "which database" are supplied.
-const ctx = vi.hoisted(() => ({ db: undefined as unknown, userId: null as string | null }));
-vi.mock("@/db/client", () => ({ getDb: () => ctx.db }));
-vi.mock("@/app/_lib/auth-options", () => ({ authOptions: () => ({}) }));
-// The session as app/_lib/session.ts reads it: next-auth's cookie, decrypted by next-auth/jwt.
-vi.mock("@/app/_lib/env", () => ({ authSecret: () => "a-test-secret-of-enough-length", env: () => ({}) }));
-vi.mock("next/headers", () => ({
-  cookies: async () => ({ get: (name: string) => (ctx.userId && name === "next-auth.session-token" ? { value: "session" } : undefined) }),
-}));
-vi.mock("next-auth/jwt", () => ({ decode: async () => (ctx.userId ? { sub: ctx.userId } : null) }));
-vi.mock("next/cache", () => ({ revalidatePath: () => {} }));
+const ctx = mockSession();
 
 const collection = await import("@/app/api/combinations/route");
 const one = await import("@/app/api/combinations/[id]/route");

@@ -6,18 +6,10 @@ import { ZodError } from "zod";
 import { ConflictError, ForbiddenError, NotFoundError, UnauthorizedError } from "@/db/errors";
 import type { Actor } from "@/db/policy";
 import { listUsers, updateUserAccess } from "@/db/repo/users";
+import { mockSession } from "../support/session-mock";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";
 
-const ctx = vi.hoisted(() => ({ db: undefined as unknown, userId: null as string | null }));
-vi.mock("@/db/client", () => ({ getDb: () => ctx.db }));
-vi.mock("@/app/_lib/auth-options", () => ({ authOptions: () => ({}) }));
-// The session as app/_lib/session.ts reads it: next-auth's cookie, decrypted by next-auth/jwt.
-vi.mock("@/app/_lib/env", () => ({ authSecret: () => "a-test-secret-of-enough-length", env: () => ({}) }));
-vi.mock("next/headers", () => ({
-  cookies: async () => ({ get: (name: string) => (ctx.userId && name === "next-auth.session-token" ? { value: "session" } : undefined) }),
-}));
-vi.mock("next-auth/jwt", () => ({ decode: async () => (ctx.userId ? { sub: ctx.userId } : null) }));
-vi.mock("next/cache", () => ({ revalidatePath: () => {} }));
+const ctx = mockSession();
 
 const { requireActor } = await import("@/app/_lib/session");
 const adminRoutes = { list: await import("@/app/api/admin/users/route"), one: await import("@/app/api/admin/users/[id]/route") };
