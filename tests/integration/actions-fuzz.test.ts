@@ -5,7 +5,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import fc from "fast-check";
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { seedDemo } from "@/db/seed";
 import { mockSession } from "../support/session-mock";
 import { freshDatabase, type TestDb } from "../support/db";

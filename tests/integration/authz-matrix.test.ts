@@ -4,7 +4,7 @@
 // only their own. Tuners and sales staff see the shop's combinations"; instructors also read the
 // shop's demo examples to teach with) — the product's own rules, no external source.
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { exampleCombination } from "@/calc";
 import { ForbiddenError, NotFoundError } from "@/db/errors";
 import type { Actor } from "@/db/policy";

@@ -1,7 +1,7 @@
 // The accounts table and the one entry check (requireActor): only admins manage accounts, nobody
 // removes their own admin access, and a role change or a disabled account applies on the very
 // next request because the session's user is reloaded every time.
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
 import { ConflictError, ForbiddenError, NotFoundError, UnauthorizedError } from "@/db/errors";
 import type { Actor } from "@/db/policy";
