@@ -3,9 +3,10 @@
 // blower speeds separates the blower's slip from the engine's breathing: a wrong slip makes the
 // VE implied at the smaller pulley disagree with the VE implied at the larger one. The fit
 // finds the slip (blower.volumetricEfficiencyRef) at which one VE curve serves every run.
+// Runs logged at different speeds are compared by interpolation where their spans overlap.
 import { CalcConvergenceError, CalcInputError } from "./errors";
 import { calibrateVe, impliedVe } from "./calibrate";
-import { solveBandedSpd } from "./banded";
+import { veAt } from "./engine";
 import {
   calibrationRunsSchema,
   combinationSchema,
@@ -19,10 +20,8 @@ import { newState, prepare, solvePrepared, type PreparedCombination } from "./so
 
 /** Spread of a VE implied by one logged point, from the noise of a boost sensor (fraction): an author's choice. */
 export const CALIBRATION_VE_SIGMA = 0.01;
-/** Spread of the change of VE slope between neighbouring speeds (fraction per 1000 rev/min): an author's choice, weak. */
-export const CALIBRATION_CURVATURE_SIGMA = 0.1;
 /** Spread allowed to the blower's reference VE about its catalogue value (fraction): an author's choice that keeps noise from swinging the slip. */
-export const CALIBRATION_SLIP_PRIOR_SIGMA = 0.1;
+export const CALIBRATION_SLIP_PRIOR_SIGMA = 0.2;
 /** Range searched for the blower's reference VE (fraction): the schema's bounds. */
 const SLIP_SEARCH = { min: 0.3, max: 1, step: 0.02, tolerance: 1e-6 } as const;
 
@@ -70,7 +69,7 @@ interface ParsedRun {
   readonly measured: { rpm: number; boostGauge: number; manifoldTemperature?: number | null }[];
 }
 
-/** A joint VE curve for a trial slip: knot values and the misfit of every run to it. */
+/** A joint VE curve for a trial slip and the cost of the runs' disagreement about it. */
 interface JointFit {
   readonly cost: number;
   readonly veCurve: VePoint[];
@@ -78,62 +77,57 @@ interface JointFit {
 
 const withSlip = (c: Combination, eta: number): Combination => ({ ...c, blower: { ...c.blower, volumetricEfficiencyRef: eta } });
 
+/** Piecewise-linear value of points sorted by rpm at an engine speed, or null outside their span. */
+function within(points: readonly VePoint[], rpm: number): number | null {
+  if (rpm < points[0].rpm || rpm > points[points.length - 1].rpm) return null;
+  return veAt(points, rpm);
+}
+
 /**
- * Least-squares VE at the union of logged speeds for a trial slip: each point pulls its knot
- * toward the VE it implies (σ = CALIBRATION_VE_SIGMA), a weak curvature penalty fills knots
- * logged at one pulley only, and a prior holds the slip near the catalogue value.
+ * The runs' agreement at a trial slip. Each run implies a VE at each of its speeds (closed
+ * form); where another run's speeds span the same engine speed, the two must agree if the
+ * slip is right. The cost is the sum of squared disagreements over 2·σv² (two noisy values)
+ * plus a prior holding the slip near the catalogue value. The joint VE curve averages, at
+ * every logged speed, the curves of the runs that span it.
  */
 function jointFit(c: Combination, runs: readonly ParsedRun[], eta: number, eta0: number, knots: readonly number[]): JointFit | null {
-  const k = knots.length;
-  const index = new Map(knots.map((rpm, i) => [rpm, i]));
-  const sum = new Float64Array(k);
-  const count = new Float64Array(k);
-  const implied: { knot: number; ve: number }[] = [];
   const state = newState();
   const trial = withSlip(c, eta);
+  const curves: VePoint[][] = [];
   for (const run of runs) {
     const p = prepare(trial, run.blowerPulleyDiameter);
+    const curve: VePoint[] = [];
     for (const m of run.measured) {
       const ve = impliedVe(p, m, state);
       if (typeof ve === "string" || !Number.isFinite(ve)) return null;
-      const knot = index.get(m.rpm)!;
-      sum[knot] += ve;
-      count[knot] += 1;
-      implied.push({ knot, ve });
+      curve.push({ rpm: m.rpm, ve });
     }
+    curves.push(curve.sort((a, b) => a.rpm - b.rpm));
   }
-  // Normal equations (diag(n)/σv² + DᵀD/σc²)·x = Σv/σv², D the slope change per 1000 rev/min.
-  const wv = 1 / CALIBRATION_VE_SIGMA ** 2;
-  const wc = 1 / CALIBRATION_CURVATURE_SIGMA ** 2;
-  const band = Array.from({ length: k }, () => new Float64Array(3)); // [i][d] = A(i, i + d)
-  const rhs = new Float64Array(k);
-  for (let i = 0; i < k; i++) {
-    band[i][0] = count[i] * wv;
-    rhs[i] = sum[i] * wv;
-  }
-  const rows = curvatureRows(knots);
-  for (const row of rows) {
-    for (let a = 0; a < 3; a++) {
-      for (let b = a; b < 3; b++) band[row.at + a][b - a] += wc * row.coef[a] * row.coef[b];
-    }
-  }
-  const x = solveBandedSpd(band, rhs);
-  if (x === null) return null;
   let cost = ((eta - eta0) / CALIBRATION_SLIP_PRIOR_SIGMA) ** 2;
-  for (const { knot, ve } of implied) cost += wv * (x[knot] - ve) ** 2;
-  for (const row of rows) cost += wc * (row.coef[0] * x[row.at] + row.coef[1] * x[row.at + 1] + row.coef[2] * x[row.at + 2]) ** 2;
-  return { cost, veCurve: knots.map((rpm, i) => ({ rpm, ve: x[i] })) };
-}
-
-/** Slope change per 1000 rev/min across each three neighbouring knots, as coefficients on x. */
-function curvatureRows(knots: readonly number[]): { at: number; coef: [number, number, number] }[] {
-  const rows: { at: number; coef: [number, number, number] }[] = [];
-  for (let i = 0; i + 2 < knots.length; i++) {
-    const a = 1000 / (knots[i + 1] - knots[i]);
-    const b = 1000 / (knots[i + 2] - knots[i + 1]);
-    rows.push({ at: i, coef: [a, -(a + b), b] });
-  }
-  return rows;
+  const weight = 1 / (2 * CALIBRATION_VE_SIGMA ** 2);
+  curves.forEach((own, j) => {
+    curves.forEach((other, i) => {
+      if (i === j) return;
+      for (const point of own) {
+        const there = within(other, point.rpm);
+        if (there !== null) cost += (weight * (point.ve - there) ** 2) / 2; // each pair is seen from both sides
+      }
+    });
+  });
+  const veCurve = knots.map((rpm) => {
+    let sum = 0;
+    let n = 0;
+    for (const curve of curves) {
+      const v = within(curve, rpm);
+      if (v !== null) {
+        sum += v;
+        n += 1;
+      }
+    }
+    return { rpm, ve: sum / n };
+  });
+  return { cost, veCurve };
 }
 
 /** Slip that minimises the joint misfit: a coarse scan, then golden-section refinement. */

@@ -72,7 +72,6 @@ export {
 export { calibrateVe, type CalibrationResidual, type CalibrationResult } from "./calibrate";
 export {
   calibrate,
-  CALIBRATION_CURVATURE_SIGMA,
   CALIBRATION_SLIP_PRIOR_SIGMA,
   CALIBRATION_VE_SIGMA,
   type FittedParameter,
