@@ -26,26 +26,26 @@ const response = ([a, b]: [OperatingPoint, OperatingPoint]): number => b.manifol
 
 const pulleySteps = [0.85, 0.9, 0.95, 1.1];
 
+/** Every speed from 3000 rpm to redline with both points at PR ≤ 1.9 responds within [lo, hi]. */
+function expectResponseWithin(c: Combination, factor: number, lo: number, hi: number): void {
+  const checked = pairs(c, factor, 3000).filter(([a, b]) => a.pressureRatio <= 1.9 && b.pressureRatio <= 1.9);
+  expect(checked.length).toBeGreaterThan(3);
+  for (const pair of checked) {
+    expect(response(pair)).toBeGreaterThan(lo);
+    expect(response(pair)).toBeLessThan(hi);
+  }
+}
+
 describe("a blower pulley change scales absolute manifold pressure by the drive-ratio change", () => {
   describe.each(withoutIntercooler)("without an intercooler: %s", (_, make) => {
     it.each(pulleySteps)("pulley ×%s: within −5 %/+6 % at every speed from 3000 rpm to redline (PR ≤ 1.9)", (factor) => {
-      const checked = pairs(make(), factor, 3000).filter(([a, b]) => a.pressureRatio <= 1.9 && b.pressureRatio <= 1.9);
-      expect(checked.length).toBeGreaterThan(3);
-      for (const pair of checked) {
-        expect(response(pair)).toBeGreaterThan(0.95);
-        expect(response(pair)).toBeLessThan(1.06);
-      }
+      expectResponseWithin(make(), factor, 0.95, 1.06);
     });
   });
 
   describe.each(withIntercooler)("with an intercooler: %s", (_, make) => {
     it.each(pulleySteps)("pulley ×%s: within ±5 % at every speed from 3000 rpm to redline (PR ≤ 1.9)", (factor) => {
-      const checked = pairs(make(), factor, 3000).filter(([a, b]) => a.pressureRatio <= 1.9 && b.pressureRatio <= 1.9);
-      expect(checked.length).toBeGreaterThan(3);
-      for (const pair of checked) {
-        expect(response(pair)).toBeGreaterThan(0.95);
-        expect(response(pair)).toBeLessThan(1.05);
-      }
+      expectResponseWithin(make(), factor, 0.95, 1.05);
     });
   });
 
