@@ -52,6 +52,7 @@ export {
   slipFlow,
 } from "./blower";
 export { solvePoint, boostCurve, idealRatioRuleManifoldPressure, evaporativeCooling, type OperatingPoint } from "./solve";
+export { explainChange, type ChangeDriver, type ChangeDriverCode, type ChangeExplanation } from "./explain";
 export {
   RANGE_REASONS,
   MODEL_MAX_PRESSURE_RATIO,
