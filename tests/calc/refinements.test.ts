@@ -132,3 +132,25 @@ describe("stored combinations keep parsing", () => {
     expect(solvePoint(old as unknown as Combination, 4000).boostGauge).toBe(solvePoint(c, 4000).boostGauge);
   });
 });
+
+describe("bad refinement inputs name their field", () => {
+  const fieldOf = (c: unknown): string => {
+    try {
+      solvePoint(c as Combination, 3000);
+    } catch (e) {
+      return (e as { field: string }).field;
+    }
+    throw new Error("expected an input error");
+  };
+  const c = exampleCombination();
+  it.each([
+    ["engine.chargeTemperatureExponent", { ...c, engine: { ...c.engine, chargeTemperatureExponent: 1.5 } }],
+    ["engine.compressionRatio", { ...c, engine: { ...c.engine, compressionRatio: 2 } }],
+    ["engine.exhaustBackPressure", { ...c, engine: { ...c.engine, exhaustBackPressure: -1 } }],
+    ["ambient.inletRestriction.ratedFlow", { ...c, ambient: { ...c.ambient, inletRestriction: { ratedFlow: "big" } } }],
+    ["ambient.inletRestriction.ratingDepression", { ...c, ambient: { ...c.ambient, inletRestriction: { ratedFlow: 0.3, ratingDepression: 1 } } }],
+    ["fuel.evaporatedInBlower", { ...c, fuel: { ...c.fuel, evaporatedInBlower: 2 } }],
+  ])("%s", (field, bad) => {
+    expect(fieldOf(bad)).toBe(field);
+  });
+});
