@@ -23,9 +23,14 @@ describe("solvePoint", () => {
       fc.assert(
         fc.property(combinationArb, rpmArb, (c, rpm) => {
           const p = solvePoint(c, rpm);
-          // Engine demand, model.md §3.9, restated: ṁe = Pm/(R·Tm)·Vd·(N/120)·VE(N).
-          const demand = (p.manifoldPressure / (R_MODEL * p.manifoldTemperature)) * c.engine.displacement * (rpm / 120) * veOf(c.engine.veCurve, rpm);
+          // Engine demand, model.md §3.9 with the charge-temperature refinement restated:
+          // ṁe = Pm/(R·Td)·Vd·(N/120)·VE(N), Td = T0·(Tm/T0)^n, n = 0.5 by default (calc/README.md).
+          const td = c.ambient.temperature * Math.sqrt(p.manifoldTemperature / c.ambient.temperature);
+          const demand = (p.manifoldPressure / (R_MODEL * td)) * c.engine.displacement * (rpm / 120) * veOf(c.engine.veCurve, rpm);
           expect(relDiff(p.airMassFlow, demand)).toBeLessThan(1e-9);
+          // The effective VE states the same balance at manifold density.
+          const atManifold = (p.manifoldPressure / (R_MODEL * p.manifoldTemperature)) * c.engine.displacement * (rpm / 120) * p.effectiveVolumetricEfficiency;
+          expect(relDiff(p.airMassFlow, atManifold)).toBeLessThan(1e-9);
         }),
         { numRuns: 300 },
       );
@@ -164,8 +169,13 @@ describe("solvePoint", () => {
       const cooled = solvePoint(wet, 5000);
       expect(cooled.manifoldTemperature).toBeLessThan(dry.manifoldTemperature);
       expect(cooled.airMassFlow).toBeGreaterThan(dry.airMassFlow);
-      // Without an intercooler every temperature scales with T1, so the pressure ratio cannot move.
-      expect(relDiff(cooled.pressureRatio, dry.pressureRatio)).toBeLessThan(1e-9);
+      // With the plain density (n = 1) and no intercooler every temperature scales with T1, so
+      // the pressure ratio cannot move.
+      const plain = (x: Combination): Combination => ({ ...x, engine: { ...x.engine, chargeTemperatureExponent: 1 } });
+      expect(relDiff(solvePoint(plain(wet), 5000).pressureRatio, solvePoint(plain(c), 5000).pressureRatio)).toBeLessThan(1e-9);
+      // With n = 0.5 the engine's intake gains less than the blower's delivery from a cooler
+      // charge, so the pressure ratio rises a little (Td/T1 ∝ T1^−1/2 at a fixed PR).
+      expect(cooled.pressureRatio).toBeGreaterThan(dry.pressureRatio);
       // With an intercooler at a fixed coolant temperature, Tm = (1 − ε)·T2 + ε·Tc falls by a smaller
       // fraction than T1 does, so at a given PR the blower's mass gain outruns the engine's: boost rises.
       const ic = { effectiveness: 0.7, pressureDrop: 2000, coolantTemperature: 310 };

@@ -54,7 +54,9 @@ describe("calibration round trip", () => {
     const before = compareBins(spec, cleaned.bins);
     const after = compareBins(withFittedVe(spec, fit.veCurve), cleaned.bins);
     const rms = (xs: { difference: number | null }[]) => Math.sqrt(xs.reduce((s, x) => s + x.difference! ** 2, 0) / xs.length);
-    expect(rms(before)).toBeGreaterThan(3000); // > 0.4 psi off with the stored curve
+    // > 0.29 psi off with the stored curve (an author's bound; with the charge-temperature
+    // refinement of calc/ a VE error shows as less boost error than before, about 0.37 psi here).
+    expect(rms(before)).toBeGreaterThan(2000);
     expect(rms(after)).toBeLessThan(rms(before) / 10);
   });
 
