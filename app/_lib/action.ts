@@ -1,5 +1,5 @@
 import "server-only";
-import { FieldError } from "@/db/errors";
+import { FieldError } from "@/lib/errors";
 import { toFailure } from "./errors";
 
 /** What every server action returns to its form (for useActionState): ok, or a message with per-field errors. */

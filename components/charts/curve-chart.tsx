@@ -30,11 +30,11 @@ import {
   PRINT_GREYS,
   type AxisKind,
   type CurveMetric,
-} from "./metrics";
+} from "@/lib/charts/metrics";
 
 ChartJS.register(LineController, LineElement, PointElement, LinearScale, Tooltip, Legend);
 
-export type { CurveMetric } from "./metrics";
+export type { CurveMetric } from "@/lib/charts/metrics";
 
 export type CurveSeries = { label: string; points: OperatingPoint[]; dashed?: boolean; colorIndex?: number };
 

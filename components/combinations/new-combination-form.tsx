@@ -3,7 +3,7 @@ import { useActionState, useState } from "react";
 import { createCombinationAction } from "@/app/(app)/combinations/actions";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import type { TemplateKey } from "./templates";
+import type { TemplateKey } from "@/lib/combinations/templates";
 
 type NewCombinationFormProps = {
   templates: { key: TemplateKey; label: string; summary: string }[];

@@ -4,13 +4,13 @@
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { unitLabel, veAt, type Combination, type UnitSystem } from "@/calc";
-import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "@/app/_lib/datalog-parse";
+import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "@/lib/datalogs/parse";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { fitVe, pulleyComparison, smallerPulleys, withFittedVe, type VeFit } from "./analysis";
+import { fitVe, pulleyComparison, smallerPulleys, withFittedVe, type VeFit } from "@/lib/datalogs/analysis";
 import { CleaningControls } from "./cleaning-controls";
-import { fig, PALETTE, rpmText } from "./format";
+import { fig, PALETTE, rpmText } from "@/lib/datalogs/format";
 import { XyChart } from "./xy-chart";
 
 export type CalibrateViewProps = {

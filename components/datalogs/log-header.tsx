@@ -1,7 +1,7 @@
 import Link from "next/link";
 import type { UnitSystem } from "@/calc";
-import type { LogAmbient } from "@/app/_lib/datalog-parse";
-import { withUnit } from "./format";
+import type { LogAmbient } from "@/lib/datalogs/parse";
+import { withUnit } from "@/lib/datalogs/format";
 
 export type LogHeaderProps = {
   title: string;

@@ -16,11 +16,11 @@ import {
   splitLine,
   type DatalogMappingInput,
   type Delimiter,
-} from "@/app/_lib/datalog-parse";
+} from "@/lib/datalogs/parse";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { fig, rpmText, withUnit } from "./format";
+import { fig, rpmText, withUnit } from "@/lib/datalogs/format";
 
 export type UploadCombination = { id: string; name: string; revision: number; ambient: { pressure: number; temperature: number } };
 export type UploadFormProps = { combinations: UploadCombination[]; initialCombinationId: string | null; unitSystem: UnitSystem };

@@ -5,10 +5,10 @@ import { useState } from "react";
 import { useFieldArray, type UseFormReturn } from "react-hook-form";
 import { BLOWER_DEMO_DEFAULTS, standardAtmosphere, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
-import { fieldFromSI, fieldToSI, type PlannerForm } from "./form-model";
+import { fieldFromSI, fieldToSI, type PlannerForm } from "@/lib/combinations/form-model";
 import { NumField } from "./num-field";
-import type { ShelfBlower } from "./compute";
-import { applyShape, VE_SHAPES } from "./ve-shapes";
+import type { ShelfBlower } from "@/lib/planner/compute";
+import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
 
 export type EditorProps = {
   form: UseFormReturn<PlannerForm>;

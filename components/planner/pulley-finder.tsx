@@ -8,8 +8,8 @@ import { LazyCurveChart } from "@/components/charts/curve-chart-lazy";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { figure, quantityText } from "@/components/units/format";
-import { findPulley, safeCurve, withPulley } from "./compute";
+import { figure, quantityText } from "@/lib/units/format";
+import { findPulley, safeCurve, withPulley } from "@/lib/planner/compute";
 
 export type PulleyFinderProps = {
   spec: Combination;

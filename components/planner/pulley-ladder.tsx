@@ -3,8 +3,8 @@
 import { useMemo, useState } from "react";
 import { unitLabel, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
-import { figure, quantityText } from "@/components/units/format";
-import type { LadderRow } from "./compute";
+import { figure, quantityText } from "@/lib/units/format";
+import type { LadderRow } from "@/lib/planner/compute";
 
 type SortKey = "diameter" | "overdrive" | "boostAtPeak" | "boostAtRedline" | "blowerRpmAtRedline" | "chargeTemperature" | "netPower";
 

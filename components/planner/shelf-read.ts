@@ -6,7 +6,7 @@ import { asc, eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/connect";
 import { assert, canSeeShelf, type Actor } from "@/db/policy";
 import { blowers, pulleys } from "@/db/schema";
-import type { Shelf } from "./compute";
+import type { Shelf } from "@/lib/planner/compute";
 
 export async function readPlannerShelf(db: DbOrTx, actor: Actor): Promise<Shelf> {
   assert(canSeeShelf(actor));

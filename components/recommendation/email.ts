@@ -1,10 +1,10 @@
 // The e-mail that carries a recommendation sheet to the customer: a plain-text body and an HTML
 // body with the same content. Every piece of text a person typed is escaped in the HTML.
 import { SAFETY_NOTICE, type UnitSystem } from "@/calc";
-import { quantityText } from "@/components/units/format";
-import { formatMoney } from "@/db/repo/shelf";
+import { quantityText } from "@/lib/units/format";
+import { formatMoney } from "@/lib/shelf/rules";
 import type { ShopDetails } from "@/db/repo/shop";
-import { computeSheet } from "./sheet-data";
+import { computeSheet } from "@/lib/recommendations/sheet-data";
 import type { SheetRecord } from "./sheet-view";
 
 const ENTITIES: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };

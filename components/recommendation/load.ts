@@ -6,7 +6,7 @@ import type { UnitSystem } from "@/calc";
 import { requirePageUser } from "@/app/_lib/session";
 import { verifyShareToken, type ShareVerdict } from "@/app/_lib/share-link";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { getRecommendation, getSharedRecommendation, type Recommendation } from "@/db/repo/recommendations";
 import { getShopDetails, type ShopDetails } from "@/db/repo/shop";
 import { toActor } from "@/db/repo/users";

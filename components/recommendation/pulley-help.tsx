@@ -3,7 +3,7 @@
 // (the size for a target boost), both computed in the browser by calc/ from the sheet's combination.
 import { useMemo, useState } from "react";
 import { fromSI, pulleyForBoost, pulleySweep, toSI, unitLabel, DEFAULT_BELT_MINIMUM_DIAMETER, type Combination, type PulleyForBoostResult, type UnitSystem } from "@/calc";
-import { quantityText } from "@/components/units/format";
+import { quantityText } from "@/lib/units/format";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 

@@ -12,8 +12,8 @@ import { ApiError, apiJson } from "@/components/shelf/api";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { recommendationInputSchema } from "@/db/recommendation-rules";
-import { formatMoney, lineTotal, sumMoney } from "@/db/shelf-rules";
+import { recommendationInputSchema } from "@/lib/recommendations/rules";
+import { formatMoney, lineTotal, sumMoney } from "@/lib/shelf/rules";
 import { PulleyHelp, type ShelfPulley } from "./pulley-help";
 
 export type ShelfPart = { partNumber: string; description: string; price: string; stock: number; diameter?: number; position?: string };

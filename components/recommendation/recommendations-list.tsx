@@ -7,7 +7,7 @@ import { fromSI, unitLabel, type UnitSystem } from "@/calc";
 import { apiJson, queryString } from "@/components/shelf/api";
 import { Pager, SelectField } from "@/components/shelf/table-parts";
 import { Notice } from "@/components/ui/notice";
-import { formatMoney } from "@/db/shelf-rules";
+import { formatMoney } from "@/lib/shelf/rules";
 
 type Row = {
   id: string;

@@ -3,11 +3,11 @@
 import type { Combination, UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { CurveChart } from "@/components/charts/curve-chart";
-import { quantityText } from "@/components/units/format";
-import type { PartLine } from "@/db/repo/recommendations";
-import { formatMoney } from "@/db/repo/shelf";
+import { quantityText } from "@/lib/units/format";
+import type { PartLine } from "@/lib/recommendations/rules";
+import { formatMoney } from "@/lib/shelf/rules";
 import type { ShopDetails } from "@/db/repo/shop";
-import { computeSheet } from "./sheet-data";
+import { computeSheet } from "@/lib/recommendations/sheet-data";
 
 export type SheetRecord = {
   id: string;

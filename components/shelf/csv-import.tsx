@@ -5,7 +5,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { BLOWER_CSV_COLUMNS, MAX_CSV_BYTES, PULLEY_CSV_COLUMNS, type CsvRowError, type ShelfKind } from "@/db/shelf-rules";
+import { BLOWER_CSV_COLUMNS, MAX_CSV_BYTES, PULLEY_CSV_COLUMNS, type CsvRowError, type ShelfKind } from "@/lib/shelf/rules";
 import { ApiError } from "./api";
 
 type Preview = { rowCount: number; errors: CsvRowError[]; committed: boolean; inserted: number; updated: number; rows: { line: number; record: { partNumber: string } }[] };

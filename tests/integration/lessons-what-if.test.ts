@@ -2,9 +2,9 @@
 // raises boost everywhere, better breathing (a higher VE scale) lowers it; nothing else moves.
 import { describe, expect, it } from "vitest";
 import { combinationSchema } from "@/calc";
-import { applyWhatIf, deltaSpeeds, pointAt, rpmGrid, stepCurves } from "@/components/lessons/curves";
-import type { StepItemSnapshot } from "@/db/repo/lessons";
-import { smallBlockBaseline, smallBlockHeadsCam } from "@/db/seed/demo-specs";
+import { applyWhatIf, deltaSpeeds, pointAt, rpmGrid, stepCurves } from "@/lib/lessons/curves";
+import type { StepItemSnapshot } from "@/lib/lessons/rules";
+import { smallBlockBaseline, smallBlockHeadsCam } from "@/lib/combinations/demo-specs";
 
 const item = (label: string, spec: typeof smallBlockBaseline): StepItemSnapshot => ({
   combinationId: "00000000-0000-4000-8000-000000000000",

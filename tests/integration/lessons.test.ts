@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
 import { boostCurve, combinationSchema } from "@/calc";
-import { FieldError, ForbiddenError, NotFoundError } from "@/db/errors";
+import { FieldError, ForbiddenError, NotFoundError } from "@/lib/errors";
 import { createCombination, getCombination, saveCombination } from "@/db/repo/combinations";
 import {
   CLASS_CODE_ALPHABET,
@@ -21,7 +21,7 @@ import {
   updateStep,
 } from "@/db/repo/lessons";
 import { seedCombinations, type DemoCombinations } from "@/db/seed/combinations";
-import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/db/seed/demo-specs";
+import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 import type { DemoUsers } from "@/db/seed/index";
 import { DEMO_CLASS_CODE, DEMO_LESSON_TITLE, seedLessons } from "@/db/seed/lessons";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";

@@ -4,7 +4,7 @@ import { combinationSchema, type Combination } from "@/calc";
 import { requirePageUser } from "@/app/_lib/session";
 import { readPlannerShelf } from "@/components/planner/shelf-read";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { canWriteOwned } from "@/db/policy";
 import { getCombination } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";

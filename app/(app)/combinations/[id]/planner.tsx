@@ -21,15 +21,15 @@ import {
   safeCurve,
   withPulley,
   type Shelf,
-} from "@/components/planner/compute";
+} from "@/lib/planner/compute";
 import { Editor } from "@/components/planner/editor";
-import { convertForm, fieldFromSI, localizeMessage, sameSpec, toForm, toSpec, validateForm, type PlannerForm } from "@/components/planner/form-model";
+import { convertForm, fieldFromSI, localizeMessage, sameSpec, toForm, toSpec, validateForm, type PlannerForm } from "@/lib/combinations/form-model";
 import { PulleyFinder } from "@/components/planner/pulley-finder";
 import { PulleyLadder } from "@/components/planner/pulley-ladder";
 import { draftKey, useUnsavedGuard } from "@/components/planner/use-unsaved-guard";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { figure, percentText, quantityText } from "@/components/units/format";
+import { figure, percentText, quantityText } from "@/lib/units/format";
 
 export type PlannerProps = {
   combinationId: string;

@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { NewCombinationForm } from "@/components/combinations/new-combination-form";
-import { TEMPLATES } from "@/components/combinations/templates";
-import { specRows } from "@/components/combinations/spec-fields";
+import { TEMPLATES } from "@/lib/combinations/templates";
+import { specRows } from "@/lib/combinations/spec-fields";
 
 export const metadata: Metadata = { title: "New combination" };
 

@@ -6,7 +6,7 @@ import { RecommendationForm } from "@/components/recommendation/recommendation-f
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { getCombination, listCombinations } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 

@@ -5,7 +5,7 @@ import { getCurrentUser, requireActor } from "@/app/_lib/session";
 import { makeShareToken } from "@/app/_lib/share-link";
 import { buildSheetEmail } from "@/components/recommendation/email";
 import { getDb } from "@/db/client";
-import { FieldError } from "@/db/errors";
+import { FieldError } from "@/lib/errors";
 import { getRecommendation, markRecommendationSent, recordSendFailure } from "@/db/repo/recommendations";
 import { getShopDetails } from "@/db/repo/shop";
 

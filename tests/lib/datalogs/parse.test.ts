@@ -10,7 +10,7 @@ import {
   readNumber,
   splitLine,
   type DatalogMappingInput,
-} from "@/app/_lib/datalog-parse";
+} from "@/lib/datalogs/parse";
 
 // source: NIST SP 811 (2008), App. B: 1 psi = 6.894 757 kPa; 1 bar = 100 kPa exactly.
 const PSI = 6894.757;

@@ -1,7 +1,7 @@
 // Pure helpers of the classroom view: the "what if" adjustment and the curves and deltas of a
 // step's items, computed in the browser with calc/ (nothing is saved).
 import { boostCurve, combinationSchema, type Combination, type OperatingPoint } from "@/calc";
-import type { LessonSeries, StepItemSnapshot } from "@/db/repo/lessons";
+import type { LessonSeries, StepItemSnapshot } from "@/lib/lessons/rules";
 
 /** The chart metric (an OperatingPoint field) behind each lesson series. */
 export const SERIES_METRIC = {

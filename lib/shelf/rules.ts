@@ -3,6 +3,7 @@
 // Forms in the browser import these; db/repo/shelf.ts applies them to the tables.
 import Decimal from "decimal.js";
 import { z } from "zod";
+import { text } from "@/lib/validation/text";
 import { blowerKindSchema, blowerSchema, fromSI, roundInward, toSI, type UnitSystem } from "@/calc";
 
 // ---------------------------------------------------------------- money
@@ -44,7 +45,6 @@ export function formatMoney(amount: string): string {
 
 // ---------------------------------------------------------------- records
 
-const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).trim().max(max, `${label} must be at most ${max} characters.`);
 
 /** Our own part numbers: capitals, digits and dashes, e.g. PW-BP-0340-8. */
 export const partNumberSchema = z

@@ -13,7 +13,7 @@ import {
   type CombinationInput,
   type VePoint,
 } from "@/calc";
-import { binsToMeasured, type LogAmbient, type LogBin } from "@/app/_lib/datalog-parse";
+import { binsToMeasured, type LogAmbient, type LogBin } from "@/lib/datalogs/parse";
 
 /** The revision's spec with the ambient of the log (its pulley is the revision's own). */
 export function specAsLogged(revisionSpec: CombinationInput, ambient: LogAmbient | null): Combination {

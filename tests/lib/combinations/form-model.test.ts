@@ -2,9 +2,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { combinationSchema, type Combination } from "@/calc";
-import { convertForm, localizeMessage, sameSpec, toForm, toSpec, unitOf, validateForm } from "@/components/planner/form-model";
-import { smallBlockBaseline } from "@/db/seed/demo-specs";
-import { combinationArb } from "../calc/support/arbitraries";
+import { convertForm, localizeMessage, sameSpec, toForm, toSpec, unitOf, validateForm } from "@/lib/combinations/form-model";
+import { smallBlockBaseline } from "@/lib/combinations/demo-specs";
+import { combinationArb } from "@/tests/calc/support/arbitraries";
 
 const demo: Combination = combinationSchema.parse(smallBlockBaseline);
 

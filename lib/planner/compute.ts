@@ -16,7 +16,7 @@ import {
   type PulleySweepRow,
   type UnitSystem,
 } from "@/calc";
-import { quantityText } from "@/components/units/format";
+import { quantityText } from "@/lib/units/format";
 
 /** A blower pulley on the parts shelf (diameter in m; price a decimal string). */
 export type ShelfPulley = { id: string; partNumber: string; diameter: number; price: string; stock: number };

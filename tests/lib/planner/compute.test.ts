@@ -2,12 +2,12 @@
 import { describe, expect, it } from "vitest";
 import { cautions, combinationSchema, inToM, solvePoint, type Combination } from "@/calc";
 import { compareQuery, parseItems, parseSpeeds } from "@/app/(app)/compare/items";
-import { exposeSeries } from "@/components/charts/metrics";
-import { findPulley, ladder, ladderDiameters, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, type ShelfPulley } from "@/components/planner/compute";
-import { deltaRows } from "@/components/planner/side-by-side";
-import { applyShape, VE_SHAPES } from "@/components/planner/ve-shapes";
-import { deltaText, displayValue } from "@/components/units/format";
-import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/db/seed/demo-specs";
+import { exposeSeries } from "@/lib/charts/metrics";
+import { findPulley, ladder, ladderDiameters, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, type ShelfPulley } from "@/lib/planner/compute";
+import { deltaRows } from "@/lib/planner/side-by-side";
+import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
+import { deltaText, displayValue } from "@/lib/units/format";
+import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 
 const base: Combination = combinationSchema.parse(smallBlockBaseline);
 const shelfPulley = (inches: number, stock: number): ShelfPulley => ({ id: `p${inches}`, partNumber: `BP-${inches}`, diameter: inToM(inches), price: "49.00", stock });

@@ -1,5 +1,5 @@
 // Cleaning options in the address (shared by the server pages and the client controls).
-import { cleaningSchema, type CleaningOptions } from "@/app/_lib/datalog-parse";
+import { cleaningSchema, type CleaningOptions } from "@/lib/datalogs/parse";
 
 export type CleaningQuery = Partial<Record<keyof CleaningOptions, string>>;
 

@@ -4,10 +4,10 @@ import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { combinationSchema, exampleCombination, veAt, type VePoint } from "@/calc";
-import { cleanLog, guessLayout, guessMapping, parseLog } from "@/app/_lib/datalog-parse";
-import { compareBins, fitVe, pulleyComparison, smallerPulleys, specAsLogged, withFittedVe } from "@/components/datalogs/analysis";
+import { cleanLog, guessLayout, guessMapping, parseLog } from "@/lib/datalogs/parse";
+import { compareBins, fitVe, pulleyComparison, smallerPulleys, specAsLogged, withFittedVe } from "@/lib/datalogs/analysis";
 import { DEMO_DATALOG_MAPPING, demoDatalogCsv, demoTrueVeCurve, synthesizeLogCsv } from "@/db/seed/datalogs";
-import { smallBlockSmallerPulley } from "@/db/seed/demo-specs";
+import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 
 const spec = combinationSchema.parse(smallBlockSmallerPulley);
 const trueVe: VePoint[] = [
@@ -78,7 +78,7 @@ describe("the demo log", () => {
   it("public/samples/demo-datalog.csv reads with the demo mapping and fits the invented true curve within 2 %", () => {
     // Not compared byte for byte with demoDatalogCsv(): a refinement of calc/ may move its figures a
     // little. Regenerate it with `npx tsx scripts/write-demo-datalog.ts` after such a change.
-    const file = fs.readFileSync(path.join(import.meta.dirname, "../../public/samples/demo-datalog.csv"), "utf8");
+    const file = fs.readFileSync(path.join(import.meta.dirname, "../../../public/samples/demo-datalog.csv"), "utf8");
     expect(file.split("\n")[0]).toBe(demoDatalogCsv().split("\n")[0]);
     const mapping = guessMapping(guessLayout(file));
     expect(mapping).toMatchObject(DEMO_DATALOG_MAPPING);

@@ -1,10 +1,10 @@
 // A recommendation sheet's rules without the database: the zod schemas of what a person fills
 // in (shared by the form in the browser and the API) and the statuses.
 import { z } from "zod";
+import { text } from "@/lib/validation/text";
 import { pulleyDiameterSchema } from "@/calc";
-import { moneySchema, partNumberSchema } from "./shelf-rules";
+import { moneySchema, partNumberSchema } from "@/lib/shelf/rules";
 
-const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).trim().max(max, `${label} must be at most ${max} characters.`);
 
 export const MAX_PART_LINES = 40;
 

@@ -1,7 +1,7 @@
 // What the curve chart can plot: each metric's name, its quantity kind (one y axis per kind)
 // and how to read it off an operating point. Pure, so tests can check the chart's numbers.
 import { fromSI, unitLabel, type OperatingPoint, type QuantityKind, type UnitSystem } from "@/calc";
-import { digitsOf } from "@/components/units/format";
+import { digitsOf } from "@/lib/units/format";
 
 export type CurveMetric =
   | "boostGauge"

@@ -1,7 +1,7 @@
-// Starting points for a new combination: the invented demo engines (db/seed/demo-specs.ts).
+// Starting points for a new combination: the invented demo engines (demo-specs.ts beside this file).
 // Every number in them is a demo value; the planner is where a person makes them their own.
 import type { CombinationInput } from "@/calc";
-import { bigBlockTwinScrew, fourCylinderRoots, smallBlockBaseline } from "@/db/seed/demo-specs";
+import { bigBlockTwinScrew, fourCylinderRoots, smallBlockBaseline } from "@/lib/combinations/demo-specs";
 
 export type TemplateKey = "small-block-roots" | "big-v8-twin-screw" | "four-cylinder-roots";
 
