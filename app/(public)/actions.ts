@@ -1,6 +1,7 @@
 "use server";
 import { z } from "zod";
-import { act, type ActionState, formFields } from "@/app/_lib/action";
+import { act, formFields } from "@/app/_lib/action";
+import { type ActionState } from "@/lib/action-state";
 import { appUrl, sendMail } from "@/app/_lib/mail";
 import { getDb } from "@/db/client";
 import { FieldError } from "@/lib/errors";

@@ -5,15 +5,10 @@ import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tansta
 import Link from "next/link";
 import { useEffect, useId, useState } from "react";
 import { formatQuantity, type UnitSystem } from "@/calc";
-import {
-  deleteCombinationAction,
-  duplicateCombinationAction,
-  renameCombinationAction,
-  undoDeleteAction,
-} from "@/app/(app)/combinations/actions";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import type { Role } from "@/db/schema";
+import type { ActionState } from "@/lib/action-state";
 import { ImportCombinations } from "./import-combinations";
 
 export type ListedCombination = {
@@ -37,6 +32,15 @@ type Scope = "" | "mine" | "shop" | "demo";
 
 type ActionResult<T> = { ok: true; data?: T } | { ok: false; message: string };
 
+/** The server actions the list calls, passed in by the page. */
+export type CombinationListActions = {
+  rename: (id: string, name: string, baseRevision: number) => Promise<ActionState<{ revision: number }>>;
+  duplicate: (id: string) => Promise<ActionState<{ id: string; name: string }>>;
+  remove: (id: string) => Promise<ActionState>;
+  undoDelete: (id: string) => Promise<ActionState>;
+  importFile: (fileText: string) => Promise<ActionState<{ imported: number }>>;
+};
+
 const PAGE_SIZE = 20;
 const STAFF: Role[] = ["tuner", "sales", "admin"];
 
@@ -54,7 +58,7 @@ async function must<T>(p: Promise<ActionResult<T>>): Promise<T | undefined> {
   return r.data;
 }
 
-export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem: UnitSystem }) {
+export function CombinationsList({ role, unitSystem, actions }: { role: Role; unitSystem: UnitSystem; actions: CombinationListActions }) {
   const staff = STAFF.includes(role);
   const qc = useQueryClient();
   const [searchText, setSearchText] = useState("");
@@ -82,7 +86,7 @@ export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem:
   const fail = (e: Error) => setNotice({ tone: "danger", text: e.message });
 
   const duplicate = useMutation({
-    mutationFn: (c: ListedCombination) => must(duplicateCombinationAction(c.id)),
+    mutationFn: (c: ListedCombination) => must(actions.duplicate(c.id)),
     onSuccess: (r) => {
       setNotice({ tone: "ok", text: r ? `Made a copy: “${r.name}”.` : "Made a copy." });
       void refresh();
@@ -90,7 +94,7 @@ export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem:
     onError: fail,
   });
   const remove = useMutation({
-    mutationFn: (c: ListedCombination) => must(deleteCombinationAction(c.id)).then(() => c),
+    mutationFn: (c: ListedCombination) => must(actions.remove(c.id)).then(() => c),
     onSuccess: (c) => {
       setNotice({ tone: "ok", text: `Deleted “${c.name}”.`, undoId: c.id });
       void refresh();
@@ -98,7 +102,7 @@ export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem:
     onError: fail,
   });
   const undo = useMutation({
-    mutationFn: (id: string) => must(undoDeleteAction(id)),
+    mutationFn: (id: string) => must(actions.undoDelete(id)),
     onSuccess: () => {
       setNotice({ tone: "ok", text: "Brought it back." });
       void refresh();
@@ -137,6 +141,7 @@ export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem:
             Export all of mine (JSON)
           </a>
           <ImportCombinations
+            importAction={actions.importFile}
             onImported={(n) => {
               setNotice({ tone: "ok", text: `Imported ${n} combination${n === 1 ? "" : "s"}.` });
               void refresh();
@@ -250,6 +255,7 @@ export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem:
                     role={role}
                     staff={staff}
                     unitSystem={unitSystem}
+                    rename={actions.rename}
                     onRenamed={() => void refresh()}
                     onDuplicate={() => duplicate.mutate(c)}
                     onDelete={() => remove.mutate(c)}
@@ -283,6 +289,7 @@ function Row(props: {
   staff: boolean;
   unitSystem: UnitSystem;
   busy: boolean;
+  rename: CombinationListActions["rename"];
   onRenamed: () => void;
   onDuplicate: () => void;
   onDelete: () => void;
@@ -293,7 +300,7 @@ function Row(props: {
   const [name, setName] = useState(c.name);
   const inputId = useId();
   const rename = useMutation({
-    mutationFn: () => must(renameCombinationAction(c.id, name, c.revision)),
+    mutationFn: () => must(props.rename(c.id, name, c.revision)),
     onSuccess: () => {
       setRenaming(false);
       props.onRenamed();

@@ -3,7 +3,7 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { exampleCombination, type Combination } from "@/calc";
-import { buildSheetEmail } from "@/components/recommendation/email";
+import { buildSheetEmail } from "@/app/_lib/recommendation-email";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
 import { ConflictError, FieldError, ForbiddenError } from "@/lib/errors";
 import { createCombination, saveCombination } from "@/db/repo/combinations";

@@ -3,7 +3,8 @@
 // ownership and role (db/repo/lessons.ts), so these are as safe as the REST routes they mirror.
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
-import { act, type ActionState, formFields } from "@/app/_lib/action";
+import { act, formFields } from "@/app/_lib/action";
+import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import { addStep, copyStepItem, createLesson, deleteLesson, deleteStep, joinLesson, moveStep, regenerateClassCode, updateLesson, updateStep } from "@/db/repo/lessons";

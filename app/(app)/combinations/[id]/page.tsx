@@ -2,7 +2,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { combinationSchema, type Combination } from "@/calc";
 import { requirePageUser } from "@/app/_lib/session";
-import { readPlannerShelf } from "@/components/planner/shelf-read";
+import { readPlannerShelf } from "@/db/repo/planner-shelf";
 import { getDb } from "@/db/client";
 import { NotFoundError } from "@/lib/errors";
 import { canWriteOwned } from "@/db/policy";

@@ -7,7 +7,7 @@ import { useDeferredValue, useEffect, useMemo, useRef, useState, useTransition }
 import { useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
 import { z } from "zod";
 import { cautions as calcCautions, combinationSchema, unitLabel, type Caution, type Combination, type UnitSystem } from "@/calc";
-import type { ActionState } from "@/app/_lib/action";
+import type { ActionState } from "@/lib/action-state";
 import { CautionsPanel } from "@/components/cautions-panel";
 import type { CurveMetric, CurveSeries } from "@/components/charts/curve-chart";
 import { LazyCurveChart } from "@/components/charts/curve-chart-lazy";

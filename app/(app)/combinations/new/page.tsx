@@ -4,6 +4,7 @@ import { requirePageUser } from "@/app/_lib/session";
 import { NewCombinationForm } from "@/components/combinations/new-combination-form";
 import { TEMPLATES } from "@/lib/combinations/templates";
 import { specRows } from "@/lib/combinations/spec-fields";
+import { createCombinationAction } from "../actions";
 
 export const metadata: Metadata = { title: "New combination" };
 
@@ -33,7 +34,7 @@ export default async function NewCombinationPage() {
         Pick a starting point and give it a name; the planner opens next, where you change the engine, blower and pulleys to
         match the real car. The starting points are invented demo values.
       </p>
-      <NewCombinationForm templates={templates} staff={staff} />
+      <NewCombinationForm templates={templates} staff={staff} createAction={createCombinationAction} />
     </div>
   );
 }

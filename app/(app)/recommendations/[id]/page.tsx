@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { loadForStaff } from "@/components/recommendation/load";
+import { loadForStaff } from "@/app/_lib/recommendation-load";
 import { SheetActions } from "@/components/recommendation/sheet-actions";
 import { SheetView } from "@/components/recommendation/sheet-view";
 

@@ -4,8 +4,8 @@ import "server-only";
 import type { DbOrTx } from "@/db/connect";
 import type { Actor } from "@/db/policy";
 import { listBlowerPulleys, listShelfParts } from "@/db/repo/shelf";
-import type { ShelfPulley } from "./pulley-help";
-import type { ShelfPart } from "./recommendation-form";
+import type { ShelfPulley } from "@/components/recommendation/pulley-help";
+import type { ShelfPart } from "@/components/recommendation/recommendation-form";
 
 export async function loadShelfForForm(db: DbOrTx, actor: Actor): Promise<{ pulleys: ShelfPulley[]; parts: ShelfPart[] }> {
   const [blowerPulleys, parts] = await Promise.all([listBlowerPulleys(db, actor), listShelfParts(db, actor)]);

@@ -5,7 +5,7 @@ import { quantityText } from "@/lib/units/format";
 import { formatMoney } from "@/lib/shelf/rules";
 import type { ShopDetails } from "@/db/repo/shop";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
-import type { SheetRecord } from "./sheet-view";
+import type { SheetRecord } from "@/components/recommendation/sheet-view";
 
 const ENTITIES: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
 
