@@ -47,6 +47,7 @@ export {
   slipFlow,
 } from "./blower";
 export { solvePoint, boostCurve, idealRatioRuleManifoldPressure, type OperatingPoint } from "./solve";
+export { trySolvePoint, trySolveCurve } from "./try-solve";
 export {
   pulleySweep,
   pulleyForBoost,

@@ -2,11 +2,10 @@
 // error per speed bin, the VE fit (calc.calibrateVe) and what a smaller pulley would give with
 // the measured engine. Pure: the pages use it live in the browser, the calibrate route on the server.
 import {
-  CalcConvergenceError,
   calibrateVe,
   combinationSchema,
   pulleySweep,
-  solvePoint,
+  trySolvePoint,
   veAt,
   type CalibrationResidual,
   type Combination,
@@ -36,12 +35,7 @@ export function compareBins(spec: Combination, bins: readonly LogBin[]): BinComp
   return bins
     .filter((b) => b.usable)
     .map((b) => {
-      let predicted: number | null = null;
-      try {
-        predicted = solvePoint(spec, b.rpm).boostGauge;
-      } catch (e) {
-        if (!(e instanceof CalcConvergenceError)) throw e;
-      }
+      const predicted = trySolvePoint(spec, b.rpm)?.boostGauge ?? null;
       const difference = predicted === null ? null : b.boostGauge - predicted;
       const percent = predicted === null || Math.abs(predicted) < 1000 ? null : (100 * (difference as number)) / predicted;
       return { rpm: b.rpm, measured: b.boostGauge, predicted, difference, percent };
@@ -55,11 +49,8 @@ export function predictedCurve(spec: Combination, fromRpm: number, toRpm: number
   const hi = Math.max(lo + 1, toRpm);
   for (let i = 0; i <= steps; i++) {
     const rpm = lo + ((hi - lo) * i) / steps;
-    try {
-      out.push({ rpm, boost: solvePoint(spec, rpm).boostGauge });
-    } catch (e) {
-      if (!(e instanceof CalcConvergenceError)) throw e;
-    }
+    const point = trySolvePoint(spec, rpm);
+    if (point) out.push({ rpm, boost: point.boostGauge });
   }
   return out;
 }

@@ -2,14 +2,13 @@
 // curves for the current and neighbouring blower pulleys, the pulley ladder and the finder.
 // Pure (calc only), so tests can run it in node.
 import {
-  boostCurve,
   CalcConvergenceError,
   CalcInputError,
   CalcTargetUnreachableError,
   inToM,
   pulleyForBoost,
   pulleySweep,
-  solvePoint,
+  trySolveCurve,
   type Combination,
   type OperatingPoint,
   type PulleyForBoostResult,
@@ -52,22 +51,7 @@ export function rpmGrid(spec: Combination, step = 250): number[] {
 export const withPulley = (spec: Combination, diameter: number): Combination => ({ ...spec, drive: { ...spec.drive, blowerPulleyDiameter: diameter } });
 
 /** The curve at each speed; speeds with no balance (a blower too slow, say) are left out rather than failing the chart. */
-export function safeCurve(spec: Combination, rpms: readonly number[]): OperatingPoint[] {
-  try {
-    return boostCurve(spec, rpms);
-  } catch (e) {
-    if (!(e instanceof CalcConvergenceError)) throw e;
-    const out: OperatingPoint[] = [];
-    for (const n of rpms) {
-      try {
-        out.push(solvePoint(spec, n));
-      } catch (err) {
-        if (!(err instanceof CalcConvergenceError)) throw err;
-      }
-    }
-    return out;
-  }
-}
+export const safeCurve = (spec: Combination, rpms: readonly number[]): OperatingPoint[] => trySolveCurve(spec, rpms);
 
 /** Engine speed of highest net power on a curve (redline when the curve is empty). */
 export function peakPowerRpm(points: readonly OperatingPoint[], fallback: number): number {

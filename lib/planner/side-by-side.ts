@@ -1,6 +1,6 @@
 // Side by side: the figures of each item at chosen engine speeds and their differences from
 // the first item. Pure (calc only).
-import { CalcConvergenceError, solvePoint, type Combination, type OperatingPoint, type QuantityKind } from "@/calc";
+import { trySolvePoint, type Combination, type OperatingPoint, type QuantityKind } from "@/calc";
 
 export type DeltaQuantity = { key: "boostGauge" | "netPower" | "torque" | "manifoldTemperature" | "drivePower"; label: string; kind: QuantityKind };
 
@@ -15,18 +15,9 @@ export const DELTA_QUANTITIES: readonly DeltaQuantity[] = [
 export type DeltaCell = { value: number | null; delta: number | null };
 export type DeltaRow = { quantity: DeltaQuantity; rpm: number; cells: DeltaCell[] };
 
-function pointAt(spec: Combination, rpm: number): OperatingPoint | null {
-  try {
-    return solvePoint(spec, rpm);
-  } catch (e) {
-    if (e instanceof CalcConvergenceError) return null;
-    throw e;
-  }
-}
-
 /** One row per quantity and speed; each cell holds the item's value (SI) and its difference from the first item. */
 export function deltaRows(specs: readonly Combination[], speeds: readonly number[]): DeltaRow[] {
-  const points = specs.map((s) => speeds.map((n) => pointAt(s, n)));
+  const points = specs.map((s) => speeds.map((n) => trySolvePoint(s, n)));
   const rows: DeltaRow[] = [];
   for (const quantity of DELTA_QUANTITIES) {
     speeds.forEach((rpm, j) => {

@@ -1,6 +1,6 @@
 // What a recommendation sheet shows, computed from its frozen spec: the curves, the key figures
 // and the cautions. Pure, so the sheet, the print view, the share page and the e-mail agree.
-import { blowerSpeed, cautions, driveRatio, overdrive, solvePoint, type Caution, type Combination, type OperatingPoint } from "@/calc";
+import { blowerSpeed, cautions, driveRatio, overdrive, trySolvePoint, type Caution, type Combination, type OperatingPoint } from "@/calc";
 
 export type KeyFigures = {
   crankPulleyDiameter: number;
@@ -33,11 +33,9 @@ export function computeSheet(spec: Combination): SheetData {
   const skipped: number[] = [];
   // A slow, leaky blower can fail to balance at the lowest speeds; the sheet shows the rest.
   for (const rpm of sheetRpms(spec)) {
-    try {
-      points.push(solvePoint(spec, rpm));
-    } catch {
-      skipped.push(rpm);
-    }
+    const point = trySolvePoint(spec, rpm);
+    if (point) points.push(point);
+    else skipped.push(rpm);
   }
   const redline = spec.engine.redlineRpm;
   const best = <K extends keyof OperatingPoint>(key: K) =>
