@@ -5,6 +5,7 @@ import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tansta
 import Link from "next/link";
 import { useEffect, useId, useState } from "react";
 import { formatQuantity, type UnitSystem } from "@/calc";
+import { ApiError, apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import type { Role } from "@/db/schema";
@@ -45,10 +46,12 @@ const PAGE_SIZE = 20;
 const STAFF: Role[] = ["tuner", "sales", "admin"];
 
 async function fetchList(params: URLSearchParams): Promise<ListAnswer> {
-  const res = await fetch(`/api/combinations?${params}`, { headers: { accept: "application/json" } });
-  const body = await res.json().catch(() => null);
-  if (!res.ok) throw new Error(body?.error ?? `The list could not be loaded (HTTP ${res.status}).`);
-  return body as ListAnswer;
+  try {
+    return await apiJson<ListAnswer>(`/api/combinations?${params}`, { headers: { accept: "application/json" } });
+  } catch (e) {
+    if (e instanceof ApiError) throw new Error(e.serverMessage ?? `The list could not be loaded (HTTP ${e.status}).`);
+    throw e;
+  }
 }
 
 /** Server actions answer { ok:false, message } instead of throwing; react-query wants a throw. */

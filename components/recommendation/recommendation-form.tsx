@@ -8,7 +8,7 @@ import { useState } from "react";
 import { useFieldArray, useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { fromSI, unitLabel, type Combination, type UnitSystem } from "@/calc";
-import { ApiError, apiJson } from "@/components/shelf/api";
+import { ApiError, apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";

@@ -4,7 +4,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { fromSI, unitLabel, type UnitSystem } from "@/calc";
-import { apiJson, queryString } from "@/components/shelf/api";
+import { apiJson, queryString } from "@/components/client-json";
 import { Pager, SelectField } from "@/components/shelf/table-parts";
 import { Notice } from "@/components/ui/notice";
 import { formatMoney } from "@/lib/shelf/rules";

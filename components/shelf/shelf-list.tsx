@@ -6,7 +6,7 @@ import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-quer
 import { useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { apiJson, queryString } from "./api";
+import { apiJson, queryString } from "@/components/client-json";
 import { Pager, SortHeader, type SortState } from "./table-parts";
 
 export type ShelfKind = "blowers" | "pulleys";

@@ -1,4 +1,4 @@
-// Small fetch helpers for the shelf and recommendation screens: JSON in and out, and the
+// The one client helper for every fetch and mutation from the browser: JSON in and out, and the
 // server's message and per-field errors kept on the thrown error so forms can show them.
 
 export class ApiError extends Error {
@@ -7,6 +7,8 @@ export class ApiError extends Error {
     readonly status: number,
     readonly fieldErrors: Record<string, string[]> = {},
     readonly body: unknown = null,
+    /** The server's own message (its `error` field), when it sent one. */
+    readonly serverMessage?: string,
   ) {
     super(message);
   }
@@ -28,7 +30,7 @@ export async function apiJson<T>(url: string, init: RequestInit & { json?: unkno
   }
   if (!res.ok) {
     const d = (data ?? {}) as { error?: string; fieldErrors?: Record<string, string[]> };
-    throw new ApiError(d.error ?? `The server answered ${res.status}.`, res.status, d.fieldErrors ?? {}, data);
+    throw new ApiError(d.error ?? `The server answered ${res.status}.`, res.status, d.fieldErrors ?? {}, data, d.error);
   }
   return data as T;
 }
