@@ -1,27 +1,18 @@
 // The parts shelf: the shop's blowers and pulleys with price and stock. Everyone signed in reads
 // it; only the admin changes it (db/policy.ts canEditShelf). Quantities are SI like calc/, money
 // is numeric in the database (read back as strings) and decimal.js here, never binary floats.
-// The rules (zod schemas, money) live in lib/shelf/rules.ts and the CSV reader in lib/shelf/csv.ts.
-import { and, asc, count, desc, eq, gt, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
-import Papa from "papaparse";
+// The rules (zod schemas, money) live in lib/shelf/rules.ts; CSV import and export in shelf-csv.ts.
+import { and, asc, count, desc, eq, gt, ilike, inArray, or, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { fromSI } from "@/calc";
 import type { DbOrTx } from "../connect";
 import { FieldError, NotFoundError } from "@/lib/errors";
-import { litres, mm, parseShelfCsv, safeText } from "@/lib/shelf/csv";
 import {
-  BLOWER_CSV_COLUMNS,
   type BlowerListQuery,
-  type BlowerRecord,
   type BlowerRecordInput,
-  type CsvPreviewRow,
-  type CsvRowError,
-  PULLEY_CSV_COLUMNS,
   type Page,
   type PulleyListQuery,
-  type PulleyRecord,
   type PulleyRecordInput,
-  type ShelfKind,
   blowerListQuerySchema,
   blowerRecordSchema,
   pulleyListQuerySchema,
@@ -120,7 +111,7 @@ export function describePulley(p: Pick<PulleyRow, "position" | "diameter" | "rib
 
 // ---------------------------------------------------------------- edits (admin)
 
-const ONLY_ADMIN = "Only the admin changes the parts shelf.";
+export const ONLY_ADMIN = "Only the admin changes the parts shelf.";
 const isUuid = (id: string) => z.uuid().safeParse(id).success;
 
 async function partNumberTaken(db: DbOrTx, partNumber: string, exceptId?: string) {
@@ -178,120 +169,4 @@ export async function deleteBlower(db: DbOrTx, actor: Actor, id: string) {
   if (!isUuid(id)) throw new NotFoundError("No such blower.");
   const [row] = await db.delete(blowers).where(eq(blowers.id, id)).returning({ id: blowers.id });
   if (!row) throw new NotFoundError("No such blower.");
-}
-
-export type ImportOutcome = {
-  kind: ShelfKind;
-  committed: boolean;
-  rows: CsvPreviewRow<PulleyRecord | BlowerRecord>[];
-  errors: CsvRowError[];
-  inserted: number;
-  updated: number;
-};
-
-/**
- * CSV import: `commit: false` is the preview; `commit: true` writes every row (upsert by part
- * number) in one transaction, or nothing at all if any row has an error.
- */
-export async function importShelfCsv(db: DbOrTx, actor: Actor, kind: ShelfKind, csv: string, opts: { commit: boolean }): Promise<ImportOutcome> {
-  assert(canEditShelf(actor), ONLY_ADMIN);
-  const { rows, errors } = parseShelfCsv(kind, csv);
-  const outcome: ImportOutcome = { kind, committed: false, rows, errors, inserted: 0, updated: 0 };
-  if (!opts.commit || errors.length) return outcome;
-
-  // A part number is one thing: a pulley's number may not name a blower and the other way round.
-  const numbers = rows.map((r) => r.record.partNumber);
-  const other = kind === "pulleys" ? blowers : pulleys;
-  const clashes = await db.select({ partNumber: other.partNumber }).from(other).where(inArray(other.partNumber, numbers));
-  if (clashes.length) {
-    const lineOf = new Map(rows.map((r) => [r.record.partNumber, r.line]));
-    outcome.errors = clashes.map((c) => ({ line: lineOf.get(c.partNumber) ?? 0, column: "part_number", message: `Part number ${c.partNumber} belongs to a ${kind === "pulleys" ? "blower" : "pulley"} on the shelf.` }));
-    return outcome;
-  }
-
-  const CHUNK = 500;
-  await db.transaction(async (tx) => {
-    for (let i = 0; i < rows.length; i += CHUNK) {
-      const chunk = rows.slice(i, i + CHUNK).map((r) => r.record);
-      const now = new Date();
-      const written =
-        kind === "pulleys"
-          ? await tx
-              .insert(pulleys)
-              .values(chunk as PulleyRecord[])
-              .onConflictDoUpdate({
-                target: pulleys.partNumber,
-                set: {
-                  position: sql`excluded.position`,
-                  diameter: sql`excluded.diameter`,
-                  ribCount: sql`excluded.rib_count`,
-                  minBeltDiameter: sql`excluded.min_belt_diameter`,
-                  price: sql`excluded.price`,
-                  stock: sql`excluded.stock`,
-                  notes: sql`excluded.notes`,
-                  updatedAt: now,
-                },
-              })
-              .returning({ inserted: sql<boolean>`(xmax = 0)` })
-          : await tx
-              .insert(blowers)
-              .values(chunk as BlowerRecord[])
-              .onConflictDoUpdate({
-                target: blowers.partNumber,
-                set: {
-                  name: sql`excluded.name`,
-                  kind: sql`excluded.kind`,
-                  displacementPerRev: sql`excluded.displacement_per_rev`,
-                  builtInVolumeRatio: sql`excluded.built_in_volume_ratio`,
-                  maxRpm: sql`excluded.max_rpm`,
-                  volumetricEfficiencyRef: sql`excluded.volumetric_efficiency_ref`,
-                  referenceRpm: sql`excluded.reference_rpm`,
-                  internalEfficiency: sql`excluded.internal_efficiency`,
-                  mechanicalEfficiency: sql`excluded.mechanical_efficiency`,
-                  price: sql`excluded.price`,
-                  stock: sql`excluded.stock`,
-                  notes: sql`excluded.notes`,
-                  updatedAt: now,
-                },
-              })
-              .returning({ inserted: sql<boolean>`(xmax = 0)` });
-      for (const w of written) {
-        if (w.inserted) outcome.inserted++;
-        else outcome.updated++;
-      }
-    }
-  });
-  outcome.committed = true;
-  return outcome;
-}
-
-/** The whole shelf of one kind as CSV, in the import's columns. */
-export async function exportShelfCsv(db: DbOrTx, actor: Actor, kind: ShelfKind): Promise<string> {
-  assert(canSeeShelf(actor));
-  if (kind === "pulleys") {
-    const rows = await db.select().from(pulleys).orderBy(asc(pulleys.position), asc(pulleys.diameter), asc(pulleys.partNumber));
-    return Papa.unparse({
-      fields: [...PULLEY_CSV_COLUMNS],
-      data: rows.map((p) => [p.partNumber, p.position, mm(p.diameter), p.ribCount, p.minBeltDiameter === null ? "" : mm(p.minBeltDiameter), p.price, p.stock, safeText(p.notes)]),
-    });
-  }
-  const rows = await db.select().from(blowers).orderBy(asc(blowers.partNumber));
-  return Papa.unparse({
-    fields: [...BLOWER_CSV_COLUMNS],
-    data: rows.map((b) => [
-      b.partNumber,
-      safeText(b.name),
-      b.kind,
-      litres(b.displacementPerRev),
-      b.builtInVolumeRatio,
-      b.maxRpm,
-      b.volumetricEfficiencyRef,
-      b.referenceRpm,
-      b.internalEfficiency,
-      b.mechanicalEfficiency,
-      b.price,
-      b.stock,
-      safeText(b.notes),
-    ]),
-  });
 }
