@@ -49,7 +49,7 @@ describe("calibrateVe", () => {
 
   describe("uses the measured temperature instead of the model's", () => {
     it("VE scales with the measured manifold temperature, VE = ṁ·R·Tm/(Pm·Vd·N/120)", () => {
-      // model.md §4: at a measured PR the blower's delivery is fixed, so VE ∝ Tm.
+      // calc/README.md: at a measured PR the blower's delivery is fixed, so VE ∝ Tm.
       fc.assert(
         fc.property(combinationArb, fc.double({ min: -20, max: 40, noNaN: true }), (c, dT) => {
           const points = synthetic(c);
