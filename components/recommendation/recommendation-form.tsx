@@ -14,7 +14,8 @@ import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { recommendationInputSchema } from "@/lib/recommendations/rules";
 import { formatMoney, lineTotal, sumMoney } from "@/lib/shelf/rules";
-import { PulleyHelp, type ShelfPulley } from "./pulley-help";
+import { PulleyHelp } from "@/components/pulleys/pulley-help";
+import type { ShelfPulley } from "@/lib/planner/compute";
 
 export type ShelfPart = { partNumber: string; description: string; price: string; stock: number; diameter?: number; position?: string };
 type FormIn = z.input<typeof recommendationInputSchema>;
@@ -128,7 +129,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
             Add this pulley to the parts
           </Button>
         </div>
-        <PulleyHelp spec={combination.spec} pulleys={pulleys} unitSystem={unitSystem} chosen={chosen} onChoose={choose} />
+        <PulleyHelp spec={combination.spec} shelf={pulleys} system={unitSystem} onChoose={choose} />
       </section>
 
       <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">

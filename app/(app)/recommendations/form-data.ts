@@ -3,14 +3,13 @@ import "server-only";
 // every part as a parts-list choice.
 import type { DbOrTx } from "@/db/connect";
 import type { Actor } from "@/db/policy";
-import { listBlowerPulleys, listShelfParts } from "@/db/repo/shelf";
-import type { ShelfPulley } from "@/components/recommendation/pulley-help";
+import { readPlannerShelf } from "@/db/repo/planner-shelf";
+import { listShelfParts } from "@/db/repo/shelf";
 import type { ShelfPart } from "@/components/recommendation/recommendation-form";
+import type { ShelfPulley } from "@/lib/planner/compute";
 
 export async function loadShelfForForm(db: DbOrTx, actor: Actor): Promise<{ pulleys: ShelfPulley[]; parts: ShelfPart[] }> {
-  const [blowerPulleys, parts] = await Promise.all([listBlowerPulleys(db, actor), listShelfParts(db, actor)]);
-  return {
-    pulleys: blowerPulleys.map((p) => ({ partNumber: p.partNumber, diameter: p.diameter, ribCount: p.ribCount, price: p.price, stock: p.stock, minBeltDiameter: p.minBeltDiameter })),
-    parts,
-  };
+  // The same shelf read as the planner's, so the ladder and finder see the same pulleys.
+  const [shelf, parts] = await Promise.all([readPlannerShelf(db, actor), listShelfParts(db, actor)]);
+  return { pulleys: shelf.blowerPulleys, parts };
 }

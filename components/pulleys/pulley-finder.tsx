@@ -1,6 +1,7 @@
 "use client";
 // The pulley finder: the exact blower pulley for a target boost at an engine speed, the nearest
-// stocked sizes either side, and their predicted curves.
+// stocked sizes either side, and their predicted curves. Used by the planner and the
+// recommendation sheet; inside another form (`nested`) it is a group with a plain button.
 import { useMemo, useState, type FormEvent } from "react";
 import { toSI, unitLabel, type Combination, type UnitSystem } from "@/calc";
 import type { CurveSeries } from "@/components/charts/curve-chart";
@@ -18,9 +19,11 @@ export type PulleyFinderProps = {
   stock: number[];
   defaultRpm: number;
   onApply?: (diameter: number) => void;
+  /** Rendered inside another form: a group instead of a form of its own. */
+  nested?: boolean;
 };
 
-export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply }: PulleyFinderProps) {
+export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply, nested }: PulleyFinderProps) {
   const [target, setTarget] = useState("");
   const [rpm, setRpm] = useState(String(Math.round(defaultRpm)));
   const [request, setRequest] = useState<{ boost: number; rpm: number } | null>(null);
@@ -37,8 +40,8 @@ export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply }:
     return out;
   }, [outcome, spec, rpms, system]);
 
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
+  const submit = (e?: FormEvent) => {
+    e?.preventDefault();
     const t = Number(target);
     const n = Number(rpm);
     if (target.trim() === "" || !Number.isFinite(t)) return setError({ field: "target", message: `Give a target boost in ${pressureUnit}.` });
@@ -47,12 +50,17 @@ export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply }:
     setRequest({ boost: toSI("pressure", t, system), rpm: n });
   };
 
+  const Wrapper = nested ? "div" : "form";
+  const wrapperProps = nested
+    ? { role: "group", "aria-labelledby": "finder-heading", className: "flex flex-wrap items-end gap-3" }
+    : { onSubmit: submit, noValidate: true, className: "flex flex-wrap items-end gap-3" };
+
   return (
     <section aria-labelledby="finder-heading" className="flex flex-col gap-3">
       <h2 id="finder-heading" className="text-base font-semibold">
         Pulley finder
       </h2>
-      <form onSubmit={submit} className="flex flex-wrap items-end gap-3" noValidate>
+      <Wrapper {...wrapperProps}>
         <Field
           name="finderTarget"
           label="Target boost"
@@ -75,8 +83,10 @@ export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply }:
           onChange={(e) => setRpm(e.target.value)}
           errors={error?.field === "rpm" ? error.message : undefined}
         />
-        <Button type="submit">Find pulley</Button>
-      </form>
+        <Button type={nested ? "button" : "submit"} onClick={nested ? () => submit() : undefined}>
+          Find pulley
+        </Button>
+      </Wrapper>
       {outcome && !outcome.ok ? (
         <Notice tone="warning" title="Target out of reach">
           {outcome.message}
