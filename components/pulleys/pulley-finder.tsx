@@ -102,22 +102,17 @@ export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply, n
             (drive ratio {outcome.result.point.driveRatio.toFixed(2)}).
           </p>
           <ul className="text-sm">
-            <li data-testid="finder-below" data-diameter-m={outcome.result.below?.diameter ?? ""}>
-              Nearest stocked, smaller (more boost):{" "}
-              {outcome.result.below
-                ? `${quantityText("length-small", outcome.result.below.diameter, system)}, ${quantityText("pressure", outcome.result.below.point.boostGauge, system)}`
-                : stock.length
-                  ? "none on the shelf"
-                  : "the parts shelf has no blower pulleys"}
-            </li>
-            <li data-testid="finder-above" data-diameter-m={outcome.result.above?.diameter ?? ""}>
-              Nearest stocked, larger (less boost):{" "}
-              {outcome.result.above
-                ? `${quantityText("length-small", outcome.result.above.diameter, system)}, ${quantityText("pressure", outcome.result.above.point.boostGauge, system)}`
-                : stock.length
-                  ? "none on the shelf"
-                  : "the parts shelf has no blower pulleys"}
-            </li>
+            {(
+              [
+                ["below", "Nearest stocked, smaller (more boost)", outcome.result.below],
+                ["above", "Nearest stocked, larger (less boost)", outcome.result.above],
+              ] as const
+            ).map(([side, label, s]) => (
+              <li key={side} data-testid={`finder-${side}`} data-diameter-m={s?.diameter ?? ""}>
+                {label}:{" "}
+                {s ? `${quantityText("length-small", s.diameter, system)}, ${quantityText("pressure", s.point.boostGauge, system)}` : stock.length ? "none on the shelf" : "the parts shelf has no blower pulleys"}
+              </li>
+            ))}
           </ul>
           {onApply ? (
             <div className="flex flex-wrap gap-2">

@@ -20,21 +20,7 @@ import { quantityText } from "@/lib/units/format";
 /** A blower pulley on the parts shelf (diameter in m; price a decimal string). */
 export type ShelfPulley = { id: string; partNumber: string; diameter: number; price: string; stock: number };
 /** A blower on the parts shelf with the fields calc needs (SI). */
-export type ShelfBlower = {
-  id: string;
-  partNumber: string;
-  name: string;
-  kind: "roots" | "twin-screw";
-  displacementPerRev: number;
-  builtInVolumeRatio: number;
-  maxRpm: number;
-  volumetricEfficiencyRef: number;
-  referenceRpm: number;
-  internalEfficiency: number;
-  mechanicalEfficiency: number;
-  price: string;
-  stock: number;
-};
+export type ShelfBlower = Combination["blower"] & { id: string; partNumber: string; name: string; price: string; stock: number };
 export type Shelf = { blowerPulleys: ShelfPulley[]; blowers: ShelfBlower[] };
 
 /** Engine speeds of the curves: every 250 rpm from about the start of the VE curve to redline. */
