@@ -4,6 +4,7 @@ import Link from "next/link";
 import type { UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { Pager } from "@/components/ui/pager";
 import type { Role } from "@/db/schema";
 import { CombinationRow as Row } from "./combination-row";
 import { ImportCombinations } from "./import-combinations";
@@ -155,18 +156,9 @@ export function CombinationsList({ role, unitSystem, actions }: { role: Role; un
               </tbody>
             </table>
           </div>
-          <nav aria-label="Pages" className="flex items-center gap-3 text-sm">
-            <Button variant="secondary" disabled={page <= 1} onClick={() => setPage((p) => p - 1)}>
-              Previous
-            </Button>
-            <span>
-              Page {data.page} of {pages} · {data.total} combination{data.total === 1 ? "" : "s"}
-              {list.isFetching ? <span className="ml-2 text-muted">updating…</span> : null}
-            </span>
-            <Button variant="secondary" disabled={page >= pages} onClick={() => setPage((p) => p + 1)}>
-              Next
-            </Button>
-          </nav>
+          <Pager label="Combinations" ariaLabel="Pages" page={page} pageSize={data.pageSize} total={data.total} onPage={setPage} noun={["combination", "combinations"]}>
+            {list.isFetching ? <span className="ml-2 text-muted">updating…</span> : null}
+          </Pager>
         </>
       ) : null}
     </section>

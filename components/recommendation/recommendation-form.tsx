@@ -10,6 +10,7 @@ import type { z } from "zod";
 import { fromSI, unitLabel, type Combination, type UnitSystem } from "@/calc";
 import { ApiError, apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
+import { TotalFoot } from "@/components/ui/data-table";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { recommendationInputSchema } from "@/lib/recommendations/rules";
@@ -278,17 +279,9 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
                 );
               })}
             </tbody>
-            <tfoot>
-              <tr>
-                <th scope="row" colSpan={3} className="py-1 text-right">
-                  Total
-                </th>
-                <td className="py-1 text-right font-semibold" data-testid="form-total">
-                  {total === null ? "–" : formatMoney(total)}
-                </td>
-                <td />
-              </tr>
-            </tfoot>
+            <TotalFoot labelSpan={3} testId="form-total" trailing={1}>
+              {total === null ? "–" : formatMoney(total)}
+            </TotalFoot>
           </table>
         ) : null}
       </section>

@@ -6,7 +6,7 @@ import { formatMoney } from "@/lib/shelf/rules";
 import { BlowerForm, type BlowerJson } from "./blower-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
 import { stockCell, stockClass } from "@/lib/shelf/stock";
-import { SelectField } from "./table-parts";
+import { SelectField } from "@/components/ui/select-field";
 
 type Sort = "partNumber" | "name" | "displacementPerRev" | "maxRpm" | "price" | "stock";
 

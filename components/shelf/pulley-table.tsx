@@ -6,7 +6,7 @@ import { formatMoney } from "@/lib/shelf/rules";
 import { PulleyForm, type PulleyJson } from "./pulley-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
 import { stockCell, stockClass } from "@/lib/shelf/stock";
-import { SelectField } from "./table-parts";
+import { SelectField } from "@/components/ui/select-field";
 
 type Sort = "partNumber" | "diameter" | "ribCount" | "price" | "stock";
 

@@ -1,13 +1,19 @@
 // The parts shelf as files: CSV import (preview, then all rows or none) and export, in the
 // columns lib/shelf/csv.ts reads. The same admin-only rule as the shelf's other edits.
 import Papa from "papaparse";
-import { asc, inArray, sql } from "drizzle-orm";
+import { asc, inArray, sql, type Column } from "drizzle-orm";
 import type { DbOrTx } from "@/db/connect";
 import { assert, canEditShelf, canSeeShelf, type Actor } from "@/db/policy";
 import { ONLY_ADMIN } from "@/db/repo/shelf";
 import { blowers, pulleys } from "@/db/schema";
 import { litres, mm, parseShelfCsv, safeText } from "@/lib/shelf/csv";
 import { BLOWER_CSV_COLUMNS, PULLEY_CSV_COLUMNS, type BlowerRecord, type CsvPreviewRow, type CsvRowError, type PulleyRecord, type ShelfKind } from "@/lib/shelf/rules";
+
+/** An upsert's SET list: each named column takes the value of the row that was refused (`excluded`). */
+function excludedOf<T extends typeof pulleys | typeof blowers>(table: T, keys: readonly (keyof T["_"]["columns"])[]) {
+  const columns = table as unknown as Record<string, Column>;
+  return Object.fromEntries(keys.map((k) => [k, sql`excluded.${sql.identifier(columns[k as string].name)}`]));
+}
 
 export type ImportOutcome = {
   kind: ShelfKind;
@@ -50,16 +56,7 @@ export async function importShelfCsv(db: DbOrTx, actor: Actor, kind: ShelfKind, 
               .values(chunk as PulleyRecord[])
               .onConflictDoUpdate({
                 target: pulleys.partNumber,
-                set: {
-                  position: sql`excluded.position`,
-                  diameter: sql`excluded.diameter`,
-                  ribCount: sql`excluded.rib_count`,
-                  minBeltDiameter: sql`excluded.min_belt_diameter`,
-                  price: sql`excluded.price`,
-                  stock: sql`excluded.stock`,
-                  notes: sql`excluded.notes`,
-                  updatedAt: now,
-                },
+                set: { ...excludedOf(pulleys, ["position", "diameter", "ribCount", "minBeltDiameter", "price", "stock", "notes"]), updatedAt: now },
               })
               .returning({ inserted: sql<boolean>`(xmax = 0)` })
           : await tx
@@ -68,18 +65,20 @@ export async function importShelfCsv(db: DbOrTx, actor: Actor, kind: ShelfKind, 
               .onConflictDoUpdate({
                 target: blowers.partNumber,
                 set: {
-                  name: sql`excluded.name`,
-                  kind: sql`excluded.kind`,
-                  displacementPerRev: sql`excluded.displacement_per_rev`,
-                  builtInVolumeRatio: sql`excluded.built_in_volume_ratio`,
-                  maxRpm: sql`excluded.max_rpm`,
-                  volumetricEfficiencyRef: sql`excluded.volumetric_efficiency_ref`,
-                  referenceRpm: sql`excluded.reference_rpm`,
-                  internalEfficiency: sql`excluded.internal_efficiency`,
-                  mechanicalEfficiency: sql`excluded.mechanical_efficiency`,
-                  price: sql`excluded.price`,
-                  stock: sql`excluded.stock`,
-                  notes: sql`excluded.notes`,
+                  ...excludedOf(blowers, [
+                    "name",
+                    "kind",
+                    "displacementPerRev",
+                    "builtInVolumeRatio",
+                    "maxRpm",
+                    "volumetricEfficiencyRef",
+                    "referenceRpm",
+                    "internalEfficiency",
+                    "mechanicalEfficiency",
+                    "price",
+                    "stock",
+                    "notes",
+                  ]),
                   updatedAt: now,
                 },
               })

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { UserAccessControls } from "@/components/admin/user-access-controls";
+import { EmptyRow } from "@/components/ui/data-table";
 import { setUserDisabledAction, setUserRoleAction } from "./actions";
 import { getDb } from "@/db/client";
 import { listUsers, toActor } from "@/db/repo/users";
@@ -60,11 +61,7 @@ export default async function AdminUsersPage({ searchParams }: { searchParams: P
               </tr>
             ))}
             {rows.length === 0 ? (
-              <tr>
-                <td colSpan={4} className="px-3 py-6 text-center text-muted">
-                  No account matches “{search}”.
-                </td>
-              </tr>
+              <EmptyRow colSpan={4}>No account matches “{search}”.</EmptyRow>
             ) : null}
           </tbody>
         </table>
