@@ -2,6 +2,7 @@
 import type { UnitSystem } from "@/calc";
 import { figure, percentText, quantityText } from "@/lib/units/format";
 import type { SolvedResults } from "./use-planner-results";
+import { TitledSection } from "@/components/ui/titled-section";
 
 export function PlannerReadouts({ results, system }: { results: SolvedResults; system: UnitSystem }) {
   const redline = results.curve.find((p) => p.rpm === results.spec.engine.redlineRpm) ?? null;
@@ -9,10 +10,7 @@ export function PlannerReadouts({ results, system }: { results: SolvedResults; s
   const peakBoost = results.curve.length ? results.curve.reduce((a, b) => (b.boostGauge > a.boostGauge ? b : a)) : null;
   const peakTorque = results.curve.length ? results.curve.reduce((a, b) => (b.torque > a.torque ? b : a)) : null;
   return (
-    <section aria-labelledby="summary-heading" className="flex flex-col gap-2">
-      <h2 id="summary-heading" className="text-base font-semibold">
-        Predicted
-      </h2>
+    <TitledSection id="summary-heading" title="Predicted" className="flex flex-col gap-2">
       <dl className="grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-3" aria-live="polite">
         <Readout id="boost-redline" label="Boost at redline" value={redline ? quantityText("pressure", redline.boostGauge, system) : "–"} si={redline?.boostGauge} />
         <Readout id="boost-peak" label="Highest boost" value={peakBoost ? `${quantityText("pressure", peakBoost.boostGauge, system)} at ${figure("speed", peakBoost.rpm, system)} rpm` : "–"} si={peakBoost?.boostGauge} />
@@ -30,7 +28,7 @@ export function PlannerReadouts({ results, system }: { results: SolvedResults; s
         <Readout id="overdrive" label="Drive ratio (overdrive)" value={redline ? `${redline.driveRatio.toFixed(2)} (${percentText(redline.driveRatio - 1)})` : "–"} si={redline?.driveRatio} />
         {redline?.injectorDuty != null ? <Readout id="injector-duty-redline" label="Injector duty at redline" value={percentText(redline.injectorDuty)} si={redline.injectorDuty} /> : null}
       </dl>
-    </section>
+    </TitledSection>
   );
 }
 
