@@ -5,7 +5,7 @@ import { BLOWER_DEMO_DEFAULTS, standardAtmosphere } from "@/calc";
 import { Button } from "@/components/ui/button";
 import { fieldFromSI, fieldToSI } from "@/lib/combinations/form-model";
 import type { EditorProps } from "./editor";
-import { box, grid, legend } from "./editor-styles";
+import { EditorBox, grid } from "./editor-box";
 import { NumField } from "./num-field";
 
 export function BlowerSection({ form, system, errors, blowers, values }: EditorProps) {
@@ -26,8 +26,7 @@ export function BlowerSection({ form, system, errors, blowers, values }: EditorP
   };
   const kind = register("blower.kind");
   return (
-    <fieldset className={box}>
-      <legend className={legend}>Blower</legend>
+    <EditorBox legend="Blower">
       <div className={grid}>
         <label className="flex flex-col gap-1 text-sm">
           <span className="font-medium">Blower from the parts shelf</span>
@@ -94,7 +93,7 @@ export function BlowerSection({ form, system, errors, blowers, values }: EditorP
           </p>
         ) : null}
       </div>
-    </fieldset>
+    </EditorBox>
   );
 }
 
@@ -103,8 +102,7 @@ export function AmbientSection({ form, system, errors, values }: Omit<EditorProp
   const common = { system, register, errors };
   const [note, setNote] = useState<string | null>(null);
   return (
-    <fieldset className={box}>
-      <legend className={legend}>Ambient air</legend>
+    <EditorBox legend="Ambient air">
       <div className={grid}>
         <NumField path="ambient.altitude" label="Altitude" hint="Only used to fill the barometer (standard atmosphere)." {...common} />
         <div className="flex items-end">
@@ -134,6 +132,6 @@ export function AmbientSection({ form, system, errors, values }: Omit<EditorProp
           {note}
         </p>
       ) : null}
-    </fieldset>
+    </EditorBox>
   );
 }

@@ -6,7 +6,7 @@ import type { UnitSystem } from "@/calc";
 import type { PlannerForm } from "@/lib/combinations/form-model";
 import type { ShelfBlower } from "@/lib/planner/compute";
 import { AmbientSection, BlowerSection } from "./editor-sections";
-import { box, grid, legend } from "./editor-styles";
+import { EditorBox, grid } from "./editor-box";
 import { NumField } from "./num-field";
 import { VeTable } from "./ve-table";
 
@@ -24,27 +24,24 @@ export function Editor({ form, system, errors, blowers, values }: EditorProps) {
   const common = { system, register, errors };
   return (
     <div className="flex flex-col gap-3">
-      <fieldset className={box}>
-        <legend className={legend}>Engine</legend>
+      <EditorBox legend="Engine">
         <div className={grid}>
           <NumField path="engine.displacement" label="Engine displacement" {...common} />
           <NumField path="engine.cylinders" label="Cylinders" step="1" {...common} />
           <NumField path="engine.redlineRpm" label="Redline" step="50" {...common} />
         </div>
         <VeTable form={form} system={system} errors={errors} values={values} />
-      </fieldset>
+      </EditorBox>
       <BlowerSection form={form} system={system} errors={errors} blowers={blowers} values={values} />
-      <fieldset className={box}>
-        <legend className={legend}>Drive</legend>
+      <EditorBox legend="Drive">
         <div className={grid}>
           <NumField path="drive.crankPulleyDiameter" label="Crank pulley diameter" step="0.01" {...common} />
           <NumField path="drive.blowerPulleyDiameter" label="Blower pulley diameter" step="0.01" {...common} />
           <NumField path="drive.beltSlip" label="Belt slip" hint="Demo default 2 %." {...common} />
         </div>
-      </fieldset>
+      </EditorBox>
       <AmbientSection form={form} system={system} errors={errors} values={values} />
-      <fieldset className={box}>
-        <legend className={legend}>Intercooler</legend>
+      <EditorBox legend="Intercooler">
         <label className="flex items-center gap-2 text-sm">
           <input type="checkbox" {...register("intercoolerOn")} /> Intercooler fitted
         </label>
@@ -55,9 +52,8 @@ export function Editor({ form, system, errors, blowers, values }: EditorProps) {
             <NumField path="intercooler.coolantTemperature" label="Coolant temperature" {...common} />
           </div>
         ) : null}
-      </fieldset>
-      <fieldset className={box}>
-        <legend className={legend}>Fuel</legend>
+      </EditorBox>
+      <EditorBox legend="Fuel">
         <div className={grid}>
           <NumField path="fuel.afr" label="Air-fuel ratio" hint="By mass, e.g. 11.8 under boost on gasoline." {...common} />
           <NumField path="fuel.bsfc" label="BSFC" hint="The engine's own, before the blower drive." {...common} />
@@ -73,7 +69,7 @@ export function Editor({ form, system, errors, blowers, values }: EditorProps) {
             <NumField path="fuel.maxDuty" label="Maximum injector duty" {...common} />
           </div>
         ) : null}
-      </fieldset>
+      </EditorBox>
     </div>
   );
 }

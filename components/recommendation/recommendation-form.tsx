@@ -5,7 +5,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useFieldArray, useForm, useWatch } from "react-hook-form";
+import { useFieldArray, useForm, useWatch, type UseFormRegisterReturn } from "react-hook-form";
 import type { z } from "zod";
 import { fromSI, unitLabel, type Combination, type UnitSystem } from "@/calc";
 import { ApiError, apiJson } from "@/components/client-json";
@@ -140,15 +140,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
           <Field label="Customer e-mail" type="email" autoComplete="off" {...form.register("customerEmail")} errors={errors.customerEmail?.message} hint="Needed to send the sheet." />
         </div>
         <div className="flex flex-col gap-1">
-          <label htmlFor="f-vehicleNotes" className="text-sm font-medium">
-            Vehicle notes
-          </label>
-          <textarea id="f-vehicleNotes" rows={2} {...form.register("vehicleNotes")} aria-describedby={errors.vehicleNotes ? "f-vehicleNotes-error" : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
-          {errors.vehicleNotes ? (
-            <p id="f-vehicleNotes-error" role="alert" className="text-xs text-danger">
-              {errors.vehicleNotes.message}
-            </p>
-          ) : null}
+          <NotesField id="f-vehicleNotes" label="Vehicle notes" rows={2} registration={form.register("vehicleNotes")} error={errors.vehicleNotes?.message} />
         </div>
       </section>
 
@@ -191,15 +183,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
       <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
         <h2 className="text-lg font-semibold">4. Notes</h2>
         <div className="flex flex-col gap-1">
-          <label htmlFor="f-notes" className="text-sm font-medium">
-            Notes for the customer
-          </label>
-          <textarea id="f-notes" rows={3} {...form.register("notes")} aria-describedby={errors.notes ? "f-notes-error" : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
-          {errors.notes ? (
-            <p id="f-notes-error" role="alert" className="text-xs text-danger">
-              {errors.notes.message}
-            </p>
-          ) : null}
+          <NotesField id="f-notes" label="Notes for the customer" rows={3} registration={form.register("notes")} error={errors.notes?.message} />
         </div>
       </section>
 
@@ -213,5 +197,22 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
         </Button>
       </div>
     </form>
+  );
+}
+
+/** A labelled text area with its error tied to it. */
+function NotesField({ id, label, rows, registration, error }: { id: string; label: string; rows: number; registration: UseFormRegisterReturn; error?: string }) {
+  return (
+    <>
+      <label htmlFor={id} className="text-sm font-medium">
+        {label}
+      </label>
+      <textarea id={id} rows={rows} {...registration} aria-describedby={error ? `${id}-error` : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
+      {error ? (
+        <p id={`${id}-error`} role="alert" className="text-xs text-danger">
+          {error}
+        </p>
+      ) : null}
+    </>
   );
 }
