@@ -1,4 +1,4 @@
-// Calibrate the engine's VE curve from measured boost (model.md §4): at a measured pressure
+// Calibrate the engine's VE curve from measured boost (calc/README.md): at a measured pressure
 // ratio the blower's delivery is known, so VE follows in closed form, point by point.
 import { GAS_CONSTANT } from "./constants";
 import { CalcConvergenceError, CalcInputError } from "./errors";

@@ -61,6 +61,7 @@ export {
   rangeReasonsOf,
   type RangeReason,
 } from "./range";
+export { trySolvePoint, trySolveCurve } from "./try-solve";
 export {
   pulleySweep,
   pulleyForBoost,

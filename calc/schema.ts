@@ -1,4 +1,4 @@
-// Zod schemas of every input of the computational core (model.md §2, §4), shared by forms,
+// Zod schemas of every input of the computational core (calc/README.md), shared by forms,
 // the REST API and the entry points. All values SI; messages name the field and its range.
 import { z } from "zod";
 import { CalcInputError, type FieldIssue } from "./errors";

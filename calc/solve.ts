@@ -1,4 +1,4 @@
-// The balance of blower delivery and engine demand at one engine speed (model.md §3.8–11),
+// The balance of blower delivery and engine demand at one engine speed (calc/README.md, steps 7–8),
 // and the boost curve over many. Entry points validate once, then call the unchecked core.
 import {
   BRACKET_SCAN_FACTOR,

@@ -1,7 +1,7 @@
 // Who may do what: the one place for the role rules. Every server action and route handler
 // resolves the signed-in actor on the server and asks these functions before touching a row.
 import type { Role } from "./schema";
-import { ForbiddenError } from "./errors";
+import { ForbiddenError } from "@/lib/errors";
 
 export type Actor = { id: string; role: Role; email: string; name: string };
 

@@ -3,7 +3,7 @@
 import crypto from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
-import { startCluster, type Cluster } from "../db/cluster";
+import { startCluster, type Cluster } from "./cluster";
 import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from "../db/seed";

@@ -1,9 +1,10 @@
 "use server";
 import { z } from "zod";
-import { act, type ActionState, formFields } from "@/app/_lib/action";
+import { act, formFields } from "@/app/_lib/action";
+import { type ActionState } from "@/lib/action-state";
 import { appUrl, sendMail } from "@/app/_lib/mail";
 import { getDb } from "@/db/client";
-import { FieldError } from "@/db/errors";
+import { FieldError } from "@/lib/errors";
 import { consumeToken, createMember, getUserByEmail, issueToken, setPassword } from "@/db/repo/users";
 
 const email = z.string().trim().toLowerCase().email("Enter a valid e-mail address.").max(200, "E-mail is too long.");

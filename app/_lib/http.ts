@@ -1,7 +1,7 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import type { z } from "zod";
-import { FieldError } from "@/db/errors";
+import { FieldError } from "@/lib/errors";
 import { toFailure } from "./errors";
 
 export const MAX_JSON_BYTES = 512 * 1024;

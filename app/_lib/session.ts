@@ -3,7 +3,7 @@ import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getDb } from "@/db/client";
-import { UnauthorizedError, ForbiddenError } from "@/db/errors";
+import { UnauthorizedError, ForbiddenError } from "@/lib/errors";
 import type { Actor } from "@/db/policy";
 import { getUserById, toActor } from "@/db/repo/users";
 import type { Role, User } from "@/db/schema";

@@ -1,6 +1,6 @@
-import type { ShareVerdict } from "@/app/_lib/share-link";
-
-type Reason = Extract<ShareVerdict, { ok: false }>["reason"] | "gone";
+/** Why a link opened no sheet: the share-link verdicts (app/_lib/share-link.ts) or a removed sheet. */
+export type LinkRefusalReason = "expired" | "forged" | "malformed" | "gone";
+type Reason = LinkRefusalReason;
 
 const TEXT: Record<Reason, { title: string; body: string }> = {
   expired: { title: "This link has expired", body: "Links to a recommendation sheet work for a limited time. Ask the shop to send you a new one." },

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { apiJson } from "@/components/shelf/api";
+import { apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 

@@ -3,11 +3,12 @@
 import type { Combination, UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { CurveChart } from "@/components/charts/curve-chart";
-import { quantityText } from "@/components/units/format";
-import type { PartLine } from "@/db/repo/recommendations";
-import { formatMoney } from "@/db/repo/shelf";
+import { quantityText } from "@/lib/units/format";
+import type { PartLine } from "@/lib/recommendations/rules";
+import { formatMoney } from "@/lib/shelf/rules";
 import type { ShopDetails } from "@/db/repo/shop";
-import { computeSheet } from "./sheet-data";
+import { computeSheet } from "@/lib/recommendations/sheet-data";
+import { TotalFoot } from "@/components/ui/data-table";
 
 export type SheetRecord = {
   id: string;
@@ -145,16 +146,9 @@ export function SheetView({ sheet, shop, unitSystem, print = false }: SheetViewP
                   </tr>
                 ))}
               </tbody>
-              <tfoot>
-                <tr>
-                  <th scope="row" colSpan={3} className="py-1 text-right">
-                    Total
-                  </th>
-                  <td className="py-1 text-right font-semibold" data-testid="sheet-total">
-                    {formatMoney(sheet.total)}
-                  </td>
-                </tr>
-              </tfoot>
+              <TotalFoot labelSpan={3} testId="sheet-total">
+                {formatMoney(sheet.total)}
+              </TotalFoot>
             </table>
           )}
         </section>

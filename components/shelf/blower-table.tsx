@@ -2,11 +2,11 @@
 // The shelf's blowers: their columns and the kind filter; the rest is the shared shelf list.
 import { useState } from "react";
 import { fromSI, type UnitSystem } from "@/calc";
-import { formatMoney } from "@/db/shelf-rules";
+import { formatMoney } from "@/lib/shelf/rules";
 import { BlowerForm, type BlowerJson } from "./blower-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
-import { stockCell, stockClass } from "./stock";
-import { SelectField } from "./table-parts";
+import { stockCell, stockClass } from "@/lib/shelf/stock";
+import { SelectField } from "@/components/ui/select-field";
 
 type Sort = "partNumber" | "name" | "displacementPerRev" | "maxRpm" | "price" | "stock";
 

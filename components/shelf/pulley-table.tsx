@@ -2,11 +2,11 @@
 // The shelf's pulleys: their columns and the position and rib filters; the rest is the shared shelf list.
 import { useState } from "react";
 import { fromSI, type UnitSystem } from "@/calc";
-import { formatMoney } from "@/db/shelf-rules";
+import { formatMoney } from "@/lib/shelf/rules";
 import { PulleyForm, type PulleyJson } from "./pulley-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
-import { stockCell, stockClass } from "./stock";
-import { SelectField } from "./table-parts";
+import { stockCell, stockClass } from "@/lib/shelf/stock";
+import { SelectField } from "@/components/ui/select-field";
 
 type Sort = "partNumber" | "diameter" | "ribCount" | "price" | "stock";
 

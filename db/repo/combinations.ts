@@ -3,39 +3,29 @@
 // based on an out-of-date revision is refused (409) instead of overwriting someone else's edit.
 import { and, asc, count, desc, eq, ilike, isNull, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
+import { plainText } from "@/lib/validation/text";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
 import { preparedFor } from "../prepared";
-import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "../errors";
+import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "@/lib/errors";
 import { assert, canCreateForCustomer, canReadOwned, canWriteOwned, isShopStaff, type Actor } from "../policy";
 import { combinationRevisions, combinations, users, type CombinationRow } from "../schema";
 
-// PostgreSQL text cannot hold NUL, and control characters in a name only cause trouble later
-// (files, e-mails, terminals): refuse them here with a message instead of a database error.
-const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
-const CONTROL_OR_NEWLINE = /[\u0000-\u001F\u007F]/;
-const text = (label: string, max: number, opts: { multiline?: boolean } = {}) =>
-  z
-    .string({ error: `${label} must be text.` })
-    .trim()
-    .max(max, `${label} must be at most ${max} characters.`)
-    .refine((v) => !(opts.multiline ? CONTROL : CONTROL_OR_NEWLINE).test(v), `${label} must not contain control characters.`);
-
 /** Fields a person edits besides the spec. */
 export const combinationMetaSchema = z.object({
-  name: text("Name", 120).min(1, "Give the combination a name."),
-  customerName: text("Customer name", 120).nullish().transform((v) => v || null),
-  customerContact: text("Customer contact", 200).nullish().transform((v) => v || null),
+  name: plainText("Name", 120).min(1, "Give the combination a name."),
+  customerName: plainText("Customer name", 120).nullish().transform((v) => v || null),
+  customerContact: plainText("Customer contact", 200).nullish().transform((v) => v || null),
 });
 
 export const createCombinationSchema = combinationMetaSchema.extend({
   spec: combinationSchema,
-  note: text("Note", 500, { multiline: true }).nullish(),
+  note: plainText("Note", 500, { multiline: true }).nullish(),
 });
 
 export const saveCombinationSchema = combinationMetaSchema.partial().extend({
   spec: combinationSchema.optional(),
-  note: text("Note", 500, { multiline: true }).nullish(),
+  note: plainText("Note", 500, { multiline: true }).nullish(),
   /** The revision the edit started from; the save is refused if someone saved since. */
   baseRevision: z
     .number({ error: "baseRevision (the revision you started from) is required." })
@@ -51,7 +41,7 @@ export const restoreRevisionSchema = z.object({
 });
 
 export const listQuerySchema = z.object({
-  search: text("Search", 100).optional(),
+  search: plainText("Search", 100).optional(),
   sort: z.enum(["name", "updatedAt", "createdAt", "displacement", "blowerPulleyDiameter"]).default("updatedAt"),
   dir: z.enum(["asc", "desc"]).default("desc"),
   page: z.coerce.number().int().min(1, "page must be 1 or more").default(1),
@@ -295,7 +285,7 @@ export const importDocumentSchema = z.object({
       combinationMetaSchema.extend({
         spec: combinationSchema,
         revisions: z
-          .array(z.object({ number: z.number().int().min(1), name: text("Revision name", 120).min(1, "Each revision needs a name."), note: text("Revision note", 500, { multiline: true }).nullish(), spec: combinationSchema }))
+          .array(z.object({ number: z.number().int().min(1), name: plainText("Revision name", 120).min(1, "Each revision needs a name."), note: plainText("Revision note", 500, { multiline: true }).nullish(), spec: combinationSchema }))
           .max(500, "At most 500 revisions per combination.")
           .optional(),
       }),

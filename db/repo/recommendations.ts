@@ -7,13 +7,13 @@ import { and, count, desc, eq, ilike, or, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
-import { ConflictError, FieldError, NotFoundError } from "../errors";
+import { ConflictError, FieldError, NotFoundError } from "@/lib/errors";
 import { assert, canWriteRecommendations, type Actor } from "../policy";
 import { combinations, recommendations, users, type RecommendationRow } from "../schema";
-export * from "../recommendation-rules";
-import { partLineSchema, recommendationInputSchema, updateRecommendationSchema, statusChangeSchema, recommendationListQuerySchema, type RecommendationInput, type PartLine } from "../recommendation-rules";
-import { getCombination } from "./combinations";
-import { findParts, lineTotal, sumMoney } from "./shelf";
+import { partLineSchema, recommendationInputSchema, updateRecommendationSchema, statusChangeSchema, recommendationListQuerySchema, type RecommendationInput, type PartLine } from "@/lib/recommendations/rules";
+import { getCombination } from "@/db/repo/combinations";
+import { findParts } from "@/db/repo/shelf";
+import { lineTotal, sumMoney } from "@/lib/shelf/rules";
 
 export type Recommendation = Omit<RecommendationRow, "spec" | "parts"> & { spec: Combination; parts: PartLine[]; combinationName: string };
 

@@ -5,7 +5,7 @@ import { z } from "zod";
 import type { DbOrTx } from "../connect";
 import { preparedFor } from "../prepared";
 import { authTokens, signInAttempts, users, type Role, type User } from "../schema";
-import { ConflictError, NotFoundError } from "../errors";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { assert, canManageUsers, ROLES, type Actor } from "../policy";
 
 export const normalizeEmail = (e: string) => e.trim().toLowerCase();

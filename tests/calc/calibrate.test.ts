@@ -49,7 +49,7 @@ describe("calibrateVe", () => {
 
   describe("uses the measured temperature instead of the model's", () => {
     it("VE scales with the measured manifold temperature, VE = ṁ·R·Td/(Pm·Vd·N/120)", () => {
-      // model.md §4: at a measured PR the blower's delivery is fixed, so VE ∝ Td = T0·(Tm/T0)^n,
+      // calc/README.md (calibrateVe): at a measured PR the blower's delivery is fixed, so VE ∝ Td = T0·(Tm/T0)^n,
       // with the default n = 0.5 of the charge-temperature refinement (calc/README.md).
       fc.assert(
         fc.property(combinationArb, fc.double({ min: -20, max: 40, noNaN: true }), (c, dT) => {

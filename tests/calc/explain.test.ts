@@ -1,5 +1,5 @@
 // explainChange splits a change of manifold pressure exactly into its drivers. The check is
-// the algebra of the balance (model.md §3.9–10): the shares add up to ln(Pm_b/Pm_a).
+// the algebra of the balance (calc/README.md, steps 7–8): the shares add up to ln(Pm_b/Pm_a).
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { exampleCombination, explainChange, solvePoint } from "@/calc";

@@ -3,7 +3,7 @@
 // and expire. Limits are the app's own (db/repo/users.ts); common practice, no published source.
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ConflictError } from "@/db/errors";
+import { ConflictError } from "@/lib/errors";
 import {
   consumeToken,
   createMember,

@@ -5,7 +5,7 @@ import fc from "fast-check";
 import { ZodError } from "zod";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { exampleCombination, exampleTwinScrewCombination, type Combination } from "@/calc";
-import { ConflictError, FieldError } from "@/db/errors";
+import { ConflictError, FieldError } from "@/lib/errors";
 import type { Actor } from "@/db/policy";
 import {
   createCombination,

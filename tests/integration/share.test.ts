@@ -4,7 +4,7 @@ import crypto from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { exampleCombination } from "@/calc";
 import { makeShareToken, signShareToken, verifyShareToken } from "@/app/_lib/share-link";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { createCombination } from "@/db/repo/combinations";
 import { createRecommendation, getSharedRecommendation } from "@/db/repo/recommendations";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
-import Link from "next/link";
-import { loadForStaff } from "@/components/recommendation/load";
+import { loadForStaff } from "@/app/_lib/recommendation-load";
 import { SheetActions } from "@/components/recommendation/sheet-actions";
 import { SheetView } from "@/components/recommendation/sheet-view";
+import { Breadcrumb } from "@/components/ui/breadcrumb";
 
 export const metadata: Metadata = { title: "Recommendation sheet" };
 
@@ -11,12 +11,7 @@ export default async function RecommendationPage({ params }: { params: Promise<{
   const { sheet, shop, unitSystem } = await loadForStaff(id);
   return (
     <div className="flex flex-col gap-4">
-      <nav aria-label="Breadcrumb" className="no-print text-sm">
-        <Link href="/recommendations" className="underline">
-          Recommendations
-        </Link>{" "}
-        / {sheet.customerName}
-      </nav>
+      <Breadcrumb href="/recommendations" label="Recommendations" here={sheet.customerName} className="no-print text-sm" linkClassName="underline" />
       <SheetActions id={sheet.id} status={sheet.status} customerEmail={sheet.customerEmail} sentAt={sheet.sentAt ? sheet.sentAt.toISOString() : null} lastError={sheet.lastError} />
       <div className="rounded-md border border-line bg-panel p-4">
         <SheetView sheet={sheet} shop={shop} unitSystem={unitSystem} />

@@ -1,12 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
-import { loadShelfForForm } from "@/components/recommendation/form-data";
+import { loadShelfForForm } from "@/app/(app)/recommendations/form-data";
 import { RecommendationForm } from "@/components/recommendation/recommendation-form";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { getCombination, listCombinations } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 

@@ -1,7 +1,8 @@
 import { route, parseJson } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { getRecommendation, updateRecommendation, updateRecommendationSchema } from "@/db/repo/recommendations";
+import { getRecommendation, updateRecommendation } from "@/db/repo/recommendations";
+import { updateRecommendationSchema } from "@/lib/recommendations/rules";
 
 const STAFF = ["sales", "tuner", "admin"] as const;
 type Ctx = { params: Promise<{ id: string }> };

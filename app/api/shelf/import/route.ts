@@ -3,8 +3,9 @@ import { z } from "zod";
 import { route, parseQuery } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { FieldError } from "@/db/errors";
-import { importShelfCsv, MAX_CSV_BYTES, MAX_CSV_ROWS, shelfKindSchema } from "@/db/repo/shelf";
+import { FieldError } from "@/lib/errors";
+import { importShelfCsv } from "@/db/repo/shelf-csv";
+import { MAX_CSV_BYTES, MAX_CSV_ROWS, shelfKindSchema } from "@/lib/shelf/rules";
 
 const querySchema = z.object({
   kind: shelfKindSchema,

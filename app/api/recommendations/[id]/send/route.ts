@@ -3,9 +3,9 @@ import { route } from "@/app/_lib/http";
 import { appUrl, sendMail } from "@/app/_lib/mail";
 import { getCurrentUser, requireActor } from "@/app/_lib/session";
 import { makeShareToken } from "@/app/_lib/share-link";
-import { buildSheetEmail } from "@/components/recommendation/email";
+import { buildSheetEmail } from "@/app/_lib/recommendation-email";
 import { getDb } from "@/db/client";
-import { FieldError } from "@/db/errors";
+import { FieldError } from "@/lib/errors";
 import { getRecommendation, markRecommendationSent, recordSendFailure } from "@/db/repo/recommendations";
 import { getShopDetails } from "@/db/repo/shop";
 
