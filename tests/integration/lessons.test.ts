@@ -68,7 +68,12 @@ describe("lessons", () => {
 
   describe("authoring", () => {
     it("only instructors and admins create lessons; a new lesson gets a 6-character code from the unambiguous alphabet", async () => {
-      await expect(createLesson(t.db, member, { title: "Mine" })).rejects.toBeInstanceOf(ForbiddenError);
+      // Every role but instructor and admin is refused (db/policy.ts canAuthorLessons; design.md).
+      for (const role of ["member", "tuner", "sales"] as const) {
+        const actor = role === "member" ? member : await makeUser(t.db, role);
+        await expect(createLesson(t.db, actor, { title: "Mine" }), role).rejects.toBeInstanceOf(ForbiddenError);
+        await expect(listStepSources(t.db, actor), role).rejects.toBeInstanceOf(ForbiddenError);
+      }
       const l = await createLesson(t.db, instructor, { title: "Boost basics" });
       expect(l.classCode).toHaveLength(6);
       for (const ch of l.classCode) expect(CLASS_CODE_ALPHABET).toContain(ch);
