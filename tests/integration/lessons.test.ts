@@ -313,7 +313,7 @@ describe("lessons", () => {
       const { steps } = await getLesson(t.db, instructor, await seedLessons(t.db, people, combos));
       const at = (spec: Parameters<typeof boostCurve>[0], rpms: number[]) => boostCurve(spec, rpms);
       // Step 2: better heads and cam under the same pulley: boost falls, power rises at speed.
-      // source: calc/README.md, trade facts (common practice, no published source).
+      // Trade fact: common practice, no published source (listed in calc/README.md).
       const mid = [3500, 4500, 5500];
       const [base, heads] = steps[1].items.map((i) => at(i.spec, mid));
       mid.forEach((_, k) => {
@@ -321,7 +321,7 @@ describe("lessons", () => {
         expect(heads[k].netPower).toBeGreaterThan(base[k].netPower);
       });
       // Step 3: a smaller blower pulley raises boost at every engine speed.
-      // source: calc/README.md, trade facts (common practice, no published source).
+      // Trade fact: common practice, no published source (listed in calc/README.md).
       const rpms = [2000, 3000, 4000, 5000, 6000];
       const [before, after] = steps[2].items.map((i) => at(i.spec, rpms));
       rpms.forEach((_, k) => expect(after[k].boostGauge).toBeGreaterThan(before[k].boostGauge));
