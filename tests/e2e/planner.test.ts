@@ -107,8 +107,9 @@ describe("planner in Chromium", () => {
       }
       return { n, total: c.width * c.height, width: c.width, spans: columns.map((s) => (s.size ? Math.max(...s) - Math.min(...s) : 0)) };
     });
-    expect(painted.n).toBeGreaterThan(painted.total * 0.03);
-    for (const span of painted.spans) expect(span).toBeGreaterThan(painted.width * 0.6);
+    const seen = JSON.stringify(painted);
+    expect(painted.n, seen).toBeGreaterThan(painted.total * 0.03);
+    for (const span of painted.spans) expect(span, seen).toBeGreaterThan(painted.width * 0.6);
   });
 
   it("raises boost in the chart and the ladder when a smaller pulley is typed, by keyboard", async () => {
