@@ -1,9 +1,13 @@
 "use server";
 import { z } from "zod";
+import { headers } from "next/headers";
 import { act, type ActionState, formFields } from "@/app/_lib/action";
-import { appUrl, sendMail } from "@/app/_lib/mail";
+import { clientAddress } from "@/app/_lib/client-address";
+import { appUrl } from "@/app/_lib/mail";
+import { queueMail } from "@/app/_lib/mail-sender";
 import { getDb } from "@/db/client";
 import { FieldError } from "@/db/errors";
+import { takeHit } from "@/db/repo/rate-limits";
 import { consumeToken, createMember, getUserByEmail, issueToken, setPassword } from "@/db/repo/users";
 
 const email = z.string().trim().toLowerCase().email("Enter a valid e-mail address.").max(200, "E-mail is too long.");
@@ -27,42 +31,55 @@ export async function signUp(_prev: ActionState | undefined, form: FormData): Pr
 
 const SAME_ANSWER = "If an account exists for that address, we have sent it an e-mail. Check your inbox.";
 
-/** E-mails a one-time sign-in link (valid 15 minutes). Answers the same whether or not the account exists. */
-export async function requestSignInLink(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
+// Limits on e-mail a signed-out visitor can make the app send (the app's own numbers; common
+// practice, no published source): per recipient and per client address, in one hour.
+const MAILS_PER_RECIPIENT = 3;
+const MAILS_PER_ADDRESS = 20;
+const HOUR_MS = 3600_000;
+
+/**
+ * The shared path of the link and reset requests. The same work is done whether or not the
+ * account exists (the limits are counted on the typed address), the mail is queued rather than
+ * sent while the visitor waits, and the answer is the same: neither words nor time tell whether
+ * an address has an account.
+ */
+async function mailToAccount(form: FormData, kind: "magic-link" | "password-reset", build: (token: string) => { subject: string; text: string; html: string }, ttlMinutes: number): Promise<ActionState> {
   const r = await act(async () => {
     const addr = email.parse(formFields(form).email);
-    const u = await getUserByEmail(getDb(), addr);
-    if (u && !u.disabled) {
-      const token = await issueToken(getDb(), u.id, "magic-link", 15);
-      const link = appUrl(`/sign-in/link?token=${encodeURIComponent(token)}`);
-      await sendMail({
-        to: u.email,
-        subject: "Your Pulleywright sign-in link",
-        text: `Sign in to Pulleywright with this link (valid for 15 minutes, once):\n\n${link}\n\nIf you did not ask for it, ignore this e-mail.`,
-        html: `<p>Sign in to Pulleywright with this link (valid for 15 minutes, once):</p><p><a href="${link}">Sign in</a></p><p>If you did not ask for it, ignore this e-mail.</p>`,
-      });
+    const db = getDb();
+    const from = clientAddress(await headers());
+    const allowed = (await takeHit(db, `public-mail-from:${from}`, MAILS_PER_ADDRESS, HOUR_MS)) && (await takeHit(db, `mail-to:${addr}`, MAILS_PER_RECIPIENT, HOUR_MS));
+    const u = await getUserByEmail(db, addr);
+    if (allowed && u && !u.disabled) {
+      const token = await issueToken(db, u.id, kind, ttlMinutes);
+      await queueMail({ to: u.email, ...build(token) }, db);
     }
   });
   return r.ok ? { ok: true, message: SAME_ANSWER } : r;
 }
 
-/** E-mails a password-reset link (valid 30 minutes). */
+/** E-mails a one-time sign-in link (valid 15 minutes). */
+export async function requestSignInLink(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
+  return mailToAccount(form, "magic-link", (token) => {
+    const link = appUrl(`/sign-in/link?token=${encodeURIComponent(token)}`);
+    return {
+      subject: "Your Pulleywright sign-in link",
+      text: `Sign in to Pulleywright with this link (valid for 15 minutes, once):\n\n${link}\n\nIf you did not ask for it, ignore this e-mail.`,
+      html: `<p>Sign in to Pulleywright with this link (valid for 15 minutes, once):</p><p><a href="${link}">Sign in</a></p><p>If you did not ask for it, ignore this e-mail.</p>`,
+    };
+  }, 15);
+}
+
+/** E-mails a password-reset link (valid 30 minutes); a newer one replaces it. */
 export async function requestPasswordReset(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
-  const r = await act(async () => {
-    const addr = email.parse(formFields(form).email);
-    const u = await getUserByEmail(getDb(), addr);
-    if (u && !u.disabled) {
-      const token = await issueToken(getDb(), u.id, "password-reset", 30);
-      const link = appUrl(`/reset-password?token=${encodeURIComponent(token)}`);
-      await sendMail({
-        to: u.email,
-        subject: "Reset your Pulleywright password",
-        text: `Choose a new password with this link (valid for 30 minutes, once):\n\n${link}\n\nIf you did not ask for it, ignore this e-mail; your password is unchanged.`,
-        html: `<p>Choose a new password with this link (valid for 30 minutes, once):</p><p><a href="${link}">Reset password</a></p><p>If you did not ask for it, ignore this e-mail; your password is unchanged.</p>`,
-      });
-    }
-  });
-  return r.ok ? { ok: true, message: SAME_ANSWER } : r;
+  return mailToAccount(form, "password-reset", (token) => {
+    const link = appUrl(`/reset-password?token=${encodeURIComponent(token)}`);
+    return {
+      subject: "Reset your Pulleywright password",
+      text: `Choose a new password with this link (valid for 30 minutes, once):\n\n${link}\n\nIf you did not ask for it, ignore this e-mail; your password is unchanged.`,
+      html: `<p>Choose a new password with this link (valid for 30 minutes, once):</p><p><a href="${link}">Reset password</a></p><p>If you did not ask for it, ignore this e-mail; your password is unchanged.</p>`,
+    };
+  }, 30);
 }
 
 const resetSchema = z

@@ -182,3 +182,12 @@ export async function recordSendFailure(db: DbOrTx, actor: Actor, id: string, me
     .returning();
   return row;
 }
+
+/**
+ * The outbox's report on a sheet's e-mail (no actor: the mail sender reports what happened to a
+ * send that a permitted user started). Success marks it sent; a failure keeps the status and the error.
+ */
+export async function settleRecommendationMail(db: DbOrTx, id: string, error: string | null, at = new Date()) {
+  const set = error === null ? { status: "sent" as const, sentAt: at, lastError: null, updatedAt: at } : { lastError: error.slice(0, 500), updatedAt: at };
+  await db.update(recommendations).set(set).where(eq(recommendations.id, id));
+}
