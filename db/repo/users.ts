@@ -89,27 +89,24 @@ const LOCK_ADDRESS = 72;
  */
 export async function reserveSignInAttempt(db: DbOrTx, email: string, ip: string): Promise<number | "rate-limited"> {
   const addr = normalizeEmail(email);
+  // Few round trips while the locks are held: parallel tries queue on them, each holding a connection.
   return db.transaction(async (tx) => {
-    await tx.execute(sql`select pg_advisory_xact_lock(${LOCK_ACCOUNT}, hashtext(${addr}))`);
-    await tx.execute(sql`select pg_advisory_xact_lock(${LOCK_ADDRESS}, hashtext(${ip}))`);
+    await tx.execute(sql`select pg_advisory_xact_lock(${LOCK_ACCOUNT}, hashtext(${addr})), pg_advisory_xact_lock(${LOCK_ADDRESS}, hashtext(${ip}))`);
     const windowStart = new Date(Date.now() - WINDOW_MS);
-    const [lastOk] = await tx
-      .select({ at: signInAttempts.createdAt })
-      .from(signInAttempts)
-      .where(and(eq(signInAttempts.email, addr), eq(signInAttempts.success, true)))
-      .orderBy(desc(signInAttempts.createdAt))
-      .limit(1);
-    const since = lastOk && lastOk.at > windowStart ? lastOk.at : windowStart;
-    const failed = (...where: Parameters<typeof and>) => and(eq(signInAttempts.success, false), ...where);
-    // One connection in a transaction: the three counts run one after another.
-    const [byAccount] = await tx
-      .select({ n: count(), last: sql<Date | null>`max(${signInAttempts.createdAt})`.mapWith(signInAttempts.createdAt) })
-      .from(signInAttempts)
-      .where(failed(eq(signInAttempts.email, addr), gt(signInAttempts.createdAt, since)));
-    const [byPair] = await tx.select({ n: count() }).from(signInAttempts).where(failed(eq(signInAttempts.email, addr), eq(signInAttempts.ip, ip), gt(signInAttempts.createdAt, since)));
-    const [byIp] = await tx.select({ n: count() }).from(signInAttempts).where(failed(eq(signInAttempts.ip, ip), gt(signInAttempts.createdAt, windowStart)));
-    const throttled = byAccount.n >= MAX_FAILURES_PER_ACCOUNT && !!byAccount.last && Date.now() - byAccount.last.getTime() < ACCOUNT_THROTTLE_MS;
-    if (byIp.n >= MAX_FAILURES_PER_ADDRESS || byPair.n >= MAX_FAILURES_PER_ACCOUNT || throttled) return "rate-limited" as const;
+    // Failures count since the account's last success within the window (or the window's start).
+    const since = sql`greatest(${windowStart}::timestamptz, coalesce((select max(created_at) from sign_in_attempts where email = ${addr} and success), ${windowStart}::timestamptz))`;
+    const res = await tx.execute(sql`
+      select
+        count(*) filter (where email = ${addr} and created_at > ${since})::int as account,
+        max(created_at) filter (where email = ${addr} and created_at > ${since}) as last,
+        count(*) filter (where email = ${addr} and ip = ${ip} and created_at > ${since})::int as pair,
+        count(*) filter (where ip = ${ip})::int as address
+      from sign_in_attempts
+      where not success and created_at > ${windowStart}::timestamptz and (email = ${addr} or ip = ${ip})`);
+    const c = res.rows[0] as { account: number; last: string | Date | null; pair: number; address: number };
+    const last = c.last ? new Date(c.last).getTime() : 0;
+    const throttled = c.account >= MAX_FAILURES_PER_ACCOUNT && Date.now() - last < ACCOUNT_THROTTLE_MS;
+    if (c.address >= MAX_FAILURES_PER_ADDRESS || c.pair >= MAX_FAILURES_PER_ACCOUNT || throttled) return "rate-limited" as const;
     const [row] = await tx.insert(signInAttempts).values({ email: addr, ip, success: false }).returning({ id: signInAttempts.id });
     return row.id;
   });
