@@ -10,9 +10,14 @@ const nextConfig: NextConfig = {
   outputFileTracingRoot: root,
   poweredByHeader: false,
   serverExternalPackages: ["pg", "nodemailer", "bcryptjs"],
-  // The Content-Security-Policy (with a per-request nonce) and HSTS are set in proxy.ts.
+  // Pages get their Content-Security-Policy (with a per-request nonce) and HSTS in proxy.ts;
+  // API answers are data and run nothing, so they get a fixed policy here.
   async headers() {
     return [
+      {
+        source: "/api/:path*",
+        headers: [{ key: "Content-Security-Policy", value: "default-src 'self'; script-src 'none'; object-src 'none'; base-uri 'self'; form-action 'self'; frame-ancestors 'none'" }],
+      },
       {
         source: "/:path*",
         headers: [

@@ -1,6 +1,7 @@
-// Runs before every page and API request (Next's proxy): refuses requests Next would otherwise
-// answer with a 500 (a path that is not valid percent-encoding, a server action posted from
-// another site or larger than Next accepts), and sets the per-request security headers.
+// Runs before page and API requests without a body, and before server actions (Next's proxy):
+// refuses requests Next would otherwise answer with a 500 (a path that is not valid
+// percent-encoding, a server action posted from another site or larger than Next accepts), and
+// sets the per-request security headers on pages.
 import { NextResponse, type NextRequest } from "next/server";
 import { isCrossSiteBy } from "@/app/_lib/origin-rule";
 import { contentSecurityPolicy, HSTS_VALUE, makeNonce, wantsHsts } from "@/app/_lib/security-headers";
@@ -22,8 +23,13 @@ export function proxy(req: NextRequest) {
     if (isCrossSiteBy(req.method, req.headers, process.env.NEXTAUTH_URL, req.nextUrl.protocol)) {
       return refuse(403, "This request came from another site and was refused. Use the app's own pages.");
     }
-    if (Number(req.headers.get("content-length") ?? "0") > ACTION_MAX_BYTES) return refuse(413, "The form is larger than 1 MB.");
+    // Browsers always declare a form's length; without it the size could not be checked before reading.
+    const length = req.headers.get("content-length");
+    if (length === null) return refuse(411, "A form must be sent with its length (Content-Length).");
+    if (Number(length) > ACTION_MAX_BYTES) return refuse(413, "The form is larger than 1 MB.");
   }
+  // API answers get their fixed policy from next.config.ts.
+  if (req.nextUrl.pathname.startsWith("/api/")) return NextResponse.next();
   const nonce = makeNonce();
   const csp = contentSecurityPolicy(nonce);
   const headers = new Headers(req.headers);
@@ -34,7 +40,19 @@ export function proxy(req: NextRequest) {
   return res;
 }
 
+// Static files carry no data and run no script of their own. Requests with a body pass through
+// here only when they are server actions: Next reads the whole body of any request it hands to a
+// proxy (to clone it) before the route's own streaming limit could stop it.
+const EVERYTHING_BUT_STATIC = "/((?!_next/static|_next/image|favicon.ico|icon.svg).*)";
 export const config = {
-  // Static files carry no data and run no script of their own.
-  matcher: ["/((?!_next/static|_next/image|favicon.ico|icon.svg).*)"],
+  matcher: [
+    {
+      source: EVERYTHING_BUT_STATIC,
+      missing: [
+        { type: "header", key: "content-length" },
+        { type: "header", key: "transfer-encoding" },
+      ],
+    },
+    { source: EVERYTHING_BUT_STATIC, has: [{ type: "header", key: "next-action" }] },
+  ],
 };
