@@ -43,16 +43,16 @@ export function proxy(req: NextRequest) {
 // Static files carry no data and run no script of their own. Requests with a body pass through
 // here only when they are server actions: Next reads the whole body of any request it hands to a
 // proxy (to clone it) before the route's own streaming limit could stop it.
-const EVERYTHING_BUT_STATIC = "/((?!_next/static|_next/image|favicon.ico|icon.svg).*)";
+// (Next reads this object without running the file: the patterns must be written out.)
 export const config = {
   matcher: [
     {
-      source: EVERYTHING_BUT_STATIC,
+      source: "/((?!_next/static|_next/image|favicon.ico|icon.svg).*)",
       missing: [
         { type: "header", key: "content-length" },
         { type: "header", key: "transfer-encoding" },
       ],
     },
-    { source: EVERYTHING_BUT_STATIC, has: [{ type: "header", key: "next-action" }] },
+    { source: "/((?!_next/static|_next/image|favicon.ico|icon.svg).*)", has: [{ type: "header", key: "next-action" }] },
   ],
 };
