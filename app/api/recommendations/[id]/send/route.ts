@@ -26,7 +26,7 @@ export const POST = route(async (_req, { params }: Ctx) => {
   const rec = await getRecommendation(db, actor, id);
   if (!rec.customerEmail) throw new FieldError("customerEmail", "Add the customer's e-mail address to the sheet before sending it.");
   const unitSystem = (await getCurrentUser())?.unitSystem ?? "imperial";
-  const { token, expiresAt } = makeShareToken(rec.id);
+  const { token, expiresAt } = makeShareToken(rec.id, rec.shareVersion);
   const link = appUrl(`/share/${token}?units=${unitSystem}`);
   const mail = buildSheetEmail({ sheet: rec, shop: await getShopDetails(db), unitSystem, link, expiresAt });
   const allowed = (await takeHit(db, `mail-account:${actor.id}`, 100, 3600_000)) && (await takeHit(db, `mail-to:${rec.customerEmail.toLowerCase()}`, 10, 3600_000));
