@@ -8,12 +8,13 @@ import { queueMail } from "@/app/_lib/mail-sender";
 import { getDb } from "@/db/client";
 import { FieldError } from "@/db/errors";
 import { takeHit } from "@/db/repo/rate-limits";
+import { plainText } from "@/db/text-rules";
 import { consumeToken, createMember, getUserByEmail, issueToken, setPassword } from "@/db/repo/users";
 
 const email = z.string().trim().toLowerCase().email("Enter a valid e-mail address.").max(200, "E-mail is too long.");
 const password = z.string().min(10, "Password must be at least 10 characters.").max(200, "Password is too long.");
 
-const signUpSchema = z.object({ name: z.string().trim().min(1, "Enter your name.").max(100, "Name is too long."), email, password });
+const signUpSchema = z.object({ name: plainText("Name", 100).pipe(z.string().min(1, "Enter your name.")), email, password });
 
 /** Sign-up makes a member account; the form then signs in with the same password. */
 export async function signUp(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {

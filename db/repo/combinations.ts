@@ -9,17 +9,9 @@ import { preparedFor } from "../prepared";
 import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "../errors";
 import { assert, canCreateForCustomer, canReadOwned, canSeeCustomer, canWriteOwned, isShopStaff, type Actor } from "../policy";
 import { combinationRevisions, combinations, users, type CombinationRow } from "../schema";
+import { plainText } from "../text-rules";
 
-// PostgreSQL text cannot hold NUL, and control characters in a name only cause trouble later
-// (files, e-mails, terminals): refuse them here with a message instead of a database error.
-const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
-const CONTROL_OR_NEWLINE = /[\u0000-\u001F\u007F]/;
-const text = (label: string, max: number, opts: { multiline?: boolean } = {}) =>
-  z
-    .string({ error: `${label} must be text.` })
-    .trim()
-    .max(max, `${label} must be at most ${max} characters.`)
-    .refine((v) => !(opts.multiline ? CONTROL : CONTROL_OR_NEWLINE).test(v), `${label} must not contain control characters.`);
+const text = plainText;
 
 /** Fields a person edits besides the spec. */
 export const combinationMetaSchema = z.object({

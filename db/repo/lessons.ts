@@ -6,6 +6,7 @@
 import crypto from "node:crypto";
 import { and, asc, count, desc, eq, inArray, sql } from "drizzle-orm";
 import { z } from "zod";
+import { plainText } from "@/db/text-rules";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
 import { ConflictError, FieldError, NotFoundError } from "../errors";
@@ -20,7 +21,8 @@ import { createCombination, getCombination, getRevision, listCombinations } from
 export const LESSON_SERIES = ["boost", "netPower", "torque", "chargeTemperature", "blowerSpeed"] as const;
 export type LessonSeries = (typeof LESSON_SERIES)[number];
 
-const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).trim().max(max, `${label} must be at most ${max} characters.`);
+// Multi-line: notes keep their line breaks; names refuse control and direction-override characters alike.
+const text = (label: string, max: number) => plainText(label, max, { multiline: true });
 
 export const lessonMetaSchema = z.object({
   title: text("Title", 120).min(1, "Give the lesson a title."),
