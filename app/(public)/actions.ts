@@ -52,8 +52,11 @@ async function mailToAccount(form: FormData, kind: "magic-link" | "password-rese
     const allowed = (await takeHit(db, `public-mail-from:${from}`, MAILS_PER_ADDRESS, HOUR_MS)) && (await takeHit(db, `mail-to:${addr}`, MAILS_PER_RECIPIENT, HOUR_MS));
     const u = await getUserByEmail(db, addr);
     if (allowed && u && !u.disabled) {
-      const token = await issueToken(db, u.id, kind, ttlMinutes);
-      await queueMail({ to: u.email, ...build(token) }, db);
+      // Not awaited: the token and the queued mail are work only an existing account costs, and
+      // the answer must not take longer for it.
+      void issueToken(db, u.id, kind, ttlMinutes)
+        .then((token) => queueMail({ to: u.email, ...build(token) }, db))
+        .catch((e) => console.error("[mail] could not queue:", e instanceof Error ? e.message : e));
     }
   });
   return r.ok ? { ok: true, message: SAME_ANSWER } : r;
