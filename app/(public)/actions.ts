@@ -9,34 +9,50 @@ import { getDb } from "@/db/client";
 import { FieldError } from "@/db/errors";
 import { takeHit } from "@/db/repo/rate-limits";
 import { plainText } from "@/db/text-rules";
-import { consumeToken, createMember, getUserByEmail, issueToken, setPassword } from "@/db/repo/users";
+import { consumeToken, createMember, getUserByEmail, hashPassword, issueToken, setPassword } from "@/db/repo/users";
 
 const email = z.string().trim().toLowerCase().email("Enter a valid e-mail address.").max(200, "E-mail is too long.");
 const password = z.string().min(10, "Password must be at least 10 characters.").max(200, "Password is too long.");
-
-const signUpSchema = z.object({ name: plainText("Name", 100).pipe(z.string().min(1, "Enter your name.")), email, password });
-
-/** Sign-up makes a member account; the form then signs in with the same password. */
-export async function signUp(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
-  return act(async () => {
-    const input = signUpSchema.parse(formFields(form));
-    try {
-      await createMember(getDb(), input);
-    } catch (e) {
-      if ((e as { status?: number }).status === 409) throw new FieldError("email", "An account with that e-mail already exists. Sign in instead.");
-      throw e;
-    }
-    return undefined;
-  });
-}
-
-const SAME_ANSWER = "If an account exists for that address, we have sent it an e-mail. Check your inbox.";
 
 // Limits on e-mail a signed-out visitor can make the app send (the app's own numbers; common
 // practice, no published source): per recipient and per client address, in one hour.
 const MAILS_PER_RECIPIENT = 3;
 const MAILS_PER_ADDRESS = 20;
 const HOUR_MS = 3600_000;
+
+const signUpSchema = z.object({ name: plainText("Name", 100).pipe(z.string().min(1, "Enter your name.")), email, password });
+
+/**
+ * Sign-up makes a member account; the form then signs in with the same password. An address that
+ * already has an account gets the same answer after the same work (a password hash), and its owner
+ * an e-mail saying so, so the answer does not tell which addresses have accounts. Limited per
+ * client address (the app's own number; common practice, no published source).
+ */
+export async function signUp(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
+  return act(async () => {
+    const input = signUpSchema.parse(formFields(form));
+    const db = getDb();
+    if (!(await takeHit(db, `sign-up-from:${clientAddress(await headers())}`, 10, HOUR_MS))) {
+      throw new FieldError("email", "Too many accounts were made from here in the last hour. Try again later.");
+    }
+    try {
+      await createMember(db, input);
+    } catch (e) {
+      if ((e as { status?: number }).status !== 409) throw e;
+      await hashPassword(input.password);
+      if (await takeHit(db, `mail-to:${input.email}`, MAILS_PER_RECIPIENT, HOUR_MS)) {
+        await queueMail({
+          to: input.email,
+          subject: "Someone tried to make a Pulleywright account with your address",
+          text: `Someone tried to create a new account with this e-mail address, which already has one.\n\nIf it was you, sign in (${appUrl("/sign-in")}) or reset your password (${appUrl("/forgot-password")}). If not, ignore this e-mail; nothing has changed.`,
+        }, db);
+      }
+    }
+    return undefined;
+  });
+}
+
+const SAME_ANSWER = "If an account exists for that address, we have sent it an e-mail. Check your inbox.";
 
 /**
  * The shared path of the link and reset requests. The same work is done whether or not the

@@ -1,5 +1,6 @@
 import { and, count, eq, gt, lt, sql } from "drizzle-orm";
 import type { DbOrTx } from "../connect";
+import { inKeyOrder } from "../keyed-queue";
 import { rateLimitHits } from "../schema";
 
 const LOCK_BUCKET = 73; // advisory-lock class for rate-limit buckets (see users.ts for the others)
@@ -10,14 +11,14 @@ const LOCK_BUCKET = 73; // advisory-lock class for rate-limit buckets (see users
  * Every instance shares the table, so a limit holds across instances.
  */
 export async function takeHit(db: DbOrTx, bucket: string, max: number, windowMs: number): Promise<boolean> {
-  return db.transaction(async (tx) => {
+  return inKeyOrder([`bucket:${bucket}`], () => db.transaction(async (tx) => {
     await tx.execute(sql`select pg_advisory_xact_lock(${LOCK_BUCKET}, hashtext(${bucket}))`);
     const since = new Date(Date.now() - windowMs);
     const [{ n }] = await tx.select({ n: count() }).from(rateLimitHits).where(and(eq(rateLimitHits.bucket, bucket), gt(rateLimitHits.createdAt, since)));
     if (n >= max) return false;
     await tx.insert(rateLimitHits).values({ bucket });
     return true;
-  });
+  }));
 }
 
 /** Drops hits older than a day (every window is shorter); the mail sender calls it now and then. */

@@ -3,6 +3,7 @@ import bcrypt from "bcryptjs";
 import crypto from "node:crypto";
 import { z } from "zod";
 import type { DbOrTx } from "../connect";
+import { inKeyOrder } from "../keyed-queue";
 import { preparedFor } from "../prepared";
 import { authTokens, signInAttempts, users, type Role, type User } from "../schema";
 import { ConflictError, NotFoundError } from "../errors";
@@ -89,8 +90,9 @@ const LOCK_ADDRESS = 72;
  */
 export async function reserveSignInAttempt(db: DbOrTx, email: string, ip: string): Promise<number | "rate-limited"> {
   const addr = normalizeEmail(email);
-  // Few round trips while the locks are held: parallel tries queue on them, each holding a connection.
-  return db.transaction(async (tx) => {
+  // Few round trips while the locks are held; tries on one account or address queue in this
+  // process first (keyed-queue.ts), so a burst does not take every pooled connection.
+  return inKeyOrder([`account:${addr}`, `address:${ip}`], () => db.transaction(async (tx) => {
     await tx.execute(sql`select pg_advisory_xact_lock(${LOCK_ACCOUNT}, hashtext(${addr})), pg_advisory_xact_lock(${LOCK_ADDRESS}, hashtext(${ip}))`);
     const windowStart = new Date(Date.now() - WINDOW_MS);
     // Failures count since the account's last success within the window (or the window's start).
@@ -109,7 +111,7 @@ export async function reserveSignInAttempt(db: DbOrTx, email: string, ip: string
     if (c.address >= MAX_FAILURES_PER_ADDRESS || c.pair >= MAX_FAILURES_PER_ACCOUNT || throttled) return "rate-limited" as const;
     const [row] = await tx.insert(signInAttempts).values({ email: addr, ip, success: false }).returning({ id: signInAttempts.id });
     return row.id;
-  });
+  }));
 }
 
 const DUMMY_HASH = bcrypt.hashSync("not-a-password-" + crypto.randomBytes(8).toString("hex"), 10);
