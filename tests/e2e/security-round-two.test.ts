@@ -186,13 +186,38 @@ describe("scripts run only with the response's nonce (finding 12)", () => {
   });
 });
 
-describe("the redirect after sign-in stays on this site (finding 4)", () => {
+describe("HSTS (finding 12)", () => {
+  it("is sent when the request came over https (as a TLS proxy says) and not over plain http", async () => {
+    const https = await fetch(BASE_URL + "/sign-in", { headers: { "x-forwarded-proto": "https" } });
+    expect(https.headers.get("strict-transport-security")).toMatch(/max-age=\d+/);
+    expect((await fetch(BASE_URL + "/sign-in")).headers.get("strict-transport-security")).toBeNull();
+  });
+});
+
+describe("in the browser (findings 3 and 4)", () => {
   let browser: import("playwright-core").Browser;
   beforeAll(async () => {
     browser = await (await import("../support/browser")).launchBrowser();
   });
   afterAll(async () => {
     await browser?.close();
+  });
+
+  it("'Sign out everywhere' in Settings ends the session on another device too", async () => {
+    const u = await newMember();
+    const { signIn } = await import("../support/browser");
+    const laptop = await browser.newContext();
+    const phone = await browser.newContext();
+    const page = await signIn(laptop, u.email, PASSWORD);
+    const other = await signIn(phone, u.email, PASSWORD);
+    expect((await other.request.get(`${BASE_URL}/api/me`)).status()).toBe(200);
+    await page.goto(`${BASE_URL}/settings`);
+    await page.getByRole("button", { name: "Sign out everywhere" }).click();
+    await page.waitForURL((url) => url.pathname === "/sign-in", { timeout: 30_000 });
+    expect((await other.request.get(`${BASE_URL}/api/me`)).status()).toBe(401);
+    expect((await page.request.get(`${BASE_URL}/api/me`)).status()).toBe(401);
+    await laptop.close();
+    await phone.close();
   });
 
   it.each(["/%5Cevil.example/phish", "/%09/evil.example/phish", "//evil.example/phish", "/%2F%2Fevil.example", "https://evil.example/"])("callbackUrl=%s lands on our own pages", async (cb) => {
