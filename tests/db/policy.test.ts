@@ -55,6 +55,11 @@ describe("owned rows", () => {
     it(`${role} ${staff || role === "instructor" ? "may" : "may not"} read the shop's demo rows`, () => {
       expect(policy.canReadOwned(actor(role), "shop", { isDemo: true })).toBe(staff || role === "instructor");
     });
+    it(`${role} ${staff ? "sees" : "does not see"} the customer on another's combination, and always on their own`, () => {
+      const a = actor(role);
+      expect(policy.canSeeCustomer(a, a.id)).toBe(true);
+      expect(policy.canSeeCustomer(a, "someone-else")).toBe(staff);
+    });
     it(`${role} ${staff ? "may" : "may not"} change the shop's demo rows`, () => {
       expect(policy.canWriteOwned(actor(role), "shop")).toBe(staff);
     });

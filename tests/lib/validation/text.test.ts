@@ -29,5 +29,12 @@ describe("plainText", () => {
     expect(many.parse("line one\nline two\r\n\tindented")).toBe("line one\nline two\r\n\tindented");
     for (const bad of ["a\u0000b", "a\u0008b", "a\u000Bb", "a\u000Cb", "a\u000Eb", "a\u001Fb", "a\u007Fb"]) expect(many.safeParse(bad).success, JSON.stringify(bad)).toBe(false);
     expect(many.safeParse("x".repeat(51)).success).toBe(false);
+    // source: Unicode TR #36 §2.1: direction overrides and isolates make text display out of order
+    for (const bad of ["a\u202Ab", "a\u202Eb", "a\u2066b", "a\u2069b"]) {
+      const r = many.safeParse(bad);
+      expect(r.success, JSON.stringify(bad)).toBe(false);
+      expect(message(r)).toBe("Note must not contain text-direction override characters.");
+    }
+    expect(many.parse("a\u2065b\u202Fc")).toBe("a\u2065b\u202Fc");
   });
 });
