@@ -15,7 +15,7 @@ import {
 } from "./constants";
 import { builtInPressureRatio, slipCoefficient } from "./blower";
 import { driveRatioUnchecked } from "./drive";
-import { veAt } from "./engine";
+import { engineAirflowUnchecked, veAt } from "./engine";
 import { CalcConvergenceError } from "./errors";
 import { NO_REASONS, rangeReasonsOf, type RangeReason } from "./range";
 import { brent } from "./root-finding";
@@ -446,7 +446,7 @@ function solveAtInletPressure(p: PreparedCombination, rpm: number): OperatingPoi
     residualRefInv: p.residualRefInv,
     sweptFlow,
     airPowerPerWorkRatio: (p.p1 * sweptFlow) / c.blower.internalEfficiency,
-    demandFactor: (c.engine.displacement * rpm * ve) / 120 / GAS_CONSTANT,
+    demandFactor: engineAirflowUnchecked(c.engine.displacement, rpm, ve) / GAS_CONSTANT,
   };
 
   // Bracket: scan upward from a floor (manifold at 5 % of inlet pressure) to the first point
@@ -520,7 +520,8 @@ export function boostCurve(combination: CombinationInput, rpms: readonly number[
 export function idealRatioRulePrepared(p: PreparedCombination, rpm: number): number {
   const c = p.combination;
   const blowerRpm = rpm * p.speedFactor;
-  return (p.p1 * p.vb * blowerRpm) / ((c.engine.displacement * rpm * veAt(c.engine.veCurve, rpm)) / 2);
+  // Both flows per second: the blower's swept Vb·Nb/60 over the engine's Vd·(N/120)·VE.
+  return (p.p1 * ((p.vb * blowerRpm) / 60)) / engineAirflowUnchecked(c.engine.displacement, rpm, veAt(c.engine.veCurve, rpm));
 }
 
 /** The trade's closed-form ratio rule Pm = P1·Vb·Nb/(Vd·(N/2)·VE) at an engine speed (rev/min → Pa, absolute). */

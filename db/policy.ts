@@ -31,7 +31,6 @@ export const canSeeShelf = (_a: Actor) => true;
 export const canWriteRecommendations = (a: Actor) => a.role === "sales" || a.role === "tuner" || a.role === "admin";
 export const canAuthorLessons = (a: Actor) => a.role === "instructor" || a.role === "admin";
 export const canManageUsers = (a: Actor) => a.role === "admin";
-export const canReadMailbox = (a: Actor) => a.role === "admin";
 
 export function assert(allowed: boolean, message?: string): asserts allowed {
   if (!allowed) throw new ForbiddenError(message);

@@ -23,12 +23,22 @@ describe("standardAtmosphere", () => {
       expect(relDiff(a.density, 1.1117)).toBeLessThan(5e-4);
     });
 
-    it("2000 m: about 79 495 Pa and 275.15 K", () => {
-      // source: U.S. Standard Atmosphere 1976 table, 2000 m: 79 495 Pa at geopotential altitude,
-      // 7.9501e4 Pa at geometric altitude; 275.15 K (values from memory)
-      const a = standardAtmosphere(2000);
-      expect(relDiff(a.pressure, 79_495)).toBeLessThan(2e-4);
-      expect(a.temperature).toBeCloseTo(275.15, 0);
+    it("2000 m geometric: 79 501 Pa and 275.154 K; 2000 m geopotential: 79 495 Pa and 275.15 K", () => {
+      // source: U.S. Standard Atmosphere 1976 tables (values from memory): the geometric-altitude
+      // table gives 7.9501e4 Pa, 275.154 K, 1.0066 kg/m³ at 2000 m; the geopotential table gives
+      // 79 495 Pa, 275.15 K at H = 2000 m, which is z = r·H/(r − H) = 2000.63 m geometric with
+      // r = 6 356 766 m (the standard's own conversion). Both agree with the standard's defining
+      // equations worked by hand to the digits shown, so the tolerances are tight (5e-6).
+      const geometric = standardAtmosphere(2000);
+      expect(relDiff(geometric.pressure, 79_501)).toBeLessThan(1e-5);
+      expect(geometric.temperature).toBeCloseTo(275.154, 3);
+      expect(relDiff(geometric.density, 1.0066)).toBeLessThan(5e-5);
+      const r = 6_356_766;
+      const geopotential = standardAtmosphere((r * 2000) / (r - 2000));
+      expect(relDiff(geopotential.pressure, 79_495.2)).toBeLessThan(5e-6);
+      expect(geopotential.temperature).toBeCloseTo(275.15, 6);
+      // The two must differ: a model that ignored the geometric/geopotential difference would not.
+      expect(geometric.pressure - geopotential.pressure).toBeGreaterThan(5);
     });
 
     it("5000 m: about 54 048 Pa and 255.68 K", () => {
@@ -54,12 +64,19 @@ describe("standardAtmosphere", () => {
     });
 
     it("rejects altitudes outside the troposphere with the field named", () => {
-      expect(() => standardAtmosphere(20_000)).toThrow(CalcInputError);
-      try {
-        standardAtmosphere(-5000);
-      } catch (e) {
-        expect((e as CalcInputError).field).toBe("altitude");
+      // Bounds of the troposphere model (author's choice: −1000 m to 11 000 m, where the
+      // standard's first layer ends), both sides of each.
+      for (const bad of [20_000, 11_000.5, -1000.5, -5000, Number.NaN]) {
+        let thrown: unknown;
+        try {
+          standardAtmosphere(bad);
+        } catch (e) {
+          thrown = e;
+        }
+        expect(thrown, `altitude ${bad}`).toBeInstanceOf(CalcInputError);
+        expect((thrown as CalcInputError).field).toBe("altitude");
       }
+      for (const ok of [11_000, -1000]) expect(standardAtmosphere(ok).pressure).toBeGreaterThan(0);
     });
   });
 });

@@ -20,9 +20,12 @@ describe("facts of the trade (common practice, no published source)", () => {
     const speeds = [2500, 3000, 3500, 4000, 4500, 5000, 5500, 6000];
     const screwBoost = boostCurve(screw, speeds).map((p) => p.boostGauge);
     const rootsBoost = boostCurve(roots, speeds).map((p) => p.boostGauge);
-    // "Nearly flat": spread within a fifth of the highest boost.
+    // "Nearly flat" and "climbs" are trade facts (common practice, no published source); the
+    // numbers that make them testable are the author's choice, not from any source:
+    // "Nearly flat": spread within a fifth (20 %) of the highest boost (author-chosen bound).
     expect((Math.max(...screwBoost) - Math.min(...screwBoost)) / Math.max(...screwBoost)).toBeLessThan(0.2);
-    // "Climbs": rises at every step and ends at least half again above where it started.
+    // "Climbs": rises at every step and ends at least half again (×1.5) above where it started
+    // (author-chosen bound).
     for (let i = 1; i < rootsBoost.length; i++) expect(rootsBoost[i]).toBeGreaterThan(rootsBoost[i - 1]);
     expect(rootsBoost.at(-1)! / rootsBoost[0]).toBeGreaterThan(1.5);
   });
@@ -35,6 +38,8 @@ describe("facts of the trade (common practice, no published source)", () => {
       const a = solvePoint(c, rpm);
       const b = solvePoint(withPulley(c, d2), rpm);
       const scale = b.manifoldPressure / a.manifoldPressure / (d1 / d2);
+      // The ratio rule is the trade's rule of thumb (common practice, no published source); the
+      // ±15 % band around it is the author's choice, wide enough for slip and heating.
       expect(scale).toBeGreaterThan(0.85);
       expect(scale).toBeLessThan(1.15);
     }

@@ -104,16 +104,77 @@ describe("units", () => {
     });
   });
 
+  describe("every entry of the display unit table, both directions", () => {
+    // One display unit in SI, per kind and system. source: NIST SP 811 (2008), Appendix B.8/B.9
+    // factors, seven significant figures, hence 1e-6 relative (exact definitions where NIST
+    // marks them exact); where convert-units has the unit it is asked too (its factors carry
+    // about six figures, its cubic inch only five: CU_TOL). Injector cc/min uses the model's gasoline density
+    // 0.74 kg/L (from memory) with NIST's 1 cm³ = 1e-6 m³.
+    const TABLE: [U.QuantityKind, U.UnitSystem, number, [string, string]?][] = [
+      ["length-small", "imperial", 0.0254, ["in", "m"]],
+      ["length-small", "metric", 0.001, ["mm", "m"]],
+      ["altitude", "imperial", 0.3048, ["ft", "m"]],
+      ["altitude", "metric", 1],
+      ["displacement", "imperial", 1.638706e-5, ["in3", "m3"]],
+      ["displacement", "metric", 0.001, ["l", "m3"]],
+      ["blower-displacement", "imperial", 1.638706e-5, ["in3", "m3"]],
+      ["blower-displacement", "metric", 0.001, ["l", "m3"]],
+      ["pressure", "imperial", 6894.757, ["psi", "Pa"]],
+      ["pressure", "metric", 1000, ["kPa", "Pa"]],
+      ["power", "imperial", 745.6999],
+      ["power", "metric", 1000, ["kW", "W"]],
+      ["torque", "imperial", 1.355818],
+      ["torque", "metric", 1],
+      ["airflow", "imperial", 4.719474e-4, ["ft3/min", "m3/s"]],
+      ["airflow", "metric", 1 / 60, ["m3/min", "m3/s"]],
+      ["speed", "imperial", 1],
+      ["speed", "metric", 1],
+      ["fuel-flow", "imperial", 1.259979e-4],
+      ["fuel-flow", "metric", 1 / 3600],
+      ["injector-flow", "imperial", 1.259979e-4],
+      ["injector-flow", "metric", (1e-6 * 740) / 60],
+      ["bsfc", "imperial", 0.45359237 / (745.6999 * 3600)],
+      ["bsfc", "metric", 1e-3 / 3.6e6],
+    ];
+    it("covers every kind in both systems", () => {
+      // temperature is affine: pinned at two points in the next test
+      const covered = new Set([...TABLE.map(([k, sys]) => `${k}/${sys}`), "temperature/imperial", "temperature/metric"]);
+      for (const k of U.QUANTITY_KINDS) for (const sys of ["imperial", "metric"]) expect(covered.has(`${k}/${sys}`), `${k}/${sys}`).toBe(true);
+    });
+    for (const [kind, system, si, cu] of TABLE) {
+      it(`${kind} (${system}, ${U.unitLabel(kind, system)}): 1 unit = ${si} SI`, () => {
+        // Away from 1 so that a factor applied the wrong way round cannot pass.
+        expect(relDiff(U.toSI(kind, 7, system), 7 * si)).toBeLessThan(1e-6);
+        expect(relDiff(U.fromSI(kind, 7 * si, system), 7)).toBeLessThan(1e-6);
+        expect(relDiff(U.formatQuantity(kind, 7 * si, system).value, 7)).toBeLessThan(1e-6);
+        if (cu) expect(relDiff(U.toSI(kind, 7, system), convert(7).from(cu[0] as never).to(cu[1] as never))).toBeLessThan(CU_TOL);
+      });
+    }
+    it("temperature: °F and °C at the ice and steam points", () => {
+      // source: NIST SP 811, B.8: T(K) = t(°C) + 273.15 = (t(°F) + 459.67)/1.8, exact; convert-units agrees
+      for (const [f, c, k] of [[32, 0, 273.15], [212, 100, 373.15], [-40, -40, 233.15]]) {
+        expect(U.toSI("temperature", f, "imperial")).toBeCloseTo(k, 9);
+        expect(U.toSI("temperature", c, "metric")).toBeCloseTo(k, 9);
+        expect(U.fromSI("temperature", k, "imperial")).toBeCloseTo(f, 9);
+        expect(U.fromSI("temperature", k, "metric")).toBeCloseTo(c, 9);
+        expect(U.toSI("temperature", f, "imperial")).toBeCloseTo(convert(f).from("F").to("K"), 6);
+      }
+    });
+  });
+
   describe("round trips", () => {
     it("every quantity kind round-trips through SI in both systems", () => {
       fc.assert(
         fc.property(
           fc.constantFrom(...U.QUANTITY_KINDS),
           fc.constantFrom<U.UnitSystem>("imperial", "metric"),
-          fc.double({ min: -1e4, max: 1e6, noNaN: true }),
-          (kind, system, v) => {
+          // Magnitudes 1 to 1e6 of either sign, never near zero where any factor would pass.
+          fc.double({ min: 1, max: 1e6, noNaN: true }),
+          fc.boolean(),
+          (kind, system, magnitude, negative) => {
+            const v = negative ? -magnitude : magnitude;
             const back = U.fromSI(kind, U.toSI(kind, v, system), system);
-            expect(Math.abs(back - v)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(v)));
+            expect(relDiff(back, v)).toBeLessThan(1e-12);
           },
         ),
       );

@@ -87,14 +87,29 @@ describe("planner in Chromium", () => {
     const canvas = page.getByRole("img", { name: /Boost, net power and torque against engine speed/ });
     const shot = await canvas.screenshot();
     expect(shot.subarray(1, 4).toString()).toBe("PNG");
+    // A real chart, not a few stray pixels: at least one series' colour (the Okabe–Ito palette
+    // of lib/charts/metrics.ts) drawn as a curve across most of the plot's width, and the whole
+    // drawing (curves, grid, labels) a real share of the canvas. The 3 % and 60 % bounds are the
+    // author's choice: a 2.5 px curve with its grid and labels paints well over that.
     const painted = await canvas.evaluate((el) => {
       const c = el as HTMLCanvasElement;
       const data = c.getContext("2d")!.getImageData(0, 0, c.width, c.height).data;
+      const near = (k: number, rgb: number[]) => data[k + 3] > 200 && rgb.every((v, j) => Math.abs(data[k + j] - v) <= 40);
+      const colours = [[0x00, 0x72, 0xb2], [0xe6, 0x9f, 0x00], [0x00, 0x9e, 0x73], [0xcc, 0x79, 0xa7], [0x56, 0xb4, 0xe9], [0xd5, 0x5e, 0x00]];
+      const columns = colours.map(() => new Set<number>());
       let n = 0;
-      for (let k = 3; k < data.length; k += 4) if (data[k] > 0) n++;
-      return { n, total: c.width * c.height };
+      for (let k = 0; k < data.length; k += 4) {
+        if (data[k + 3] === 0) continue;
+        n++;
+        colours.forEach((rgb, i) => {
+          if (near(k, rgb)) columns[i].add((k / 4) % c.width);
+        });
+      }
+      return { n, total: c.width * c.height, width: c.width, spans: columns.map((s) => (s.size ? Math.max(...s) - Math.min(...s) : 0)) };
     });
-    expect(painted.n).toBeGreaterThan(painted.total * 0.01);
+    const seen = JSON.stringify(painted);
+    expect(painted.n, seen).toBeGreaterThan(painted.total * 0.03);
+    expect(Math.max(...painted.spans), seen).toBeGreaterThan(painted.width * 0.6);
   });
 
   it("raises boost in the chart and the ladder when a smaller pulley is typed, by keyboard", async () => {

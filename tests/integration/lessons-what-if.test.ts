@@ -17,7 +17,7 @@ const items = [item("Baseline", smallBlockBaseline), item("Heads and cam", small
 
 describe("classroom what-if", () => {
   it("a smaller blower pulley for all items raises boost at every engine speed", () => {
-    // source: calc/README.md, trade facts: a smaller blower pulley raises boost at every engine speed (common practice, no published source).
+    // Trade fact (common practice, no published source; listed in calc/README.md): a smaller blower pulley raises boost at every engine speed.
     const asBuilt = stepCurves(items, { kind: "none" });
     const smaller = stepCurves(items, { kind: "pulley", diameter: smallBlockBaseline.drive.blowerPulleyDiameter * 0.9 });
     for (const [i, c] of smaller.entries()) {
@@ -27,7 +27,7 @@ describe("classroom what-if", () => {
   });
 
   it("scaling VE up lowers boost under the same pulley", () => {
-    // source: calc/README.md, trade facts: a better-breathing engine lowers boost under the same blower and pulley (common practice, no published source).
+    // Trade fact (common practice, no published source; listed in calc/README.md): a better-breathing engine lowers boost under the same blower and pulley.
     const asBuilt = stepCurves(items, { kind: "none" });
     const breathes = stepCurves(items, { kind: "ve", scale: 1.1 });
     breathes[0].points.forEach((p, k) => expect(p.boostGauge).toBeLessThan(asBuilt[0].points[k].boostGauge));

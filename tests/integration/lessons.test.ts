@@ -68,7 +68,12 @@ describe("lessons", () => {
 
   describe("authoring", () => {
     it("only instructors and admins create lessons; a new lesson gets a 6-character code from the unambiguous alphabet", async () => {
-      await expect(createLesson(t.db, member, { title: "Mine" })).rejects.toBeInstanceOf(ForbiddenError);
+      // Every role but instructor and admin is refused (db/policy.ts canAuthorLessons; design.md).
+      for (const role of ["member", "tuner", "sales"] as const) {
+        const actor = role === "member" ? member : await makeUser(t.db, role);
+        await expect(createLesson(t.db, actor, { title: "Mine" }), role).rejects.toBeInstanceOf(ForbiddenError);
+        await expect(listStepSources(t.db, actor), role).rejects.toBeInstanceOf(ForbiddenError);
+      }
       const l = await createLesson(t.db, instructor, { title: "Boost basics" });
       expect(l.classCode).toHaveLength(6);
       for (const ch of l.classCode) expect(CLASS_CODE_ALPHABET).toContain(ch);
@@ -308,7 +313,7 @@ describe("lessons", () => {
       const { steps } = await getLesson(t.db, instructor, await seedLessons(t.db, people, combos));
       const at = (spec: Parameters<typeof boostCurve>[0], rpms: number[]) => boostCurve(spec, rpms);
       // Step 2: better heads and cam under the same pulley: boost falls, power rises at speed.
-      // source: calc/README.md, trade facts (common practice, no published source).
+      // Trade fact: common practice, no published source (listed in calc/README.md).
       const mid = [3500, 4500, 5500];
       const [base, heads] = steps[1].items.map((i) => at(i.spec, mid));
       mid.forEach((_, k) => {
@@ -316,7 +321,7 @@ describe("lessons", () => {
         expect(heads[k].netPower).toBeGreaterThan(base[k].netPower);
       });
       // Step 3: a smaller blower pulley raises boost at every engine speed.
-      // source: calc/README.md, trade facts (common practice, no published source).
+      // Trade fact: common practice, no published source (listed in calc/README.md).
       const rpms = [2000, 3000, 4000, 5000, 6000];
       const [before, after] = steps[2].items.map((i) => at(i.spec, rpms));
       rpms.forEach((_, k) => expect(after[k].boostGauge).toBeGreaterThan(before[k].boostGauge));

@@ -4,7 +4,7 @@ import { count, eq } from "drizzle-orm";
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { FieldError, ForbiddenError } from "@/lib/errors";
-import { createPulley, listBlowers, listPulleys, updatePulley } from "@/db/repo/shelf";
+import { createPulley, deleteBlower, deletePulley, listBlowers, listPulleys, updatePulley } from "@/db/repo/shelf";
 import { exportShelfCsv, importShelfCsv } from "@/db/repo/shelf-csv";
 import { parseShelfCsv } from "@/lib/shelf/csv";
 import { MAX_CSV_ROWS, PULLEY_CSV_COLUMNS, blowerFormSchema, pulleyFormSchema } from "@/lib/shelf/rules";
@@ -77,16 +77,23 @@ describe("parts shelf", () => {
   });
 
   describe("role rules", () => {
-    it("a member may not add or change a pulley, and nothing changes", async () => {
-      const before = await counts();
-      await expect(createPulley(t.db, member, { partNumber: "PW-BP-9999-8", position: "blower", diameter: 0.08, ribCount: 8, price: "10.00", stock: 1 })).rejects.toBeInstanceOf(ForbiddenError);
-      const [p] = await t.db.select().from(pulleys).limit(1);
-      await expect(updatePulley(t.db, member, p.id, { ...p, price: "0.01" })).rejects.toBeInstanceOf(ForbiddenError);
-      await expect(importShelfCsv(t.db, member, "pulleys", `${HEADER}\n${row("PW-BP-7777-8", 80)}`, { commit: true })).rejects.toBeInstanceOf(ForbiddenError);
-      expect(await counts()).toEqual(before);
-      const [same] = await t.db.select().from(pulleys).where(eq(pulleys.id, p.id));
-      expect(same.price).toBe(p.price);
-    });
+    // Every role but admin is refused every shelf write (db/policy.ts canEditShelf; design.md).
+    for (const role of ["member", "tuner", "sales", "instructor"] as const) {
+      it(`a ${role} may not add, change, delete or import a part, and nothing changes`, async () => {
+        const actor = role === "member" ? member : await makeUser(t.db, role);
+        const before = await counts();
+        await expect(createPulley(t.db, actor, { partNumber: "PW-BP-9999-8", position: "blower", diameter: 0.08, ribCount: 8, price: "10.00", stock: 1 })).rejects.toBeInstanceOf(ForbiddenError);
+        const [p] = await t.db.select().from(pulleys).limit(1);
+        await expect(updatePulley(t.db, actor, p.id, { ...p, price: "0.01" })).rejects.toBeInstanceOf(ForbiddenError);
+        await expect(deletePulley(t.db, actor, p.id)).rejects.toBeInstanceOf(ForbiddenError);
+        const [b] = await t.db.select().from(blowers).limit(1);
+        await expect(deleteBlower(t.db, actor, b.id)).rejects.toBeInstanceOf(ForbiddenError);
+        await expect(importShelfCsv(t.db, actor, "pulleys", `${HEADER}\n${row("PW-BP-7777-8", 80)}`, { commit: true })).rejects.toBeInstanceOf(ForbiddenError);
+        expect(await counts()).toEqual(before);
+        const [same] = await t.db.select().from(pulleys).where(eq(pulleys.id, p.id));
+        expect(same.price).toBe(p.price);
+      });
+    }
 
     it("the admin edits; prices come back as exact two-decimal strings", async () => {
       const [p] = await t.db.select().from(pulleys).where(eq(pulleys.partNumber, "PW-BP-0310-8"));
