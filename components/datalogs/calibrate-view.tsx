@@ -83,13 +83,16 @@ export function CalibrateView(props: CalibrateViewProps) {
         return { x: rpm, y: 100 * veAt(oldCurve, rpm) };
       })
     : [];
+  const savedCurve = calibrated?.engine.veCurve ?? [];
+  const savedDense = oldDense.map((p) => ({ x: p.x, y: 100 * veAt(savedCurve, p.x) }));
 
   return (
     <div className="flex flex-col gap-5">
       <CleaningControls value={options} onChange={setOptions} unitSystem={unitSystem} hasThrottle={hasThrottle} />
       <p className="text-sm" role="status" aria-live="polite">
         Fitting one VE point per speed bin from {usable.length} bins ({cleaned.counts.kept} kept samples; {cleaned.counts.outliers} outliers and {cleaned.counts.partThrottle} part-throttle samples left out)
-        {points.some((p) => p.intakeTemperature !== null) ? ", with the measured intake air temperature as the charge temperature" : ", with the model's charge temperature (the log has no intake air temperature)"}.
+        , with the model&apos;s charge temperature (the one it predicts with, so the saved curve gives back the boost it was fitted to)
+        {points.some((p) => p.intakeTemperature !== null) ? "; the logged intake air temperature is compared with it below" : ""}.
       </p>
       {current.revision !== loggedRevision ? (
         <Notice tone="warning">
@@ -112,6 +115,7 @@ export function CalibrateView(props: CalibrateViewProps) {
               series={[
                 { label: "Stored (as logged)", points: oldDense, color: PALETTE[0], line: true, pointRadius: 0 },
                 { label: "Fitted from the log", points: fit.fit.veCurve.map((p) => ({ x: p.rpm, y: 100 * p.ve })), color: PALETTE[5], line: true },
+                { label: "Saved (with the stored shape outside the log)", points: savedDense, color: PALETTE[2], line: true, pointRadius: 0 },
               ]}
             />
             <div className="overflow-x-auto">
@@ -144,7 +148,10 @@ export function CalibrateView(props: CalibrateViewProps) {
                   })}
                 </tbody>
               </table>
-              <p className="mt-1 text-xs text-muted">Outside the logged speeds the fitted curve is held flat.</p>
+              <p className="mt-1 text-xs text-muted">
+                Outside the logged speeds ({rpmText(range[0])}–{rpmText(range[1])} rpm) the log says nothing: the saved curve keeps the stored curve&apos;s shape there, scaled to meet
+                the fit at its ends (the &ldquo;Saved&rdquo; line), so it is not flat.
+              </p>
             </div>
           </section>
 
