@@ -31,6 +31,8 @@ export const createDatalogSchema = z.object({
   mapping: datalogMappingSchema,
   /** Barometer and air temperature at the time of the log; the combination's when left out. */
   ambient: logAmbientSchema.nullish(),
+  /** Store every readable row and list the unreadable ones instead of refusing the file. */
+  skipUnreadable: z.boolean({ error: "skipUnreadable must be true or false." }).optional().default(false),
 });
 export type CreateDatalogInput = z.input<typeof createDatalogSchema>;
 
@@ -116,12 +118,14 @@ export async function createDatalog(db: DbOrTx, actor: Actor, input: CreateDatal
   const ambient: LogAmbient = v.ambient ?? { pressure: combo.spec.ambient.pressure, temperature: combo.spec.ambient.temperature };
   const parsed = parseLog(v.text, v.mapping, ambient.pressure);
   if (parsed.fatal) throw new FieldError("text", parsed.fatal);
-  if (parsed.errors.length) {
+  if (parsed.errors.length && !v.skipUnreadable) {
     const more = parsed.moreErrors ? [`…and ${parsed.moreErrors} more lines with errors.`] : [];
     throw lineErrors([...parsed.errors.map((e) => e.message), ...more]);
   }
-  if (parsed.points.length === 0) throw new FieldError("text", "The file has no data rows.");
-  return db.transaction(async (tx) => {
+  if (parsed.points.length === 0) throw new FieldError("text", parsed.skipped.length ? "No line of the file is readable; nothing to keep." : "The file has no data rows.");
+  const skipped = v.skipUnreadable ? parsed.skipped : [];
+  // All-or-nothing for what is kept: the log and every readable row in one transaction.
+  const log = await db.transaction(async (tx) => {
     const [log] = await tx
       .insert(datalogs)
       .values({
@@ -153,6 +157,7 @@ export async function createDatalog(db: DbOrTx, actor: Actor, input: CreateDatal
     }
     return log;
   });
+  return { ...log, skipped };
 }
 
 export async function deleteDatalog(db: DbOrTx, actor: Actor, id: string) {

@@ -1,9 +1,9 @@
-// Calibrate from a log, then compare the same log against the calibrated revision: the model
-// must reproduce what it was fitted to, so the bias left is about zero (issue: 0.1–0.3 psi before).
+// Datalogs with real-world files: calibrate, then compare the same log against the calibrated
+// revision (the model must give back what it was fitted to), and "skip unreadable lines".
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Actor } from "@/db/policy";
 import { createCombination, getCombination } from "@/db/repo/combinations";
-import { calibrateFromDatalog, createDatalog, getDatalogAnalysis } from "@/db/repo/datalogs";
+import { calibrateFromDatalog, createDatalog, getDatalogAnalysis, getDatalogPoints } from "@/db/repo/datalogs";
 import { DEMO_DATALOG_MAPPING, demoDatalogCsv } from "@/db/seed/datalogs";
 import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 import { compareBins } from "@/lib/datalogs/analysis";
@@ -13,7 +13,7 @@ import { freshDatabase, makeUser, type TestDb } from "../support/db";
 // source: NIST SP 811, 1 psi = 6894.757 Pa
 const PSI = 6894.757;
 
-describe("calibrate, then re-compare the same log", () => {
+describe("datalogs as real files come"), () => {
   let t: TestDb;
   let member: Actor;
   beforeAll(async () => {
@@ -57,5 +57,27 @@ describe("calibrate, then re-compare the same log", () => {
     for (const d of diffs) expect(Math.abs(d) / PSI).toBeLessThan(0.02);
     // and the log did disagree with the uncalibrated revision, so the test can fail
     expect(Math.max(...beforeBias.map(Math.abs)) / PSI).toBeGreaterThan(0.1);
+  });
+
+  it("keeps every readable row, lists each skipped line with its reason, and refuses without the choice", async () => {
+    const combo = await createCombination(t.db, member, { name: "messy car", spec: smallBlockSmallerPulley });
+    const lines = demoDatalogCsv().split("\n");
+    lines[10] = "1.00,n/a,99.0,8.10,90.1"; // line 11 of the file
+    lines[20] = "2.00,3000,99.0,ERR,90.1"; // line 21
+    const text = lines.join("\n");
+    const input = { combinationId: combo.id, name: "messy", fileName: "messy.csv", text, mapping: { ...DEMO_DATALOG_MAPPING } };
+    await expect(createDatalog(t.db, member, input)).rejects.toThrow(/line 11/);
+    const log = await createDatalog(t.db, member, { ...input, skipUnreadable: true });
+    const dataRows = lines.filter((l, i) => i > 0 && l.trim()).length;
+    expect(log.pointCount).toBe(dataRows - 2);
+    expect(log.skipped).toEqual([
+      { line: 11, reason: "engine speed 'n/a' is not a number" },
+      { line: 21, reason: "manifold pressure 'ERR' is not a number" },
+    ]);
+    const stored = await getDatalogPoints(t.db, member, log.id);
+    expect(stored).toHaveLength(dataRows - 2);
+    expect(stored.map((p) => p.line)).not.toContain(11);
+    // nothing readable at all is still refused, with the field named
+    await expect(createDatalog(t.db, member, { ...input, text: "rpm,boost,a,b,c\nn/a,x,1,2,3\n", skipUnreadable: true })).rejects.toMatchObject({ field: "text" });
   });
 });
