@@ -13,7 +13,7 @@ import { freshDatabase, makeUser, type TestDb } from "../support/db";
 // source: NIST SP 811, 1 psi = 6894.757 Pa
 const PSI = 6894.757;
 
-describe("datalogs as real files come"), () => {
+describe("datalogs as real files come", () => {
   let t: TestDb;
   let member: Actor;
   beforeAll(async () => {
