@@ -12,6 +12,7 @@ import { Notice } from "@/components/ui/notice";
 import { fitVe, pulleyComparison, smallerPulleys, withFittedVe, type VeFit } from "@/lib/datalogs/analysis";
 import { CleaningControls } from "./cleaning-controls";
 import { fig, PALETTE, rpmText } from "@/lib/datalogs/format";
+import { RunsCalibration, type CalibrationLog } from "./runs-calibration";
 import { XyChart } from "./xy-chart";
 
 export type CalibrateViewProps = {
@@ -25,12 +26,16 @@ export type CalibrateViewProps = {
   canSave: boolean;
   unitSystem: UnitSystem;
   initial: CleaningOptions;
+  /** The combination's logs the person may pick to fit together (this one included). */
+  logs: CalibrationLog[];
 };
 
 type SaveState = { kind: "saved"; revision: number } | { kind: "conflict" | "error"; message: string } | null;
 
 export function CalibrateView(props: CalibrateViewProps) {
-  const { logId, logName, points, ambient, loggedSpec, current, loggedRevision, canSave, unitSystem, initial } = props;
+  const { logId, logName, points, ambient, loggedSpec, current, loggedRevision, canSave, unitSystem, initial, logs } = props;
+  const [logIds, setLogIds] = useState<string[]>([logId]);
+  const manyLogs = !(logIds.length === 1 && logIds[0] === logId);
   const [options, setOptions] = useState(initial);
   const hasThrottle = points.length > 0 && points.every((p) => p.throttle !== null);
   const pUnit = unitLabel("pressure", unitSystem);
@@ -64,7 +69,7 @@ export function CalibrateView(props: CalibrateViewProps) {
     setBusy(true);
     setSave(null);
     try {
-      const data = await apiJson<{ revision?: number } | null>(`/api/datalogs/${logId}/calibrate`, { method: "POST", json: { ...options, baseRevision: current.revision } });
+      const data = await apiJson<{ revision?: number } | null>(`/api/datalogs/${logId}/calibrate`, { method: "POST", json: { ...options, baseRevision: current.revision, ...(manyLogs ? { logIds } : {}) } });
       if (data?.revision) setSave({ kind: "saved", revision: data.revision });
       else setSave({ kind: "error", message: "The save failed (status 200)." });
     } catch (e) {
@@ -191,12 +196,17 @@ export function CalibrateView(props: CalibrateViewProps) {
             ) : null}
           </section>
 
+          <RunsCalibration thisLogId={logId} logs={logs} current={current.spec} options={options} unitSystem={unitSystem} onChosen={setLogIds} />
+
           <section aria-labelledby="save-heading" className="flex flex-col gap-2">
             <h2 id="save-heading" className="font-semibold">
               Save the fitted curve
             </h2>
             <p className="text-sm">
-              Saves {current.name} as a new revision (after revision {current.revision}) with this VE curve and the note &ldquo;VE calibrated from log {logName}&rdquo;. Everything else stays as it is now.
+              Saves {current.name} as a new revision (after revision {current.revision}) {manyLogs
+                ? "with the slip and VE fitted to the chosen logs (above) and a note naming them."
+                : <>with this VE curve and the note &ldquo;VE calibrated from log {logName}&rdquo;.</>}{" "}
+              Everything else stays as it is now.
             </p>
             {canSave ? (
               <div>

@@ -48,7 +48,7 @@ describe("the classroom in the room and on a phone", () => {
     const counter = page.getByTestId("step-counter");
     const before = await counter.textContent();
     await page.getByLabel("Engine breathing (VE scale)").check();
-    const slider = page.getByLabel("VE scale");
+    const slider = page.getByRole("slider", { name: "VE scale" });
     await slider.focus();
     await page.keyboard.press("ArrowRight");
     await page.keyboard.press("ArrowRight");
