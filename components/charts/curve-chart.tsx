@@ -45,7 +45,10 @@ export type CurveChartProps = {
   unitSystem: UnitSystem;
   redlineRpm?: number;
   blowerMaxRpm?: number;
-  height?: number;
+  /** Pixels, or any CSS height (the classroom passes "max(560px, 62vh)"). */
+  height?: number | string;
+  /** Tick, axis-title and legend size in px (chart.js's default, 12, when left out). */
+  fontSize?: number;
   ariaLabel: string;
   print?: boolean;
   animate?: boolean;
@@ -61,6 +64,7 @@ export function CurveChart({
   redlineRpm,
   blowerMaxRpm,
   height = 320,
+  fontSize,
   ariaLabel,
   print = false,
   animate = false,
@@ -109,11 +113,12 @@ export function CurveChart({
   const speedAxis = axes.find((a) => a.kind === "speed")?.id;
 
   const options = useMemo((): ChartOptions<"line"> => {
+    const font = fontSize ? { font: { size: fontSize } } : {};
     const scales: Record<string, ScaleOptions<"linear">> = {
       x: {
         type: "linear",
-        title: { display: true, text: "Engine speed (rpm)", color: ink.fg },
-        ticks: { color: ink.muted, callback: (v) => fmt(Number(v), 0) },
+        title: { display: true, text: "Engine speed (rpm)", color: ink.fg, ...font },
+        ticks: { color: ink.muted, callback: (v) => fmt(Number(v), 0), ...font },
         grid: { color: ink.grid },
       } as ScaleOptions<"linear">,
     };
@@ -122,8 +127,8 @@ export function CurveChart({
       scales[a.id] = {
         type: "linear",
         position: a.position,
-        title: { display: true, text: a.title, color: ink.fg },
-        ticks: { color: ink.muted },
+        title: { display: true, text: a.title, color: ink.fg, ...font },
+        ticks: { color: ink.muted, ...font },
         grid: { color: ink.grid, drawOnChartArea: a.id === "y0" },
         ...max,
       } as ScaleOptions<"linear">;
@@ -138,7 +143,7 @@ export function CurveChart({
       interaction: { mode: "index", intersect: false },
       scales,
       plugins: {
-        legend: { position: "bottom", labels: { color: ink.fg, boxWidth: 18, boxHeight: 2 } },
+        legend: { position: "bottom", labels: { color: ink.fg, boxWidth: 18, boxHeight: 2, ...font } },
         tooltip: {
           enabled: !print,
           callbacks: {
@@ -154,13 +159,13 @@ export function CurveChart({
         pwMarkers: marks,
       } as ChartOptions<"line">["plugins"],
     };
-  }, [axes, ink, redlineRpm, blowerMaxRpm, speedAxis, print, animate, unitSystem]);
+  }, [axes, ink, redlineRpm, blowerMaxRpm, speedAxis, print, animate, unitSystem, fontSize]);
 
   const exposed = useMemo(() => JSON.stringify(exposeSeries(series, metrics, unitSystem)), [series, metrics, unitSystem]);
   const rpms = useMemo(() => [...new Set(series.flatMap((s) => s.points.map((p) => p.rpm)))].sort((a, b) => a - b), [series]);
 
   return (
-    <figure className={`flex flex-col gap-1 ${print ? "bg-white" : ""}`} data-testid="curve-chart" data-series={exposed}>
+    <figure className={`flex flex-col gap-1 ${print ? "bg-white" : ""}`} data-testid="curve-chart" data-series={exposed} data-font-size={fontSize ?? 12}>
       <div style={{ height }} className="relative">
         <Line
           data={{ datasets }}

@@ -12,6 +12,7 @@ import { Notice } from "@/components/ui/notice";
 import { fitVe, pulleyComparison, smallerPulleys, withFittedVe, type VeFit } from "@/lib/datalogs/analysis";
 import { CleaningControls } from "./cleaning-controls";
 import { fig, PALETTE, rpmText } from "@/lib/datalogs/format";
+import { RunsCalibration, type CalibrationLog } from "./runs-calibration";
 import { XyChart } from "./xy-chart";
 
 export type CalibrateViewProps = {
@@ -25,12 +26,16 @@ export type CalibrateViewProps = {
   canSave: boolean;
   unitSystem: UnitSystem;
   initial: CleaningOptions;
+  /** The combination's logs the person may pick to fit together (this one included). */
+  logs: CalibrationLog[];
 };
 
 type SaveState = { kind: "saved"; revision: number } | { kind: "conflict" | "error"; message: string } | null;
 
 export function CalibrateView(props: CalibrateViewProps) {
-  const { logId, logName, points, ambient, loggedSpec, current, loggedRevision, canSave, unitSystem, initial } = props;
+  const { logId, logName, points, ambient, loggedSpec, current, loggedRevision, canSave, unitSystem, initial, logs } = props;
+  const [logIds, setLogIds] = useState<string[]>([logId]);
+  const manyLogs = !(logIds.length === 1 && logIds[0] === logId);
   const [options, setOptions] = useState(initial);
   const hasThrottle = points.length > 0 && points.every((p) => p.throttle !== null);
   const pUnit = unitLabel("pressure", unitSystem);
@@ -64,7 +69,7 @@ export function CalibrateView(props: CalibrateViewProps) {
     setBusy(true);
     setSave(null);
     try {
-      const data = await apiJson<{ revision?: number } | null>(`/api/datalogs/${logId}/calibrate`, { method: "POST", json: { ...options, baseRevision: current.revision } });
+      const data = await apiJson<{ revision?: number } | null>(`/api/datalogs/${logId}/calibrate`, { method: "POST", json: { ...options, baseRevision: current.revision, ...(manyLogs ? { logIds } : {}) } });
       if (data?.revision) setSave({ kind: "saved", revision: data.revision });
       else setSave({ kind: "error", message: "The save failed (status 200)." });
     } catch (e) {
@@ -83,13 +88,16 @@ export function CalibrateView(props: CalibrateViewProps) {
         return { x: rpm, y: 100 * veAt(oldCurve, rpm) };
       })
     : [];
+  const savedCurve = calibrated?.engine.veCurve ?? [];
+  const savedDense = oldDense.map((p) => ({ x: p.x, y: 100 * veAt(savedCurve, p.x) }));
 
   return (
     <div className="flex flex-col gap-5">
       <CleaningControls value={options} onChange={setOptions} unitSystem={unitSystem} hasThrottle={hasThrottle} />
       <p className="text-sm" role="status" aria-live="polite">
         Fitting one VE point per speed bin from {usable.length} bins ({cleaned.counts.kept} kept samples; {cleaned.counts.outliers} outliers and {cleaned.counts.partThrottle} part-throttle samples left out)
-        {points.some((p) => p.intakeTemperature !== null) ? ", with the measured intake air temperature as the charge temperature" : ", with the model's charge temperature (the log has no intake air temperature)"}.
+        , with the model&apos;s charge temperature (the one it predicts with, so the saved curve gives back the boost it was fitted to)
+        {points.some((p) => p.intakeTemperature !== null) ? "; the logged intake air temperature is compared with it below" : ""}.
       </p>
       {current.revision !== loggedRevision ? (
         <Notice tone="warning">
@@ -112,6 +120,7 @@ export function CalibrateView(props: CalibrateViewProps) {
               series={[
                 { label: "Stored (as logged)", points: oldDense, color: PALETTE[0], line: true, pointRadius: 0 },
                 { label: "Fitted from the log", points: fit.fit.veCurve.map((p) => ({ x: p.rpm, y: 100 * p.ve })), color: PALETTE[5], line: true },
+                { label: "Saved (with the stored shape outside the log)", points: savedDense, color: PALETTE[2], line: true, pointRadius: 0 },
               ]}
             />
             <div className="overflow-x-auto">
@@ -144,7 +153,10 @@ export function CalibrateView(props: CalibrateViewProps) {
                   })}
                 </tbody>
               </table>
-              <p className="mt-1 text-xs text-muted">Outside the logged speeds the fitted curve is held flat.</p>
+              <p className="mt-1 text-xs text-muted">
+                Outside the logged speeds ({rpmText(range[0])}–{rpmText(range[1])} rpm) the log says nothing: the saved curve keeps the stored curve&apos;s shape there, scaled to meet
+                the fit at its ends (the &ldquo;Saved&rdquo; line), so it is not flat.
+              </p>
             </div>
           </section>
 
@@ -184,12 +196,17 @@ export function CalibrateView(props: CalibrateViewProps) {
             ) : null}
           </section>
 
+          <RunsCalibration thisLogId={logId} logs={logs} current={current.spec} options={options} unitSystem={unitSystem} onChosen={setLogIds} />
+
           <section aria-labelledby="save-heading" className="flex flex-col gap-2">
             <h2 id="save-heading" className="font-semibold">
               Save the fitted curve
             </h2>
             <p className="text-sm">
-              Saves {current.name} as a new revision (after revision {current.revision}) with this VE curve and the note &ldquo;VE calibrated from log {logName}&rdquo;. Everything else stays as it is now.
+              Saves {current.name} as a new revision (after revision {current.revision}) {manyLogs
+                ? "with the slip and VE fitted to the chosen logs (above) and a note naming them."
+                : <>with this VE curve and the note &ldquo;VE calibrated from log {logName}&rdquo;.</>}{" "}
+              Everything else stays as it is now.
             </p>
             {canSave ? (
               <div>

@@ -7,13 +7,15 @@ import type { parseLog } from "@/lib/datalogs/parse";
 
 type LogPreviewProps = {
   parsed: { result: ReturnType<typeof parseLog> | null; mappingError: string | null };
+  /** "Skip unreadable lines": keep every readable row and leave the listed lines out. */
+  skip: { value: boolean; set: (v: boolean) => void };
   ambientPa: number;
   unitSystem: UnitSystem;
   pressureUnit: string;
   temperatureUnit: string;
 };
 
-export function LogPreview({ parsed, ambientPa, unitSystem, pressureUnit, temperatureUnit }: LogPreviewProps) {
+export function LogPreview({ parsed, skip, ambientPa, unitSystem, pressureUnit, temperatureUnit }: LogPreviewProps) {
   const r = parsed.result;
   return (
     <section aria-labelledby="step-4" className="flex flex-col gap-3">
@@ -28,7 +30,13 @@ export function LogPreview({ parsed, ambientPa, unitSystem, pressureUnit, temper
         </p>
       ) : null}
       {r && r.errors.length ? (
-        <Notice tone="danger" title="These lines cannot be read; nothing is stored until they are fixed (or the mapping is):">
+        <Notice
+          tone={skip.value ? "warning" : "danger"}
+          title={skip.value ? `These ${r.skipped.length} lines will be left out; every other row is kept:` : "These lines cannot be read; nothing is stored until they are fixed (or the mapping is), or you skip them:"}
+        >
+          <label className="my-2 flex items-center gap-2 font-medium">
+            <input type="checkbox" checked={skip.value} onChange={(e) => skip.set(e.target.checked)} /> Skip unreadable lines
+          </label>
           <ul className="list-disc pl-5" aria-label="Line errors">
             {r.errors.map((e) => (
               <li key={e.line}>{e.message}</li>

@@ -21,6 +21,7 @@ import { Notice } from "@/components/ui/notice";
 import { withUnit } from "@/lib/datalogs/format";
 import { ColumnMapping } from "./column-mapping";
 import { LogPreview } from "./log-preview";
+import { FileDrop } from "./file-drop";
 import { postLog } from "./post-log";
 import { ProgressBar, selectClass, type Progress } from "./upload-parts";
 
@@ -40,6 +41,7 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
   const [progress, setProgress] = useState<Progress>(null);
   const [serverError, setServerError] = useState<{ message: string; lines: string[] } | null>(null);
   const [busy, setBusy] = useState(false);
+  const [skipUnreadable, setSkipUnreadable] = useState(false);
 
   const pressureUnit = unitLabel("pressure", unitSystem);
   const temperatureUnit = unitLabel("temperature", unitSystem);
@@ -121,13 +123,13 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
   }, [file, mapping, ambientPa, ambientErrors.baro]);
 
   const set = (patch: Partial<DatalogMappingInput>) => setMapping((m) => (m ? { ...m, ...patch } : m));
-  const ready = !!(combo && file && mapping && parsed?.result && !parsed.result.fatal && parsed.result.errors.length === 0 && parsed.result.points.length > 0 && name.trim() && !ambientErrors.baro && !ambientErrors.airT);
+  const ready = !!(combo && file && mapping && parsed?.result && !parsed.result.fatal && (parsed.result.errors.length === 0 || skipUnreadable) && parsed.result.points.length > 0 && name.trim() && !ambientErrors.baro && !ambientErrors.airT);
 
   function upload() {
     if (!ready || !combo || !file || !mapping) return;
     setBusy(true);
     setServerError(null);
-    const body = JSON.stringify({ combinationId: combo.id, name: name.trim(), fileName: file.name, text: file.text, mapping, ambient: { pressure: ambientPa, temperature: ambientK } });
+    const body = JSON.stringify({ combinationId: combo.id, name: name.trim(), fileName: file.name, text: file.text, mapping, ambient: { pressure: ambientPa, temperature: ambientK }, skipUnreadable });
     void postLog(body, (fraction) => setProgress({ label: "Uploading…", fraction })).then((outcome) => {
       setProgress(null);
       if (outcome.ok) {
@@ -178,30 +180,20 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
         <h2 id="step-2" className="text-lg font-semibold">
           2. File
         </h2>
-        <div className="flex flex-col gap-1">
-          <label htmlFor="log-file" className="text-sm font-medium">
-            Log file (CSV)
-          </label>
-          <input
-            id="log-file"
-            ref={fileInput}
-            type="file"
-            accept=".csv,.txt,.tsv,.log,text/csv,text/plain"
-            aria-describedby="log-file-hint"
-            className="text-sm"
-            onChange={(e) => {
-              const f = e.target.files?.[0];
-              if (f) readFile(f);
-            }}
-          />
-          <p id="log-file-hint" className="text-xs text-muted">
-            UTF-8 text with comma, semicolon, tab or pipe between fields; up to {DATALOG_LIMITS.maxBytes / 1024 / 1024} MB and {DATALOG_LIMITS.maxRows.toLocaleString("en-US")} rows. Try{" "}
-            <a className="underline" href="/samples/demo-datalog.csv" download>
-              the demo log
-            </a>
-            .
-          </p>
-        </div>
+        <FileDrop
+          ref={fileInput}
+          fileName={file?.name ?? null}
+          onFile={readFile}
+          hint={
+            <>
+              UTF-8 text with comma, semicolon, tab or pipe between fields; up to {DATALOG_LIMITS.maxBytes / 1024 / 1024} MB and {DATALOG_LIMITS.maxRows.toLocaleString("en-US")} rows. Try{" "}
+              <a className="underline" href="/samples/demo-datalog.csv" download>
+                the demo log
+              </a>
+              .
+            </>
+          }
+        />
         <ProgressBar progress={progress} />
         {fileError ? <Notice tone="danger">{fileError}</Notice> : null}
         {file ? <Field label="Log name" name="name" value={name} onChange={(e) => setName(e.target.value)} maxLength={120} errors={name.trim() ? undefined : "Give the log a name."} /> : null}
@@ -212,7 +204,7 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
       ) : null}
 
       {file && mapping && parsed ? (
-        <LogPreview parsed={parsed} ambientPa={ambientPa} unitSystem={unitSystem} pressureUnit={pressureUnit} temperatureUnit={temperatureUnit} />
+        <LogPreview parsed={parsed} skip={{ value: skipUnreadable, set: setSkipUnreadable }} ambientPa={ambientPa} unitSystem={unitSystem} pressureUnit={pressureUnit} temperatureUnit={temperatureUnit} />
       ) : null}
 
       {serverError ? (

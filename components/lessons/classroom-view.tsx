@@ -11,6 +11,8 @@ import { CopyItemButton, type CopyItemAction } from "./copy-item-button";
 import { SERIES_METRIC, stepCurves, type WhatIf } from "@/lib/lessons/curves";
 import { DeltasTable } from "./deltas-table";
 import { LessonNote } from "./lesson-note";
+import { KeyGuide } from "./key-guide";
+import { useRoomSize } from "./room-size";
 import { WhatIfControl } from "./what-if-control";
 
 export type ClassroomViewProps = {
@@ -37,6 +39,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
   const [index, setIndex] = useState(() => Math.min(Math.max(0, initialStep), Math.max(0, count - 1)));
   const [whatIf, setWhatIf] = useState<WhatIf>({ kind: "none" });
   const root = useRef<HTMLDivElement>(null);
+  const room = useRoomSize();
 
   const go = useCallback(
     (to: number) => {
@@ -89,9 +92,9 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
           <p className="text-lg text-muted">
             {title} · {ownerName}
           </p>
-          <h1 className="text-4xl font-semibold leading-tight">{step.title}</h1>
+          <h1 className="text-2xl font-semibold leading-tight sm:text-4xl">{step.title}</h1>
         </div>
-        <nav aria-label="Steps" className="flex items-center gap-3 text-xl">
+        <nav aria-label="Steps" className="flex flex-wrap items-center gap-3 text-base sm:text-xl">
           <button type="button" onClick={() => go(index - 1)} disabled={index === 0} className="rounded-md border border-line bg-panel px-4 py-2 font-medium disabled:opacity-40">
             ← Previous
           </button>
@@ -105,7 +108,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
       </header>
 
       <div className="grid gap-6 xl:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
-        <section aria-label="Chart" className="flex flex-col gap-4 rounded-lg border border-line bg-panel p-4">
+        <section aria-label="Chart" className="flex min-w-0 flex-col gap-4 rounded-lg border border-line bg-panel p-2 sm:p-4">
           <CurveChart
             series={curves.filter((c) => c.points.length).map((c, i) => ({ label: c.label, points: c.points, colorIndex: i }))}
             metrics={metrics}
@@ -113,7 +116,8 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
             redlineRpm={redline}
             blowerMaxRpm={step.series.includes("blowerSpeed") ? blowerMax : undefined}
             ariaLabel={`${step.title}: ${step.items.map((i) => i.label).join(" against ")}, against engine speed`}
-            height={460}
+            height={room.height}
+            fontSize={room.fontSize}
           />
           {failed.map((c) => (
             <p key={c.label} role="alert" className="rounded-md border border-danger bg-danger-bg px-3 py-2 text-danger">
@@ -123,7 +127,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
           <WhatIfControl key={step.id} items={step.items} unitSystem={unitSystem} value={whatIf} onChange={setWhatIf} />
         </section>
 
-        <div className="flex flex-col gap-6">
+        <div className="flex min-w-0 flex-col gap-6">
           <DeltasTable curves={curves} unitSystem={unitSystem} />
           <LessonNote markdown={step.note} className="text-xl leading-relaxed" />
         </div>
@@ -149,6 +153,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
       </section>
 
       <CautionsPanel cautions={warnings} compact />
+      <KeyGuide />
     </div>
   );
 }

@@ -16,7 +16,8 @@ import {
   type LogPoint,
 } from "@/lib/datalogs/parse";
 import { fitVe, NoUsableBinsError, specAsLogged, TooManyBinsError, withFittedVe } from "@/lib/datalogs/analysis";
-import type { Combination } from "@/calc";
+import { CalcInputError, combinationSchema, type Combination } from "@/calc";
+import { fitRuns, type LogRun } from "@/lib/datalogs/runs";
 import type { DbOrTx } from "../connect";
 import { FieldError, NotFoundError } from "@/lib/errors";
 import { assert, canReadOwned, canWriteOwned, isShopStaff, type Actor } from "../policy";
@@ -31,12 +32,16 @@ export const createDatalogSchema = z.object({
   mapping: datalogMappingSchema,
   /** Barometer and air temperature at the time of the log; the combination's when left out. */
   ambient: logAmbientSchema.nullish(),
+  /** Store every readable row and list the unreadable ones instead of refusing the file. */
+  skipUnreadable: z.boolean({ error: "skipUnreadable must be true or false." }).optional().default(false),
 });
 export type CreateDatalogInput = z.input<typeof createDatalogSchema>;
 
 export const calibrateSchema = cleaningSchema.extend({
   /** The revision of the combination the person saw; the save is refused (409) if someone saved since. */
   baseRevision: z.number({ error: "baseRevision (the revision you started from) is required." }).int().min(1),
+  /** The combination's logs to fit together (runs at one or more pulley sizes); this log alone when left out. */
+  logIds: z.array(z.uuid("logIds must hold log ids."), { error: "logIds must be a list of log ids." }).min(1, "Choose at least one log.").max(10, "Choose at most 10 logs.").optional(),
 });
 export type CalibrateInput = z.input<typeof calibrateSchema>;
 
@@ -116,12 +121,14 @@ export async function createDatalog(db: DbOrTx, actor: Actor, input: CreateDatal
   const ambient: LogAmbient = v.ambient ?? { pressure: combo.spec.ambient.pressure, temperature: combo.spec.ambient.temperature };
   const parsed = parseLog(v.text, v.mapping, ambient.pressure);
   if (parsed.fatal) throw new FieldError("text", parsed.fatal);
-  if (parsed.errors.length) {
+  if (parsed.errors.length && !v.skipUnreadable) {
     const more = parsed.moreErrors ? [`…and ${parsed.moreErrors} more lines with errors.`] : [];
     throw lineErrors([...parsed.errors.map((e) => e.message), ...more]);
   }
-  if (parsed.points.length === 0) throw new FieldError("text", "The file has no data rows.");
-  return db.transaction(async (tx) => {
+  if (parsed.points.length === 0) throw new FieldError("text", parsed.skipped.length ? "No line of the file is readable; nothing to keep." : "The file has no data rows.");
+  const skipped = v.skipUnreadable ? parsed.skipped : [];
+  // All-or-nothing for what is kept: the log and every readable row in one transaction.
+  const log = await db.transaction(async (tx) => {
     const [log] = await tx
       .insert(datalogs)
       .values({
@@ -153,6 +160,7 @@ export async function createDatalog(db: DbOrTx, actor: Actor, input: CreateDatal
     }
     return log;
   });
+  return { ...log, skipped };
 }
 
 export async function deleteDatalog(db: DbOrTx, actor: Actor, id: string) {
@@ -178,6 +186,7 @@ export async function calibrateFromDatalog(db: DbOrTx, actor: Actor, id: string,
   const v = calibrateSchema.parse(input);
   const { log, points, ambient, combination, loggedSpec } = await getDatalogAnalysis(db, actor, id);
   assert(canWriteOwned(actor, combination.ownerId), "You can view this combination but not change it.");
+  if (v.logIds) return calibrateFromLogs(db, actor, log, combination, v);
   const cleaned = cleanLog(points, ambient.pressure, v as CleaningInput);
   let fit;
   try {
@@ -189,4 +198,25 @@ export async function calibrateFromDatalog(db: DbOrTx, actor: Actor, id: string,
   const spec: Combination = withFittedVe(combination.spec, fit.veCurve);
   const saved = await saveCombination(db, actor, combination.id, { spec, baseRevision: v.baseRevision, note: `VE calibrated from log “${log.name}”` });
   return { combinationId: combination.id, revision: saved.revision, veCurve: fit.veCurve, residuals: fit.residuals };
+}
+
+/** Slip (with two or more pulley sizes) and VE fitted to the chosen logs of the same combination, saved as a new revision. */
+async function calibrateFromLogs(db: DbOrTx, actor: Actor, log: DatalogRow, combination: { id: string; spec: unknown }, v: z.output<typeof calibrateSchema>) {
+  const ids = [...new Set(v.logIds)];
+  const logs = await Promise.all(ids.map((id) => getDatalogAnalysis(db, actor, id)));
+  const stranger = logs.find((l) => l.log.combinationId !== log.combinationId);
+  if (stranger) throw new FieldError("logIds", `Log “${stranger.log.name}” belongs to another combination.`);
+  const runs: LogRun[] = logs.map((l) => ({ id: l.log.id, name: l.log.name, blowerPulleyDiameter: l.loggedSpec.drive.blowerPulleyDiameter, bins: cleanLog(l.points, l.ambient.pressure, v as CleaningInput).bins }));
+  let fit;
+  try {
+    fit = fitRuns(combinationSchema.parse(combination.spec), runs);
+  } catch (e) {
+    if (e instanceof CalcInputError) throw new FieldError("logIds", e.message);
+    if (e instanceof Error && !(e instanceof ZodError)) throw new FieldError("logIds", e.message);
+    throw e;
+  }
+  const names = logs.map((l) => `“${l.log.name}”`).join(", ");
+  const what = fit.fitted.some((f) => f.parameter === "blower.volumetricEfficiencyRef") ? "Slip and VE" : "VE";
+  const saved = await saveCombination(db, actor, combination.id, { spec: fit.calibrated, baseRevision: v.baseRevision, note: `${what} calibrated from ${logs.length === 1 ? "log" : "logs"} ${names}` });
+  return { combinationId: combination.id, revision: saved.revision, fitted: fit.fitted, residuals: fit.residuals };
 }

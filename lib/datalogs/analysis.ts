@@ -65,13 +65,28 @@ export interface VeFit {
 /** At most this many VE points: calc's VE curve schema holds 64. */
 export const MAX_VE_POINTS = 64;
 
-/** Fits the VE curve to the usable bins with calc.calibrateVe, using the measured intake temperature when logged. */
+/**
+ * Fits the VE curve to the usable bins with calc.calibrateVe. The fit uses the model's own charge
+ * temperature, not the logged intake temperature: the saved curve is read back by the model with
+ * its own temperature, so a VE fitted at the sensor's temperature would miss the very boost it was
+ * fitted to (a sensor 20 °F off left 0.27 psi of bias). The logged temperature is kept for the
+ * temperature residuals, where a disagreement belongs.
+ */
 export function fitVe(specLogged: Combination, bins: readonly LogBin[]): VeFit {
   const measured = binsToMeasured(bins);
   if (measured.length === 0) throw new NoUsableBinsError();
   if (measured.length > MAX_VE_POINTS) throw new TooManyBinsError(measured.length);
-  const r = calibrateVe(specLogged, measured);
-  return { ...r, rows: r.veCurve.map((p) => ({ rpm: p.rpm, oldVe: veAt(specLogged.engine.veCurve, p.rpm), fittedVe: p.ve })) };
+  const r = calibrateVe(
+    specLogged,
+    measured.map((m) => ({ rpm: m.rpm, boostGauge: m.boostGauge })),
+  );
+  const residuals = r.residuals.map((res, i) => withMeasuredTemperature(res, measured[i].manifoldTemperature));
+  return { veCurve: r.veCurve, residuals, rows: r.veCurve.map((p) => ({ rpm: p.rpm, oldVe: veAt(specLogged.engine.veCurve, p.rpm), fittedVe: p.ve })) };
+}
+
+/** A residual with the logged temperature set beside the model's (both sorted by rpm already). */
+export function withMeasuredTemperature(res: CalibrationResidual, measured: number | null): CalibrationResidual {
+  return { ...res, measuredManifoldTemperature: measured, temperatureResidual: measured === null ? null : res.modelManifoldTemperature - measured };
 }
 
 export class NoUsableBinsError extends Error {

@@ -233,11 +233,19 @@ export function guessMapping(guess: LogLayoutGuess): DatalogMappingInput {
 
 // ---------- parsing ----------
 
+/** A data line an upload left out, and why ("engine speed 'n/a' is not a number"). */
+export interface SkippedLine {
+  line: number;
+  reason: string;
+}
+
 export interface ParseResult {
   points: LogPoint[];
   errors: LineError[];
   /** Lines with errors beyond those listed. */
   moreErrors: number;
+  /** Every line left out for an error, with the reason (not capped: an upload that skips lines lists them all). */
+  skipped: SkippedLine[];
   /** Data lines read (header and blank lines excluded). */
   dataLines: number;
   /** A problem with the file as a whole (empty, too many rows), or null. */
@@ -251,7 +259,7 @@ export interface ParseResult {
  */
 export function parseLog(text: string, mappingInput: DatalogMappingInput, ambientPressure: number): ParseResult {
   const m = datalogMappingSchema.parse(mappingInput);
-  const result: ParseResult = { points: [], errors: [], moreErrors: 0, dataLines: 0, fatal: null };
+  const result: ParseResult = { points: [], errors: [], moreErrors: 0, skipped: [], dataLines: 0, fatal: null };
   const textProblem = checkLogText(text);
   if (textProblem) return { ...result, fatal: textProblem };
   const lines = logLines(text);
@@ -263,6 +271,7 @@ export function parseLog(text: string, mappingInput: DatalogMappingInput, ambien
   result.dataLines = data.length;
   const toPa = PRESSURE_TO_PA[m.pressureUnit];
   const fail = (line: number, message: string) => {
+    result.skipped.push({ line, reason: message });
     if (result.errors.length < DATALOG_LIMITS.maxErrorsListed) result.errors.push({ line, message: `line ${line}: ${message}` });
     else result.moreErrors++;
   };

@@ -116,7 +116,7 @@ describe("upload, overlay, calibrate and the ladder in Chromium", () => {
 
     await page.goto(`${BASE_URL}/datalogs/new?combination=${combo.id}`);
     await expect(page.getByLabel("Combination", { exact: true }).inputValue()).resolves.toBe(combo.id);
-    await page.getByLabel("Log file (CSV)", { exact: true }).setInputFiles(SAMPLE);
+    await page.getByLabel("Choose a log file (CSV)", { exact: true }).setInputFiles(SAMPLE);
     // The mapping step guessed the columns from the header; check it, and set the pressure kind by hand.
     await page.getByLabel("Engine speed (rpm)", { exact: true }).waitFor();
     expect(await page.getByLabel("Delimiter", { exact: true }).inputValue()).toBe(",");

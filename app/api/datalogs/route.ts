@@ -14,10 +14,13 @@ export const GET = route(async (req) => {
   return { items: await listDatalogs(getDb(), actor, q) };
 });
 
-/** Uploads a log: { combinationId, name, fileName, text, mapping, ambient? }. All points or none. */
+/**
+ * Uploads a log: { combinationId, name, fileName, text, mapping, ambient?, skipUnreadable? }. All
+ * points or none; with skipUnreadable every readable row is kept and `skipped` lists the others.
+ */
 export const POST = route(async (req) => {
   const actor = await requireActor();
   const body = await readJson(req, MAX_UPLOAD_JSON_BYTES);
   const log = await createDatalog(getDb(), actor, body as never);
-  return NextResponse.json({ id: log.id, name: log.name, revision: log.revision, pointCount: log.pointCount }, { status: 201 });
+  return NextResponse.json({ id: log.id, name: log.name, revision: log.revision, pointCount: log.pointCount, skipped: log.skipped }, { status: 201 });
 });

@@ -25,13 +25,17 @@ export default async function ClassroomPage({ params, searchParams }: { params: 
       {lesson.canEdit ? (
         <div className="flex flex-wrap items-center gap-3 text-sm">
           <span className={lesson.published ? "text-ok" : "text-warn"}>{lesson.published ? "Published" : "Draft: only you can see it"}</span>
-          <span className="text-muted">
-            Class code <span className="font-mono text-base tracking-widest text-fg">{lesson.classCode}</span>
-          </span>
+          <span className="text-muted">Students join at Lessons → Join with the class code shown below.</span>
           <Link href={`/lessons/${lesson.id}/edit`} className="text-accent underline underline-offset-2">
             Edit this lesson
           </Link>
         </div>
+      ) : null}
+      {lesson.canEdit ? (
+        <p className="flex flex-wrap items-baseline gap-4" data-testid="classroom-class-code">
+          <span className="text-2xl text-muted">Class code</span>
+          <span className="font-mono text-5xl font-bold tracking-[0.3em] sm:text-7xl">{lesson.classCode}</span>
+        </p>
       ) : null}
       <ClassroomView
         title={lesson.title}

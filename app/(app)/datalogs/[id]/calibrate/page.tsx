@@ -5,13 +5,14 @@ import { LogHeader } from "@/components/datalogs/log-header";
 import { SafetyNotes } from "@/components/datalogs/safety";
 import { combinationSchema } from "@/calc";
 import { canWriteOwned } from "@/db/policy";
-import { loadAnalysis } from "../load";
+import { loadAnalysis, loadCombinationLogs } from "../load";
 
 export const metadata: Metadata = { title: "Calibrate from a log" };
 
 export default async function CalibratePage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<CleaningQuery> }) {
   const [{ id }, query] = await Promise.all([params, searchParams]);
   const { user, actor, log, points, ambient, combination, loggedSpec } = await loadAnalysis(id);
+  const logs = await loadCombinationLogs(actor, combination.id);
   return (
     <div className="flex flex-col gap-5">
       <LogHeader title={`Calibrate from “${log.name}”`} log={log} combination={combination} ambient={ambient} unitSystem={user.unitSystem} />
@@ -26,6 +27,7 @@ export default async function CalibratePage({ params, searchParams }: { params: 
         canSave={canWriteOwned(actor, combination.ownerId)}
         unitSystem={user.unitSystem}
         initial={cleaningFromQuery(query)}
+        logs={logs}
       />
       <SafetyNotes />
     </div>
