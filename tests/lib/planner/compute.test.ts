@@ -6,7 +6,8 @@ import { exposeSeries } from "@/lib/charts/metrics";
 import { findPulley, ladder, ladderDiameters, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, withPulley, type ShelfPulley } from "@/lib/planner/compute";
 import { explainSentence } from "@/lib/planner/explain-words";
 import { outsideRangeText } from "@/lib/planner/range-words";
-import { deltaRows } from "@/lib/planner/side-by-side";
+import { DELTA_QUANTITIES, deltaRows, deltaTone } from "@/lib/planner/side-by-side";
+import { matchesSearch } from "@/app/(app)/compare/compare-pickers";
 import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
 import { deltaText, displayValue } from "@/lib/units/format";
 import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
@@ -140,6 +141,37 @@ describe("Side by side", () => {
     expect(boost.cells[1].delta!).toBeLessThan(0);
     expect(boost.cells[2].value!).toBeGreaterThan(boost.cells[1].value!);
     expect(boost.cells[1].value).toBe(solvePoint(specs[1], 4500).boostGauge);
+  });
+
+  it("colours a difference by better or worse for its quantity, not by its sign", () => {
+    // Trade fact (common practice, no published source): a cooler charge and less drive power are better; boost alone is neither.
+    const by = Object.fromEntries(DELTA_QUANTITIES.map((q) => [q.key, q.better]));
+    expect(deltaTone(by.manifoldTemperature, -5)).toBe("better");
+    expect(deltaTone(by.drivePower, -500)).toBe("better");
+    expect(deltaTone(by.drivePower, 500)).toBe("worse");
+    expect(deltaTone(by.netPower, 500)).toBe("better");
+    expect(deltaTone(by.torque, -1)).toBe("worse");
+    expect(deltaTone(by.boostGauge, 1000)).toBe("neutral");
+    expect(deltaTone(by.netPower, 0)).toBe("neutral");
+  });
+
+  it("finds combinations by name, customer or owner", () => {
+    const c = { id: "x", name: "Street small-block", revision: 2, customerName: "Ada Example", ownerEmail: "tuner@example.test" };
+    expect(matchesSearch(c, "small")).toBe(true);
+    expect(matchesSearch(c, "ADA")).toBe(true);
+    expect(matchesSearch(c, "tuner@")).toBe(true);
+    expect(matchesSearch(c, "twin-screw")).toBe(false);
+    expect(matchesSearch(c, "  ")).toBe(true);
+  });
+
+  it("gives no figures for points outside the model's range, and says why", () => {
+    const tiny = combinationSchema.parse(withPulley(base, inToM(1.6)));
+    const rows = deltaRows([base, tiny], [base.engine.redlineRpm]);
+    const boost = rows.find((r) => r.quantity.key === "boostGauge")!;
+    expect(boost.cells[0].outside).toBeNull();
+    expect(boost.cells[1].outside!.length).toBeGreaterThan(0);
+    expect(boost.cells[1].value).toBeNull();
+    expect(boost.cells[1].delta).toBeNull();
   });
 
   it("parses the query, dropping malformed and repeated items", () => {
