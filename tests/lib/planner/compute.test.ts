@@ -8,7 +8,8 @@ import { explainSentence } from "@/lib/planner/explain-words";
 import { outsideRangeText } from "@/lib/planner/range-words";
 import { DELTA_QUANTITIES, deltaRows, deltaTone } from "@/lib/planner/side-by-side";
 import { matchesSearch } from "@/app/(app)/compare/compare-pickers";
-import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
+import { applyShape, scaleVe, VE_SHAPES } from "@/lib/planner/ve-shapes";
+import fc from "fast-check";
 import { deltaText, displayValue } from "@/lib/units/format";
 import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 
@@ -122,6 +123,24 @@ describe("VE starting shapes", () => {
       const codes = cautions(spec, []).map((c) => c.code);
       expect(codes).not.toContain("ve-implausible");
     }
+  });
+
+  it("scale the whole curve by a percentage, to 0.1 %, keeping the speeds", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.record({ rpm: fc.integer({ min: 500, max: 9000 }), ve: fc.double({ min: 30, max: 130, noNaN: true }) }), { minLength: 1, maxLength: 12 }),
+        fc.double({ min: -50, max: 50, noNaN: true }),
+        (rows, pct) => {
+          const out = scaleVe(rows, pct);
+          out.forEach((r, i) => {
+            expect(r.rpm).toBe(rows[i].rpm);
+            expect(Math.abs(r.ve - rows[i].ve * (1 + pct / 100))).toBeLessThanOrEqual(0.05 + 1e-9);
+          });
+        },
+      ),
+    );
+    // source: arithmetic, 85 % × 1.08 = 91.8 %
+    expect(scaleVe([{ rpm: 3000, ve: 85 }, { rpm: 4000, ve: Number.NaN }], 8).map((r) => r.ve)).toEqual([91.8, Number.NaN]);
   });
 
   it("make six speeds up to redline from a table that is too short", () => {
