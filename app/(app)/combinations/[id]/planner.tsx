@@ -72,7 +72,7 @@ export function Planner(props: PlannerProps) {
 
   const switchUnits = (next: UnitSystem) => {
     if (next === system) return;
-    form.reset(convertForm(form.getValues(), system, next));
+    form.reset(convertForm(form.getValues(), system, next, baseSpec));
     setSystem(next);
     setUnitsMsg(null);
     startUnits(async () => {
