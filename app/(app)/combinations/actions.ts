@@ -7,7 +7,7 @@ import { z } from "zod";
 import { act, formFields } from "@/app/_lib/action";
 import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
-import { TEMPLATE_KEYS, templateSpec } from "@/lib/combinations/templates";
+import { BLANK_START, startingSpec, TEMPLATE_KEYS } from "@/lib/combinations/templates";
 import { getDb } from "@/db/client";
 import { FieldError } from "@/lib/errors";
 import {
@@ -19,9 +19,18 @@ import {
   undoDelete,
 } from "@/db/repo/combinations";
 
+const figure = z.string().max(40).optional();
 const newCombinationForm = z.object({
   name: z.string({ error: "Give the combination a name." }),
-  template: z.enum(TEMPLATE_KEYS, { error: "Choose a starting point." }),
+  template: z.enum([...TEMPLATE_KEYS, BLANK_START], { error: "Choose a starting point." }),
+  units: z.enum(["imperial", "metric"], { error: "Units must be imperial or metric." }),
+  displacement: figure,
+  cylinders: figure,
+  redlineRpm: figure,
+  blowerKind: figure,
+  blowerDisplacement: figure,
+  crankPulley: figure,
+  blowerPulley: figure,
   customerName: z.string().optional(),
   customerContact: z.string().optional(),
   note: z.string().optional(),
@@ -35,7 +44,8 @@ export async function createCombinationAction(_prev: ActionState | undefined, fo
     const f = newCombinationForm.parse(formFields(form));
     const row = await createCombination(getDb(), actor, {
       name: f.name,
-      spec: templateSpec(f.template),
+      // The main figures go into the first revision itself, so its note describes what was typed.
+      spec: startingSpec(f.template, f, f.units),
       customerName: f.customerName,
       customerContact: f.customerContact,
       note: f.note,
