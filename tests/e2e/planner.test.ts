@@ -209,7 +209,12 @@ describe("planner in Chromium", () => {
       for (const path of [`/combinations/${demoId}`, `/compare?items=${demoId}:current`, "/combinations"]) {
         await p.goto(`${BASE_URL}${path}`);
         await p.waitForLoadState("networkidle");
-        const wide = await p.evaluate(() => ({ scroll: document.documentElement.scrollWidth, inner: window.innerWidth }));
+        const wide = await p.evaluate(() => {
+          const inner = window.innerWidth;
+          // Name the outermost elements that stick out, so a failure says where to look.
+          const out = [...document.querySelectorAll<HTMLElement>("body *")].filter((el) => el.getBoundingClientRect().right > inner + 1 && !(el.parentElement && el.parentElement.getBoundingClientRect().right > inner + 1));
+          return { scroll: document.documentElement.scrollWidth, inner, culprits: out.slice(0, 3).map((el) => `${el.tagName.toLowerCase()}.${el.className}`.slice(0, 120)) };
+        });
         expect({ path, width, ...wide, over: wide.scroll > wide.inner }).toEqual({ path, width, ...wide, over: false });
       }
       await ctx.close();
