@@ -75,7 +75,7 @@ export function PulleyLadder({ rows, system, rpm, fromShelf, onUse }: PulleyLadd
         {fromShelf ? "Blower pulleys on the parts shelf" : "The parts shelf has no blower pulleys yet: a range of sizes"}. Every figure at{" "}
         <span data-testid="ladder-rpm">{figure("speed", rpm, system)}</span> rpm, the finder&apos;s engine speed.
       </p>
-      <div ref={box} className="max-h-96 overflow-auto">
+      <div ref={box} className="relative max-h-96 overflow-auto">
         <table className="w-full border-collapse text-sm" data-testid="pulley-ladder">
           <thead className="sticky top-0 border-b border-line bg-panel text-muted">
             <tr>

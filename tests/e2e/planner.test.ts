@@ -139,6 +139,8 @@ describe("planner in Chromium", () => {
     await expect(pulleyField(page).inputValue().then(Number)).resolves.toBeCloseTo(mToIn(want), 4);
     // One speed for both: the ladder now reads at 5,000 rpm and its current row gives the finder's boost.
     await page.getByTestId("ladder-rpm").filter({ hasText: "5,000" }).waitFor();
+    // The results follow the form a moment later (deferred): wait for the ladder's current row to be the found size.
+    await page.waitForFunction((d) => Math.abs(Number(document.querySelector('[data-testid="ladder-row"][aria-current="true"]')?.getAttribute("data-diameter-m")) - d) / d < 1e-4, want);
     const row = page.locator('[data-testid="ladder-row"][aria-current="true"] [data-testid="ladder-boost"]');
     await expect(row.textContent().then(Number)).resolves.toBeCloseTo(8, 1);
     await expect(page.getByRole("heading", { name: "Cautions" }).isVisible()).resolves.toBe(true);

@@ -109,7 +109,7 @@ export function CompareView({ items, combinations, revisionsFor, unitSystem, spe
             <h2 id="deltas-heading" className="text-base font-semibold">
               Differences from the first
             </h2>
-            <div className="overflow-x-auto">
+            <div className="relative overflow-x-auto">
               <table className="w-full border-collapse text-sm" data-testid="deltas-table">
                 <thead className="border-b border-line text-left text-muted">
                   <tr>
