@@ -23,7 +23,7 @@ const figure = z.string().max(40).optional();
 const newCombinationForm = z.object({
   name: z.string({ error: "Give the combination a name." }),
   template: z.enum([...TEMPLATE_KEYS, BLANK_START], { error: "Choose a starting point." }),
-  units: z.enum(["imperial", "metric"], { error: "Units must be imperial or metric." }),
+  units: z.enum(["imperial", "metric"], { error: "Units must be imperial or metric." }).optional(),
   displacement: figure,
   cylinders: figure,
   redlineRpm: figure,
@@ -36,6 +36,13 @@ const newCombinationForm = z.object({
   note: z.string().optional(),
 });
 
+/** Figures typed without saying their units are ambiguous; with none typed the units do not matter. */
+function figuresUnits(f: Record<string, unknown>): "metric" {
+  const typed = ["displacement", "blowerDisplacement", "crankPulley", "blowerPulley"].some((k) => typeof f[k] === "string" && (f[k] as string).trim() !== "");
+  if (typed) throw new FieldError("units", "Say which units the figures are in (imperial or metric).");
+  return "metric";
+}
+
 /** Creates a combination from a starting point, then opens it in the planner. */
 export async function createCombinationAction(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
   let id = "";
@@ -45,7 +52,7 @@ export async function createCombinationAction(_prev: ActionState | undefined, fo
     const row = await createCombination(getDb(), actor, {
       name: f.name,
       // The main figures go into the first revision itself, so its note describes what was typed.
-      spec: startingSpec(f.template, f, f.units),
+      spec: startingSpec(f.template, f, f.units ?? figuresUnits(f)),
       customerName: f.customerName,
       customerContact: f.customerContact,
       note: f.note,
