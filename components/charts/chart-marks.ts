@@ -40,6 +40,18 @@ export const markersPlugin: Plugin<"line"> = {
         ctx.fillText("Redline", x - 3, area.top + 11);
       }
     }
+    // Direct labels at the right end of muted lines (neighbouring pulleys), in the line's colour.
+    ctx.textAlign = "right";
+    chart.data.datasets.forEach((ds, i) => {
+      const label = (ds as { pwDirectLabel?: string }).pwDirectLabel;
+      const meta = chart.getDatasetMeta(i);
+      if (!label || meta.hidden) return;
+      const last = [...meta.data].reverse().find((el) => !(el as { skip?: boolean }).skip && Number.isFinite(el.y));
+      if (!last) return;
+      ctx.fillStyle = String(ds.borderColor ?? marks.ink);
+      ctx.fillText(label, Math.min(last.x, area.right) - 4, last.y - 4);
+    });
+    ctx.fillStyle = marks.ink;
     const speed = marks.speedAxis ? scales[marks.speedAxis] : undefined;
     if (marks.blowerMaxRpm !== undefined && speed) {
       const y = speed.getPixelForValue(marks.blowerMaxRpm);

@@ -31,13 +31,20 @@ import {
   type CurveMetric,
 } from "@/lib/charts/metrics";
 
+import { outsideRangeText } from "@/lib/planner/range-words";
 import { markersPlugin, useInk, type Marks } from "./chart-marks";
 
 ChartJS.register(LineController, LineElement, PointElement, LinearScale, Tooltip, Legend);
 
 export type { CurveMetric } from "@/lib/charts/metrics";
 
-export type CurveSeries = { label: string; points: OperatingPoint[]; dashed?: boolean; colorIndex?: number };
+/** A series; `muted` ones (neighbouring pulleys) are thin and grey-toned, labelled at their line's end instead of in the legend. */
+export type CurveSeries = { label: string; points: OperatingPoint[]; dashed?: boolean; colorIndex?: number; muted?: boolean };
+
+/** At most two y axes per chart (readability): metrics of a third kind are left out. */
+const MAX_AXES = 2;
+/** A point's value for the chart, or null where the model says it is outside its range (a gap in the line). */
+const plotted = (m: CurveMetric, p: OperatingPoint, system: UnitSystem) => (p.withinRange ? metricValue(m, p, system) : null);
 
 export type CurveChartProps = {
   series: CurveSeries[];
@@ -74,7 +81,7 @@ export function CurveChart({
 
   const axes = useMemo(() => {
     const kinds: AxisKind[] = [];
-    for (const m of metrics) if (!kinds.includes(METRICS[m].kind)) kinds.push(METRICS[m].kind);
+    for (const m of metrics) if (!kinds.includes(METRICS[m].kind) && kinds.length < MAX_AXES) kinds.push(METRICS[m].kind);
     return kinds.map((kind, i) => ({
       kind,
       id: `y${i}`,
@@ -89,26 +96,29 @@ export function CurveChart({
     const out: ChartDataset<"line", { x: number; y: number | null }[]>[] = [];
     series.forEach((s, si) => {
       metrics.forEach((m, mi) => {
-        const axis = axes.find((a) => a.kind === METRICS[m].kind)!;
-        const colour = palette[(many ? (s.colorIndex ?? si) : (s.colorIndex ?? 0) + mi) % palette.length];
+        const axis = axes.find((a) => a.kind === METRICS[m].kind);
+        if (!axis) return;
+        const colour = s.muted ? ink.muted : palette[(many ? (s.colorIndex ?? si) : (s.colorIndex ?? 0) + mi) % palette.length];
         const dash = many || print ? DASHES[mi % DASHES.length] : [];
         out.push({
           label: metrics.length > 1 || series.length > 1 ? `${s.label}: ${METRICS[m].label}` : s.label,
-          data: s.points.map((p) => ({ x: p.rpm, y: metricValue(m, p, unitSystem) })),
+          data: s.points.map((p) => ({ x: p.rpm, y: plotted(m, p, unitSystem) })),
           yAxisID: axis.id,
           borderColor: colour,
           backgroundColor: colour,
-          borderWidth: s.dashed ? 1.5 : 2.5,
+          borderWidth: s.muted ? 1.25 : s.dashed ? 1.5 : 2.5,
           borderDash: s.dashed && dash.length === 0 ? [6, 4] : dash,
           pointRadius: 0,
           pointHoverRadius: 3,
           tension: 0.25,
-          spanGaps: true,
+          spanGaps: false,
+          // Direct label for muted lines (drawn by the marks plugin), none in the legend.
+          ...(s.muted ? { pwDirectLabel: s.label } : {}),
         });
       });
     });
     return out;
-  }, [series, metrics, axes, unitSystem, print, ink.fg]);
+  }, [series, metrics, axes, unitSystem, print, ink.fg, ink.muted]);
 
   const speedAxis = axes.find((a) => a.kind === "speed")?.id;
 
@@ -118,6 +128,8 @@ export function CurveChart({
       x: {
         type: "linear",
         title: { display: true, text: "Engine speed (rpm)", color: ink.fg, ...font },
+        // The x axis ends at redline: nothing beyond it is a prediction anyone should use.
+        ...(redlineRpm !== undefined ? { max: redlineRpm } : {}),
         ticks: { color: ink.muted, callback: (v) => fmt(Number(v), 0), ...font },
         grid: { color: ink.grid },
       } as ScaleOptions<"linear">,
@@ -143,7 +155,10 @@ export function CurveChart({
       interaction: { mode: "index", intersect: false },
       scales,
       plugins: {
-        legend: { position: "bottom", labels: { color: ink.fg, boxWidth: 18, boxHeight: 2, ...font } },
+        legend: {
+          position: "bottom",
+          labels: { color: ink.fg, boxWidth: 18, boxHeight: 2, ...font, filter: (item, data) => !(data.datasets[item.datasetIndex ?? 0] as { pwDirectLabel?: string }).pwDirectLabel },
+        },
         tooltip: {
           enabled: !print,
           callbacks: {
@@ -176,7 +191,9 @@ export function CurveChart({
           aria-describedby={tableId}
         />
       </div>
-      <table id={tableId} className="sr-only" data-testid="curve-chart-table">
+      {/* The wrapper clips: a table ignores a 1 px width, so an sr-only table alone widens the page. */}
+      <div className="sr-only">
+      <table id={tableId} data-testid="curve-chart-table">
         <caption>{ariaLabel}</caption>
         <thead>
           <tr>
@@ -197,6 +214,7 @@ export function CurveChart({
               {series.flatMap((s) =>
                 metrics.map((m) => {
                   const p = s.points.find((q) => q.rpm === rpm);
+                  if (p && !p.withinRange) return <td key={`${s.label}-${m}`}>{outsideRangeText(p.rangeReasons, unitSystem)}</td>;
                   const v = p ? metricDisplay(m, p, unitSystem) : null;
                   return <td key={`${s.label}-${m}`}>{v === null ? "–" : fmt(v, axisDigits(METRICS[m].kind, unitSystem))}</td>;
                 }),
@@ -205,6 +223,7 @@ export function CurveChart({
           ))}
         </tbody>
       </table>
+      </div>
     </figure>
   );
 }

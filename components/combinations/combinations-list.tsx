@@ -122,7 +122,8 @@ export function CombinationsList({ role, unitSystem, actions }: { role: Role; un
         </div>
       ) : data ? (
         <>
-          <div className="overflow-x-auto rounded-lg border border-line bg-panel">
+          {/* relative: the header's visually hidden "Actions" is absolutely placed and must scroll with the table, not widen the page. */}
+          <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
             <table className="w-full text-sm tabular-nums">
               <caption className="sr-only">Combinations, page {data.page} of {pages}</caption>
               <thead className="border-b border-line text-left text-muted">

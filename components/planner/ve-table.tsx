@@ -3,12 +3,16 @@
 import { useState } from "react";
 import { useFieldArray } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
+import { applyShape, scaleVe, VE_SHAPES } from "@/lib/planner/ve-shapes";
 import type { EditorProps } from "./editor";
 
 export function VeTable({ form, system, errors, values }: Omit<EditorProps, "blowers">) {
   const { fields, append, remove, replace } = useFieldArray({ control: form.control, name: "engine.veCurve" });
   const [shapeId, setShapeId] = useState(VE_SHAPES[0].id);
+  const [scaleText, setScaleText] = useState("");
+  const scale = Number(scaleText);
+  // A whole-curve change such as "+8 % with the new heads"; ±50 % keeps a slip of the finger from emptying the curve.
+  const scaleOk = scaleText.trim() !== "" && Number.isFinite(scale) && scale !== 0 && Math.abs(scale) <= 50;
   const rows = values.engine.veCurve;
   const lastRpm = rows.reduce((m, r) => (Number.isFinite(r.rpm) ? Math.max(m, r.rpm) : m), 0);
   const tableError = errors["engine.veCurve"];
@@ -106,6 +110,21 @@ export function VeTable({ form, system, errors, values }: Omit<EditorProps, "blo
           }}
         >
           Fill VE from shape
+        </Button>
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="font-medium">Scale all VE by (%)</span>
+          <input type="number" step="any" inputMode="decimal" value={scaleText} onChange={(e) => setScaleText(e.target.value)} placeholder="e.g. 8 or -5" className="w-28 rounded-md border border-line bg-panel px-2 py-1.5" />
+        </label>
+        <Button
+          type="button"
+          variant="secondary"
+          disabled={!scaleOk}
+          onClick={() => {
+            replace(scaleVe(rows, scale));
+            setScaleText("");
+          }}
+        >
+          Scale VE
         </Button>
       </div>
       <p className="text-xs text-muted">The starting shapes are invented, generic guesses: replace them with your engine&apos;s figures.</p>

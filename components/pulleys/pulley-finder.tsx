@@ -17,15 +17,32 @@ export type PulleyFinderProps = {
   system: UnitSystem;
   rpms: number[];
   stock: number[];
+  /** The engine speed shown (the ladder's too, when onRpm is given). */
   defaultRpm: number;
+  /** A valid speed typed here becomes the ladder's speed as well. */
+  onRpm?: (rpm: number) => void;
   onApply?: (diameter: number) => void;
   /** Rendered inside another form: a group instead of a form of its own. */
   nested?: boolean;
 };
 
-export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply, nested }: PulleyFinderProps) {
+const validRpm = (n: number) => Number.isFinite(n) && n >= 100 && n <= 20_000;
+
+export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onRpm, onApply, nested }: PulleyFinderProps) {
   const [target, setTarget] = useState("");
-  const [rpm, setRpm] = useState(String(Math.round(defaultRpm)));
+  const [rpm, setRpmText] = useState(String(Math.round(defaultRpm)));
+  // Follow the default (peak power speed moves with the spec) unless the field already says it
+  // (state adjusted during render, React's pattern for derived state).
+  const [seenDefault, setSeenDefault] = useState(defaultRpm);
+  if (seenDefault !== defaultRpm) {
+    setSeenDefault(defaultRpm);
+    if (Number(rpm) !== Math.round(defaultRpm)) setRpmText(String(Math.round(defaultRpm)));
+  }
+  const setRpm = (text: string) => {
+    setRpmText(text);
+    const n = Number(text);
+    if (onRpm && text.trim() !== "" && validRpm(n)) onRpm(n);
+  };
   const [request, setRequest] = useState<{ boost: number; rpm: number } | null>(null);
   const [error, setError] = useState<{ field: "target" | "rpm"; message: string } | null>(null);
   const pressureUnit = unitLabel("pressure", system);
@@ -45,7 +62,7 @@ export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply, n
     const t = Number(target);
     const n = Number(rpm);
     if (target.trim() === "" || !Number.isFinite(t)) return setError({ field: "target", message: `Give a target boost in ${pressureUnit}.` });
-    if (rpm.trim() === "" || !Number.isFinite(n) || n < 100 || n > 20_000) return setError({ field: "rpm", message: "Give an engine speed between 100 and 20,000 rpm." });
+    if (rpm.trim() === "" || !validRpm(n)) return setError({ field: "rpm", message: "Give an engine speed between 100 and 20,000 rpm." });
     setError(null);
     setRequest({ boost: toSI("pressure", t, system), rpm: n });
   };

@@ -67,7 +67,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
         />
       </div>
       {q.isError ? <Notice tone="danger">{q.error.message}</Notice> : null}
-      <div className="overflow-x-auto rounded-md border border-line bg-panel">
+      <div className="relative overflow-x-auto rounded-md border border-line bg-panel">
         <table className="w-full text-sm" aria-busy={q.isFetching}>
           <caption className="sr-only">Recommendation sheets</caption>
           <thead className="border-b border-line text-left">

@@ -141,7 +141,7 @@ export function ShelfList<Row extends Part, Sort extends string>(props: Props<Ro
         </div>
       ) : null}
       {q.isError ? <Notice tone="danger">{q.error.message}</Notice> : null}
-      <div className="overflow-x-auto rounded-md border border-line bg-panel">
+      <div className="relative overflow-x-auto rounded-md border border-line bg-panel">
         <table className="w-full text-sm" aria-busy={q.isFetching}>
           <caption className="sr-only">{many} on the shelf</caption>
           <thead className="border-b border-line">

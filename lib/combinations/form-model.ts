@@ -121,8 +121,11 @@ const num = (v: unknown): number => (typeof v === "number" ? v : v === "" || v =
  * what that stored value displays as keeps the stored value itself: a save in inches does not
  * turn an untouched 0.005 m³ into 0.0049999997 m³.
  */
+const storedAt = (base: Combination | undefined, path: string): unknown =>
+  path.split(".").reduce<unknown>((o, k) => (o && typeof o === "object" ? (o as Record<string, unknown>)[k] : undefined), base);
+
 export function toSpec(f: PlannerForm, system: UnitSystem, base?: Combination): CombinationInput {
-  const stored = (path: string): unknown => path.split(".").reduce<unknown>((o, k) => (o && typeof o === "object" ? (o as Record<string, unknown>)[k] : undefined), base);
+  const stored = (path: string) => storedAt(base, path);
   const q = (path: string, v: unknown) => {
     const kind = kindOf(path)!;
     const n = num(v);
@@ -229,11 +232,17 @@ export function toForm(spec: Combination, system: UnitSystem, altitude = 0): Pla
   };
 }
 
-/** Every quantity of the form re-expressed from one unit system in the other (switches and counts kept). */
-export function convertForm(f: PlannerForm, from: UnitSystem, to: UnitSystem): PlannerForm {
+/**
+ * Every quantity of the form re-expressed from one unit system in the other (switches and counts
+ * kept). A field still showing its stored value (`base`) is re-expressed from that stored SI value,
+ * not from its rounded figure, so a round trip leaves the stored spec byte-identical.
+ */
+export function convertForm(f: PlannerForm, from: UnitSystem, to: UnitSystem, base?: Combination): PlannerForm {
   if (from === to) return f;
   const c = (path: string, v: number) => {
     const kind = FIELD_KINDS[path];
+    const b = storedAt(base, path);
+    if (typeof b === "number" && fieldFromSI(kind, b, from) === num(v)) return fieldFromSI(kind, b, to);
     return fieldFromSI(kind, fieldToSI(kind, num(v), from), to);
   };
   return {

@@ -1,6 +1,8 @@
 // Starting points for a new combination: the invented demo engines (demo-specs.ts beside this file).
 // Every number in them is a demo value; the planner is where a person makes them their own.
-import type { CombinationInput } from "@/calc";
+import type { CombinationInput, UnitSystem } from "@/calc";
+import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
+import { withMainFigures, type MainFigures } from "./main-figures";
 import { bigBlockTwinScrew, fourCylinderRoots, smallBlockBaseline } from "@/lib/combinations/demo-specs";
 
 export type TemplateKey = "small-block-roots" | "big-v8-twin-screw" | "four-cylinder-roots";
@@ -18,4 +20,16 @@ export function templateSpec(key: TemplateKey): CombinationInput {
   if (!t) throw new Error(`unknown template ${key}`);
   // A fresh copy: the demo objects are shared.
   return structuredClone(t.spec);
+}
+
+/** A blank start: every main figure from the person, generic defaults (the first template's) for the rest. */
+export const BLANK_START = "blank";
+
+/** The first revision's spec: the starting point (or a blank start) with the main figures typed. */
+export function startingSpec(key: TemplateKey | typeof BLANK_START, figures: MainFigures, system: UnitSystem): CombinationInput {
+  if (key !== BLANK_START) return withMainFigures(templateSpec(key), figures, system);
+  const spec = withMainFigures(templateSpec(TEMPLATES[0].key), figures, system, true) as CombinationInput & { engine: { redlineRpm: number; veCurve: { rpm: number; ve: number }[] } };
+  // The default VE shape laid over the person's own speed range (up to their redline).
+  spec.engine.veCurve = applyShape(VE_SHAPES[0], spec.engine.redlineRpm, []).map((r) => ({ rpm: r.rpm, ve: r.ve / 100 }));
+  return spec;
 }

@@ -13,6 +13,7 @@ import {
   type OperatingPoint,
   type PulleyForBoostResult,
   type PulleySweepRow,
+  type RangeReason,
   type UnitSystem,
 } from "@/calc";
 import { quantityText } from "@/lib/units/format";
@@ -82,59 +83,68 @@ export function ladderDiameters(current: number, shelf: readonly ShelfPulley[]):
   return out.sort((a, b) => a - b);
 }
 
-/** One rung of the ladder as the planner shows it. */
+/** One rung of the ladder as the planner shows it, all at one engine speed (`rpm`). */
 export type LadderRow = {
   diameter: number;
   driveRatio: number;
   overdrive: number;
-  boostAtPeak: number | null;
-  boostAtRedline: number | null;
+  rpm: number;
+  /** Figures at `rpm`; null where there is no balance. Not to be shown when `withinRange` is false. */
+  boost: number | null;
+  netPower: number | null;
+  chargeTemperature: number | null;
+  blowerRpm: number;
   blowerRpmAtRedline: number;
   blowerMaxRpm: number;
-  chargeTemperature: number | null;
-  netPower: number | null;
+  withinRange: boolean;
+  rangeReasons: readonly RangeReason[];
   warnings: string[];
   current: boolean;
   stock: { inStock: boolean; price: string; partNumber: string } | null;
 };
 
-function warningsOf(peak: PulleySweepRow, red: PulleySweepRow): string[] {
+function warningsOf(row: PulleySweepRow): string[] {
   const w: string[] = [];
-  if (red.overspeed) w.push("Blower over its speed limit");
-  if (red.belowBeltMinimum) w.push("Below belt minimum");
-  if (peak.chargeTemperatureHigh || red.chargeTemperatureHigh) w.push("Hot charge");
-  if (peak.injectorDutyHigh || red.injectorDutyHigh) w.push("Injectors at limit");
-  if (peak.pressureRatioOutOfRange || red.pressureRatioOutOfRange) w.push("Outside model range");
-  if (peak.problem || red.problem) w.push("No balance");
+  if (row.overspeed) w.push("Blower over its speed limit at redline");
+  if (row.belowBeltMinimum) w.push("Below belt minimum");
+  if (row.chargeTemperatureHigh) w.push("Hot charge");
+  if (row.injectorDutyHigh) w.push("Injectors at limit");
   return w;
 }
 
-/** The pulley ladder: boost at peak-power speed and at redline, limits and stock per candidate. */
-export function ladder(spec: Combination, peakRpm: number, shelf: readonly ShelfPulley[]): LadderRow[] {
+/**
+ * The pulley ladder at one engine speed, the same speed the finder uses, so that both give the
+ * same boost for the same pulley: boost, power and charge at that speed, limits and stock.
+ */
+export function ladder(spec: Combination, rpm: number, shelf: readonly ShelfPulley[]): LadderRow[] {
   const ds = ladderDiameters(spec.drive.blowerPulleyDiameter, shelf);
-  const atPeak = pulleySweep(spec, peakRpm, ds);
-  const atRed = pulleySweep(spec, spec.engine.redlineRpm, ds);
+  const sweep = pulleySweep(spec, rpm, ds);
   return ds.map((d, i) => {
-    const p = atPeak[i];
-    const r = atRed[i];
+    const r = sweep[i];
     const onShelf = shelf.filter((s) => near(s.diameter, d));
     const best = onShelf.find((s) => s.stock > 0) ?? onShelf[0];
     return {
       diameter: d,
-      driveRatio: p.driveRatio,
-      overdrive: p.overdrive,
-      boostAtPeak: p.point?.boostGauge ?? null,
-      boostAtRedline: r.point?.boostGauge ?? null,
+      driveRatio: r.driveRatio,
+      overdrive: r.overdrive,
+      rpm,
+      boost: r.point?.boostGauge ?? null,
+      netPower: r.point?.netPower ?? null,
+      chargeTemperature: r.point?.manifoldTemperature ?? null,
+      blowerRpm: r.blowerRpm,
       blowerRpmAtRedline: r.blowerRpmAtRedline,
       blowerMaxRpm: spec.blower.maxRpm,
-      chargeTemperature: r.point?.manifoldTemperature ?? null,
-      netPower: p.point?.netPower ?? null,
-      warnings: warningsOf(p, r),
+      withinRange: r.withinRange,
+      rangeReasons: r.rangeReasons,
+      warnings: warningsOf(r),
       current: near(d, spec.drive.blowerPulleyDiameter),
       stock: best ? { inStock: best.stock > 0, price: best.price, partNumber: best.partNumber } : null,
     };
   });
 }
+
+/** The ladder and finder's default speed: the finder's target speed when given, else peak power speed. */
+export const ladderSpeed = (chosen: number | null, peakRpm: number): number => chosen ?? peakRpm;
 
 /** Stock sizes the finder reports: in-stock shelf pulleys, else every shelf size. */
 export function finderStock(shelf: readonly ShelfPulley[]): number[] {

@@ -33,3 +33,12 @@ export function applyShape(shape: VeShape, redlineRpm: number, rows: readonly { 
   const grid = speeds.length >= 3 ? speeds : Array.from({ length: 6 }, (_, i) => Math.round((redlineRpm * (0.25 + (0.75 * i) / 5)) / 100) * 100);
   return grid.map((rpm) => ({ rpm, ve: Math.round(shapeAt(shape, rpm / redlineRpm) * 1000) / 10 }));
 }
+
+/**
+ * The whole VE curve scaled by a percentage ("+8 % with the new heads"): each VE (in %) times
+ * (1 + percent/100), to 0.1 %. Speeds stay; rows not yet filled in stay as they are.
+ */
+export function scaleVe<R extends { rpm: number; ve: number }>(rows: readonly R[], percent: number): R[] {
+  const f = 1 + percent / 100;
+  return rows.map((r) => (Number.isFinite(r.ve) ? { ...r, ve: Math.round(r.ve * f * 10) / 10 } : { ...r }));
+}

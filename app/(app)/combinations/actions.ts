@@ -7,7 +7,7 @@ import { z } from "zod";
 import { act, formFields } from "@/app/_lib/action";
 import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
-import { TEMPLATE_KEYS, templateSpec } from "@/lib/combinations/templates";
+import { BLANK_START, startingSpec, TEMPLATE_KEYS } from "@/lib/combinations/templates";
 import { getDb } from "@/db/client";
 import { FieldError } from "@/lib/errors";
 import {
@@ -19,13 +19,29 @@ import {
   undoDelete,
 } from "@/db/repo/combinations";
 
+const figure = z.string().max(40).optional();
 const newCombinationForm = z.object({
   name: z.string({ error: "Give the combination a name." }),
-  template: z.enum(TEMPLATE_KEYS, { error: "Choose a starting point." }),
+  template: z.enum([...TEMPLATE_KEYS, BLANK_START], { error: "Choose a starting point." }),
+  units: z.enum(["imperial", "metric"], { error: "Units must be imperial or metric." }).optional(),
+  displacement: figure,
+  cylinders: figure,
+  redlineRpm: figure,
+  blowerKind: figure,
+  blowerDisplacement: figure,
+  crankPulley: figure,
+  blowerPulley: figure,
   customerName: z.string().optional(),
   customerContact: z.string().optional(),
   note: z.string().optional(),
 });
+
+/** Figures typed without saying their units are ambiguous; with none typed the units do not matter. */
+function figuresUnits(f: Record<string, unknown>): "metric" {
+  const typed = ["displacement", "blowerDisplacement", "crankPulley", "blowerPulley"].some((k) => typeof f[k] === "string" && (f[k] as string).trim() !== "");
+  if (typed) throw new FieldError("units", "Say which units the figures are in (imperial or metric).");
+  return "metric";
+}
 
 /** Creates a combination from a starting point, then opens it in the planner. */
 export async function createCombinationAction(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
@@ -35,7 +51,8 @@ export async function createCombinationAction(_prev: ActionState | undefined, fo
     const f = newCombinationForm.parse(formFields(form));
     const row = await createCombination(getDb(), actor, {
       name: f.name,
-      spec: templateSpec(f.template),
+      // The main figures go into the first revision itself, so its note describes what was typed.
+      spec: startingSpec(f.template, f, f.units ?? figuresUnits(f)),
       customerName: f.customerName,
       customerContact: f.customerContact,
       note: f.note,

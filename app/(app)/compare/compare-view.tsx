@@ -4,25 +4,28 @@
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import type { Combination, UnitSystem } from "@/calc";
-import type { CurveMetric, CurveSeries } from "@/components/charts/curve-chart";
-import { LazyCurveChart } from "@/components/charts/curve-chart-lazy";
+import { BoostPowerCharts } from "@/components/charts/boost-power-charts";
+import type { CurveSeries } from "@/components/charts/curve-chart";
 import { rpmGrid, safeCurve } from "@/lib/planner/compute";
-import { defaultSpeeds, deltaRows } from "@/lib/planner/side-by-side";
+import { outsideRangeText } from "@/lib/planner/range-words";
+import { defaultSpeeds, deltaRows, deltaTone } from "@/lib/planner/side-by-side";
 import { Button } from "@/components/ui/button";
 import { deltaText, quantityText } from "@/lib/units/format";
+import { ComparePickers, type PickerCombination, type PickerRow } from "./compare-pickers";
 import { compareQuery, MAX_ITEMS, parseSpeeds, type CompareItem } from "./items";
 
 export type ResolvedItem = { key: string; combinationId: string; revision: number | "current"; label: string; spec: Combination };
 
 export type CompareViewProps = {
   items: ResolvedItem[];
-  combinations: { id: string; name: string; revision: number }[];
+  combinations: PickerCombination[];
   revisionsFor: Record<string, { number: number; note: string | null }[]>;
   unitSystem: UnitSystem;
   speeds: number[];
 };
 
-type PickerRow = { combinationId: string; revision: string };
+// Better or worse for the quantity, not up or down; words (not colour alone) in the header say which way is better.
+const TONE_CLASS = { better: "text-ok", worse: "text-danger", neutral: "text-muted" } as const;
 
 export function CompareView({ items, combinations, revisionsFor, unitSystem, speeds }: CompareViewProps) {
   const router = useRouter();
@@ -38,7 +41,7 @@ export function CompareView({ items, combinations, revisionsFor, unitSystem, spe
     (): CurveSeries[] => items.map((it, i) => ({ label: it.label, points: safeCurve(it.spec, rpmGrid(it.spec)), colorIndex: i })),
     [items],
   );
-  const metrics: CurveMetric[] = showTemperature ? ["boostGauge", "netPower", "torque", "manifoldTemperature"] : ["boostGauge", "netPower", "torque"];
+  const redline = items.length ? Math.max(...items.map((i) => i.spec.engine.redlineRpm)) : undefined;
   const speedsKey = tableSpeeds.join(",");
   const deltas = useMemo(() => deltaRows(items.map((i) => i.spec), speedsKey.split(",").map(Number)), [items, speedsKey]);
 
@@ -69,49 +72,7 @@ export function CompareView({ items, combinations, revisionsFor, unitSystem, spe
           show();
         }}
       >
-        <fieldset className="flex flex-col gap-2">
-          <legend className="text-sm font-semibold">Compare</legend>
-          {rows.map((r, i) => (
-            <div key={i} className="flex flex-wrap items-end gap-2">
-              <label className="flex flex-col gap-1 text-sm">
-                <span className="font-medium">Item {i + 1}</span>
-                <select
-                  value={r.combinationId}
-                  onChange={(e) => setRows(rows.map((x, k) => (k === i ? { combinationId: e.target.value, revision: "current" } : x)))}
-                  className="min-w-64 rounded-md border border-line bg-bg px-2 py-1.5"
-                >
-                  <option value="">Choose a combination…</option>
-                  {combinations.map((c) => (
-                    <option key={c.id} value={c.id}>
-                      {c.name}
-                    </option>
-                  ))}
-                </select>
-              </label>
-              <label className="flex flex-col gap-1 text-sm">
-                <span className="font-medium">Revision of item {i + 1}</span>
-                <select
-                  value={r.revision}
-                  onChange={(e) => setRows(rows.map((x, k) => (k === i ? { ...x, revision: e.target.value } : x)))}
-                  className="rounded-md border border-line bg-bg px-2 py-1.5"
-                  disabled={!r.combinationId}
-                >
-                  <option value="current">Current</option>
-                  {revisionOptions(r.combinationId).map((o) => (
-                    <option key={o.value} value={o.value}>
-                      {o.label}
-                    </option>
-                  ))}
-                </select>
-              </label>
-              {rows.length > 2 ? (
-                <Button type="button" variant="ghost" onClick={() => setRows(rows.filter((_, k) => k !== i))} aria-label={`Remove item ${i + 1}`}>
-                  Remove
-                </Button>
-              ) : null}
-            </div>
-          ))}
-        </fieldset>
+        <ComparePickers rows={rows} onRows={setRows} combinations={combinations} revisionOptions={revisionOptions} />
         <div className="flex flex-wrap items-end gap-3">
           {rows.length < MAX_ITEMS ? (
             <Button type="button" variant="secondary" onClick={() => setRows([...rows, { combinationId: "", revision: "current" }])}>
@@ -142,13 +103,13 @@ export function CompareView({ items, combinations, revisionsFor, unitSystem, spe
             <label className="flex items-center gap-1 text-sm">
               <input type="checkbox" checked={showTemperature} onChange={(e) => setShowTemperature(e.target.checked)} /> Charge temperature
             </label>
-            <LazyCurveChart series={series} metrics={metrics} unitSystem={unitSystem} height={380} ariaLabel="Boost, net power and torque against engine speed, side by side" />
+            <BoostPowerCharts series={series} unitSystem={unitSystem} redlineRpm={redline} extra={showTemperature ? "manifoldTemperature" : "none"} subject="side by side" />
           </section>
           <section aria-labelledby="deltas-heading" className="flex flex-col gap-2">
             <h2 id="deltas-heading" className="text-base font-semibold">
               Differences from the first
             </h2>
-            <div className="overflow-x-auto">
+            <div className="relative overflow-x-auto">
               <table className="w-full border-collapse text-sm" data-testid="deltas-table">
                 <thead className="border-b border-line text-left text-muted">
                   <tr>
@@ -170,6 +131,7 @@ export function CompareView({ items, combinations, revisionsFor, unitSystem, spe
                     <tr key={`${row.quantity.key}-${row.rpm}`} className="border-b border-line">
                       <th scope="row" className="px-2 py-1 text-left font-medium">
                         {row.quantity.label}
+                        <span className="block text-xs font-normal text-muted">{row.quantity.better === "higher" ? "higher is better" : row.quantity.better === "lower" ? "lower is better" : "neither better nor worse"}</span>
                       </th>
                       <td className="px-2 py-1">{row.rpm.toLocaleString("en-US")}</td>
                       {row.cells.map((cell, i) => (
@@ -180,10 +142,10 @@ export function CompareView({ items, combinations, revisionsFor, unitSystem, spe
                           data-value-si={cell.value ?? ""}
                           data-delta-si={cell.delta ?? ""}
                         >
-                          {cell.value === null ? "–" : quantityText(row.quantity.kind, cell.value, unitSystem)}
+                          {cell.outside ? <span className="text-xs text-warn">{outsideRangeText(cell.outside, unitSystem)}</span> : cell.value === null ? "–" : quantityText(row.quantity.kind, cell.value, unitSystem)}
                           {i > 0 && cell.delta !== null ? " " : null}
                           {i > 0 && cell.delta !== null ? (
-                            <span className={`ml-1 text-xs ${cell.delta > 0 ? "text-ok" : cell.delta < 0 ? "text-danger" : "text-muted"}`}>
+                            <span className={`ml-1 text-xs ${TONE_CLASS[deltaTone(row.quantity.better, cell.delta)]}`} data-tone={deltaTone(row.quantity.better, cell.delta)}>
                               ({deltaText(row.quantity.kind, cell.delta, unitSystem)})
                             </span>
                           ) : null}

@@ -46,6 +46,19 @@ export default async function ComparePage({ searchParams }: { searchParams: Sear
     if (parsed.success) shown.push({ ...r.value, spec: parsed.data as Combination });
     else missing++;
   }
+  // One item alone: its previous revision against it, the question a side by side usually asks.
+  if (shown.length === 1 && items.length === 1) {
+    const only = shown[0];
+    const rev = only.revision === "current" ? (await getCombination(db, actor, only.combinationId)).revision : only.revision;
+    if (rev > 1) {
+      const prev = await getRevision(db, actor, only.combinationId, rev - 1).catch(() => null);
+      const parsed = prev ? combinationSchema.safeParse(prev.spec) : null;
+      if (prev && parsed?.success) {
+        const name = only.label.split(" · ")[0];
+        shown.unshift({ key: `${only.combinationId}:${prev.number}`, combinationId: only.combinationId, revision: prev.number, label: `${name} · revision ${prev.number}${prev.note ? ` (${prev.note})` : ""}`, spec: parsed.data as Combination });
+      }
+    }
+  }
   const revisionsFor: Record<string, { number: number; note: string | null }[]> = {};
   ids.forEach((id, i) => {
     const r = revisionLists[i];
@@ -65,7 +78,7 @@ export default async function ComparePage({ searchParams }: { searchParams: Sear
       ) : null}
       <CompareView
         items={shown}
-        combinations={list.items.map((c) => ({ id: c.id, name: c.name, revision: c.revision }))}
+        combinations={list.items.map((c) => ({ id: c.id, name: c.name, revision: c.revision, customerName: c.customerName, ownerEmail: c.ownerEmail }))}
         revisionsFor={revisionsFor}
         unitSystem={user.unitSystem}
         speeds={speeds}

@@ -1,7 +1,7 @@
 // The planner's form: user units in, SI out, and calc's rules as field errors in the user's units.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { combinationSchema, type Combination } from "@/calc";
+import { combinationSchema, type Combination, type UnitSystem } from "@/calc";
 import { convertForm, localizeMessage, sameSpec, toForm, toSpec, unitOf, validateForm } from "@/lib/combinations/form-model";
 import { smallBlockBaseline } from "@/lib/combinations/demo-specs";
 import { combinationArb } from "@/tests/calc/support/arbitraries";
@@ -79,6 +79,21 @@ describe("form values and SI", () => {
     expect(sameSpec(toSpec(again, "imperial"), toSpec(f, "imperial"))).toBe(true);
     // source: 25 °C = 77 °F (°F = °C × 9/5 + 32)
     expect(f.ambient.temperature).toBeCloseTo(77, 6);
+  });
+
+  it("leaves the stored spec byte-identical after a unit round trip, for any combination", () => {
+    fc.assert(
+      fc.property(combinationArb, fc.constantFrom<UnitSystem>("imperial", "metric"), (input, start) => {
+        const spec = combinationSchema.parse(input);
+        const other: UnitSystem = start === "imperial" ? "metric" : "imperial";
+        const f = toForm(spec, start);
+        const back = convertForm(convertForm(f, start, other, spec), other, start, spec);
+        expect(back).toEqual(f);
+        const v = validateForm(back, start, spec);
+        if (v.ok) expect(JSON.stringify(v.spec)).toBe(JSON.stringify(spec));
+      }),
+      { numRuns: 60 },
+    );
   });
 
   it("leaves out a switched-off intercooler and injectors", () => {

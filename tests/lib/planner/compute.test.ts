@@ -3,9 +3,13 @@ import { describe, expect, it } from "vitest";
 import { cautions, combinationSchema, inToM, solvePoint, type Combination } from "@/calc";
 import { compareQuery, parseItems, parseSpeeds } from "@/app/(app)/compare/items";
 import { exposeSeries } from "@/lib/charts/metrics";
-import { findPulley, ladder, ladderDiameters, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, type ShelfPulley } from "@/lib/planner/compute";
-import { deltaRows } from "@/lib/planner/side-by-side";
-import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
+import { findPulley, ladder, ladderDiameters, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, withPulley, type ShelfPulley } from "@/lib/planner/compute";
+import { explainSentence } from "@/lib/planner/explain-words";
+import { outsideRangeText } from "@/lib/planner/range-words";
+import { DELTA_QUANTITIES, deltaRows, deltaTone } from "@/lib/planner/side-by-side";
+import { matchesSearch } from "@/app/(app)/compare/compare-pickers";
+import { applyShape, scaleVe, VE_SHAPES } from "@/lib/planner/ve-shapes";
+import fc from "fast-check";
 import { deltaText, displayValue } from "@/lib/units/format";
 import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 
@@ -48,12 +52,54 @@ describe("curves and the ladder", () => {
     const shelf = [shelfPulley(2.8, 1), shelfPulley(3.1, 0), shelfPulley(3.4, 3), shelfPulley(3.8, 2)];
     const rows = ladder(base, peakPowerRpm(safeCurve(base, rpmGrid(base)), base.engine.redlineRpm), shelf);
     for (let i = 1; i < rows.length; i++) {
-      expect(rows[i].boostAtRedline!).toBeLessThan(rows[i - 1].boostAtRedline!);
+      expect(rows[i].boost!).toBeLessThan(rows[i - 1].boost!);
       expect(rows[i].blowerRpmAtRedline).toBeLessThan(rows[i - 1].blowerRpmAtRedline);
     }
     expect(rows.filter((r) => r.current).map((r) => r.diameter)).toEqual([base.drive.blowerPulleyDiameter]); // the current size exactly, not a rounded copy
     expect(rows.find((r) => r.current)!.stock).toEqual({ inStock: true, price: "49.00", partNumber: "BP-3.4" });
     expect(rows[1].stock?.inStock).toBe(false);
+  });
+
+  it("gives the same boost as the finder for the same pulley and engine speed", () => {
+    // One speed for both (issue: the ladder read 11.9 psi at redline beside the finder's 8.8 psi at 5,500 rpm).
+    const shelf = [shelfPulley(2.9, 1), shelfPulley(3.1, 1), shelfPulley(3.4, 3), shelfPulley(3.8, 2)];
+    for (const rpm of [3000, 4500, base.engine.redlineRpm]) {
+      const rows = ladder(base, rpm, shelf);
+      const row = rows.find((r) => Math.abs(r.diameter - inToM(3.1)) < 1e-9)!;
+      expect(row.rpm).toBe(rpm);
+      const found = findPulley(base, rpm, row.boost!, [], "imperial");
+      expect(found.ok).toBe(true);
+      if (found.ok) {
+        expect(found.result.diameter).toBeCloseTo(inToM(3.1), 5);
+        expect(found.result.point.boostGauge).toBeCloseTo(row.boost!, 0);
+      }
+      expect(row.boost).toBe(solvePoint(withPulley(base, inToM(3.1)), rpm).boostGauge);
+    }
+  });
+
+  it("marks rungs outside the model's range with calc's reasons", () => {
+    // A tiny pulley on the demo engine at redline drives the pressure ratio past the model's 2.5 (calc/README.md, Range).
+    const rows = ladder(base, base.engine.redlineRpm, [shelfPulley(1.6, 1), shelfPulley(3.4, 1)]);
+    const tiny = rows[0];
+    expect(tiny.withinRange).toBe(false);
+    expect(tiny.rangeReasons.length).toBeGreaterThan(0);
+    expect(outsideRangeText(tiny.rangeReasons, "imperial")).toMatch(/^Outside the model's range: /);
+    expect(rows.find((r) => r.current)!.withinRange).toBe(true);
+    expect(outsideRangeText(["charge-temperature-above-bound"], "imperial")).toBe("Outside the model's range: charge hotter than 392 °F");
+    expect(outsideRangeText(["charge-temperature-above-bound"], "metric")).toBe("Outside the model's range: charge hotter than 200 °C");
+  });
+
+  it("explains a smaller pulley in one sentence, in the person's units", () => {
+    const rpm = 4500;
+    const a = solvePoint(base, rpm);
+    const b = solvePoint(withPulley(base, base.drive.blowerPulleyDiameter * 0.9), rpm);
+    const imperial = explainSentence(a, b, "imperial")!;
+    expect(imperial).toMatch(/^Against the saved revision at 4,500 rpm: boost \+\d+\.\d psi and net power \+\d+ hp; boost rose with blower speed \+11\.1 %/);
+    expect(imperial).not.toMatch(/kPa|kW|°C/);
+    const metric = explainSentence(a, b, "metric")!;
+    expect(metric).toMatch(/kPa/);
+    expect(metric).not.toMatch(/psi|hp|°F/);
+    expect(explainSentence(a, a, "imperial")).toBeNull();
   });
 
   it("explains an unreachable target in the user's units", () => {
@@ -79,6 +125,24 @@ describe("VE starting shapes", () => {
     }
   });
 
+  it("scale the whole curve by a percentage, to 0.1 %, keeping the speeds", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.record({ rpm: fc.integer({ min: 500, max: 9000 }), ve: fc.double({ min: 30, max: 130, noNaN: true }) }), { minLength: 1, maxLength: 12 }),
+        fc.double({ min: -50, max: 50, noNaN: true }),
+        (rows, pct) => {
+          const out = scaleVe(rows, pct);
+          out.forEach((r, i) => {
+            expect(r.rpm).toBe(rows[i].rpm);
+            expect(Math.abs(r.ve - rows[i].ve * (1 + pct / 100))).toBeLessThanOrEqual(0.05 + 1e-9);
+          });
+        },
+      ),
+    );
+    // source: arithmetic, 85 % × 1.08 = 91.8 %
+    expect(scaleVe([{ rpm: 3000, ve: 85 }, { rpm: 4000, ve: Number.NaN }], 8).map((r) => r.ve)).toEqual([91.8, Number.NaN]);
+  });
+
   it("make six speeds up to redline from a table that is too short", () => {
     const rows = applyShape(VE_SHAPES[1], 6000, [{ rpm: 3000 }]);
     expect(rows.length).toBe(6);
@@ -96,6 +160,37 @@ describe("Side by side", () => {
     expect(boost.cells[1].delta!).toBeLessThan(0);
     expect(boost.cells[2].value!).toBeGreaterThan(boost.cells[1].value!);
     expect(boost.cells[1].value).toBe(solvePoint(specs[1], 4500).boostGauge);
+  });
+
+  it("colours a difference by better or worse for its quantity, not by its sign", () => {
+    // Trade fact (common practice, no published source): a cooler charge and less drive power are better; boost alone is neither.
+    const by = Object.fromEntries(DELTA_QUANTITIES.map((q) => [q.key, q.better]));
+    expect(deltaTone(by.manifoldTemperature, -5)).toBe("better");
+    expect(deltaTone(by.drivePower, -500)).toBe("better");
+    expect(deltaTone(by.drivePower, 500)).toBe("worse");
+    expect(deltaTone(by.netPower, 500)).toBe("better");
+    expect(deltaTone(by.torque, -1)).toBe("worse");
+    expect(deltaTone(by.boostGauge, 1000)).toBe("neutral");
+    expect(deltaTone(by.netPower, 0)).toBe("neutral");
+  });
+
+  it("finds combinations by name, customer or owner", () => {
+    const c = { id: "x", name: "Street small-block", revision: 2, customerName: "Ada Example", ownerEmail: "tuner@example.test" };
+    expect(matchesSearch(c, "small")).toBe(true);
+    expect(matchesSearch(c, "ADA")).toBe(true);
+    expect(matchesSearch(c, "tuner@")).toBe(true);
+    expect(matchesSearch(c, "twin-screw")).toBe(false);
+    expect(matchesSearch(c, "  ")).toBe(true);
+  });
+
+  it("gives no figures for points outside the model's range, and says why", () => {
+    const tiny = combinationSchema.parse(withPulley(base, inToM(1.6)));
+    const rows = deltaRows([base, tiny], [base.engine.redlineRpm]);
+    const boost = rows.find((r) => r.quantity.key === "boostGauge")!;
+    expect(boost.cells[0].outside).toBeNull();
+    expect(boost.cells[1].outside!.length).toBeGreaterThan(0);
+    expect(boost.cells[1].value).toBeNull();
+    expect(boost.cells[1].delta).toBeNull();
   });
 
   it("parses the query, dropping malformed and repeated items", () => {

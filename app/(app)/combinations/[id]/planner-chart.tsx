@@ -1,8 +1,11 @@
 "use client";
-// The planner's chart: the pulley slider, the series switches and the boost and power curves.
-import { unitLabel, type UnitSystem } from "@/calc";
-import type { CurveMetric, CurveSeries } from "@/components/charts/curve-chart";
-import { LazyCurveChart } from "@/components/charts/curve-chart-lazy";
+// The planner's charts: the what-if pulley slider (the saved pulley changes only on Apply), the
+// chart switches, boost and power charts, and the one-sentence why under them.
+import { toSI, unitLabel, type UnitSystem } from "@/calc";
+import { BoostPowerCharts, type BoostExtra } from "@/components/charts/boost-power-charts";
+import type { CurveSeries } from "@/components/charts/curve-chart";
+import { Button } from "@/components/ui/button";
+import { fieldFromSI } from "@/lib/combinations/form-model";
 import { quantityText } from "@/lib/units/format";
 import type { ChartOptions, SolvedResults } from "./use-planner-results";
 
@@ -10,57 +13,80 @@ type PlannerChartProps = {
   results: SolvedResults;
   system: UnitSystem;
   series: CurveSeries[];
-  metrics: CurveMetric[];
   slider: { min: number; max: number; step: number };
-  /** The pulley as the spec holds it (SI) and as the field holds it (user's units). */
-  pulley: { si: number; field: number };
-  onPulley: (fieldValue: number) => void;
+  /** The current pulley in the field's units (the slider rests there without a what-if). */
+  pulleyField: number;
+  /** The what-if pulley (SI), or null. */
+  whatIf: number | null;
+  onWhatIf: (si: number | null) => void;
+  onApply: (si: number) => void;
+  canApply: boolean;
   options: ChartOptions;
   onOptions: (o: ChartOptions) => void;
 };
 
-export function PlannerChart({ results, system, series, metrics, slider, pulley, onPulley, options, onOptions }: PlannerChartProps) {
-  const toggle = (k: keyof ChartOptions) => (e: React.ChangeEvent<HTMLInputElement>) => onOptions({ ...options, [k]: e.target.checked });
+export function PlannerChart({ results, system, series, slider, pulleyField, whatIf, onWhatIf, onApply, canApply, options, onOptions }: PlannerChartProps) {
+  const value = whatIf === null ? pulleyField : fieldFromSI("length-small", whatIf, system);
+  const shown = whatIf ?? results.spec.drive.blowerPulleyDiameter;
   return (
     <section aria-labelledby="chart-heading" className="flex flex-col gap-2">
       <h2 id="chart-heading" className="text-base font-semibold">
         Boost and power
       </h2>
-      <label className="flex flex-col gap-1 text-sm">
-        <span className="font-medium">
-          Try blower pulley sizes <span className="font-normal text-muted">({unitLabel("length-small", system)})</span>
-        </span>
-        <input
-          type="range"
-          aria-label="Blower pulley slider"
-          aria-valuetext={quantityText("length-small", pulley.si, system)}
-          min={slider.min}
-          max={slider.max}
-          step={slider.step}
-          value={Number.isFinite(pulley.field) ? pulley.field : slider.min}
-          onChange={(e) => onPulley(Number(e.target.value))}
-        />
-      </label>
+      <div className="flex flex-wrap items-end gap-3 text-sm">
+        <label className="flex min-w-48 flex-1 flex-col gap-1">
+          <span className="font-medium">
+            Try blower pulley sizes: <output data-testid="slider-value">{quantityText("length-small", shown, system)}</output>
+            {whatIf === null ? <span className="font-normal text-muted"> (current)</span> : <span className="font-normal text-muted"> (what-if, not applied)</span>}
+          </span>
+          <input
+            type="range"
+            aria-label={`Blower pulley what-if (${unitLabel("length-small", system)})`}
+            aria-valuetext={quantityText("length-small", shown, system)}
+            min={slider.min}
+            max={slider.max}
+            step={slider.step}
+            value={Number.isFinite(value) ? value : slider.min}
+            onChange={(e) => onWhatIf(toSI("length-small", Number(e.target.value), system))}
+          />
+        </label>
+        {whatIf !== null ? (
+          <>
+            <Button type="button" variant="secondary" onClick={() => onApply(whatIf)} disabled={!canApply}>
+              Apply {quantityText("length-small", whatIf, system)}
+            </Button>
+            <Button type="button" variant="ghost" onClick={() => onWhatIf(null)}>
+              Back to current
+            </Button>
+          </>
+        ) : null}
+      </div>
       <div className="flex flex-wrap gap-4 text-sm">
         <label className="flex items-center gap-1">
-          <input type="checkbox" checked={options.showNeighbours} onChange={toggle("showNeighbours")} /> Neighbouring pulleys
+          <input type="checkbox" checked={options.showNeighbours} onChange={(e) => onOptions({ ...options, showNeighbours: e.target.checked })} /> Neighbouring pulleys
         </label>
         <label className="flex items-center gap-1">
-          <input type="checkbox" checked={options.showTemperature} onChange={toggle("showTemperature")} /> Charge temperature
-        </label>
-        <label className="flex items-center gap-1">
-          <input type="checkbox" checked={options.showBlowerSpeed} onChange={toggle("showBlowerSpeed")} /> Blower speed
+          Also on the boost chart:
+          <select value={options.extra} onChange={(e) => onOptions({ ...options, extra: e.target.value as BoostExtra })} className="rounded-md border border-line bg-bg px-1 py-0.5">
+            <option value="none">nothing</option>
+            <option value="manifoldTemperature">charge temperature</option>
+            <option value="blowerRpm">blower speed</option>
+          </select>
         </label>
       </div>
-      <LazyCurveChart
+      <BoostPowerCharts
         series={series}
-        metrics={metrics}
         unitSystem={system}
         redlineRpm={results.spec.engine.redlineRpm}
         blowerMaxRpm={results.spec.blower.maxRpm}
-        height={360}
-        ariaLabel="Boost, net power and torque against engine speed for the current and neighbouring blower pulleys"
+        extra={options.extra}
+        subject="for the current and neighbouring blower pulleys"
       />
+      {results.why ? (
+        <p className="text-sm" data-testid="planner-why" aria-live="polite">
+          {results.why}
+        </p>
+      ) : null}
     </section>
   );
 }

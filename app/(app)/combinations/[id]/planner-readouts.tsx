@@ -2,16 +2,25 @@
 import type { UnitSystem } from "@/calc";
 import { figure, percentText, quantityText } from "@/lib/units/format";
 import type { SolvedResults } from "./use-planner-results";
+import { outsideRangeText } from "@/lib/planner/range-words";
 import { TitledSection } from "@/components/ui/titled-section";
 
-export function PlannerReadouts({ results, system }: { results: SolvedResults; system: UnitSystem }) {
-  const redline = results.curve.find((p) => p.rpm === results.spec.engine.redlineRpm) ?? null;
-  const peakPoint = results.curve.find((p) => p.rpm === results.peak) ?? null;
-  const peakBoost = results.curve.length ? results.curve.reduce((a, b) => (b.boostGauge > a.boostGauge ? b : a)) : null;
-  const peakTorque = results.curve.length ? results.curve.reduce((a, b) => (b.torque > a.torque ? b : a)) : null;
+export function PlannerReadouts({ results, system, stale }: { results: SolvedResults; system: UnitSystem; stale: boolean }) {
+  // Only points within the model's range give figures; the redline point outside it says why.
+  const trusted = results.curve.filter((p) => p.withinRange);
+  const redlineAny = results.curve.find((p) => p.rpm === results.spec.engine.redlineRpm) ?? null;
+  const redline = redlineAny?.withinRange ? redlineAny : null;
+  const peakPoint = trusted.find((p) => p.rpm === results.peak) ?? null;
+  const peakBoost = trusted.length ? trusted.reduce((a, b) => (b.boostGauge > a.boostGauge ? b : a)) : null;
+  const peakTorque = trusted.length ? trusted.reduce((a, b) => (b.torque > a.torque ? b : a)) : null;
   return (
-    <TitledSection id="summary-heading" title="Predicted" className="flex flex-col gap-2">
-      <dl className="grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-3" aria-live="polite">
+    <TitledSection id="summary-heading" title={stale ? "Predicted (out of date)" : "Predicted"} className="flex flex-col gap-2">
+      {redlineAny && !redlineAny.withinRange ? (
+        <p className="text-sm text-warn" data-testid="readout-outside-range">
+          At redline: {outsideRangeText(redlineAny.rangeReasons, system)}.
+        </p>
+      ) : null}
+      <dl className={`grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-3 ${stale ? "opacity-60" : ""}`} aria-live="polite" data-stale={stale ? "true" : "false"}>
         <Readout id="boost-redline" label="Boost at redline" value={redline ? quantityText("pressure", redline.boostGauge, system) : "–"} si={redline?.boostGauge} />
         <Readout id="boost-peak" label="Highest boost" value={peakBoost ? `${quantityText("pressure", peakBoost.boostGauge, system)} at ${figure("speed", peakBoost.rpm, system)} rpm` : "–"} si={peakBoost?.boostGauge} />
         <Readout id="power-peak" label="Peak net power" value={peakPoint ? `${quantityText("power", peakPoint.netPower, system)} at ${figure("speed", peakPoint.rpm, system)} rpm` : "–"} si={peakPoint?.netPower} />

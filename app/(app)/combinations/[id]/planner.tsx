@@ -21,7 +21,7 @@ import { PlannerReadouts } from "./planner-readouts";
 import { plannerResolver } from "./planner-resolver";
 import { SaveBar, type SaveMessage } from "./save-bar";
 import { forgetDraft, usePlannerDraft } from "./use-planner-draft";
-import { useChartSetup, usePlannerResults, usePulleySlider, type ChartOptions } from "./use-planner-results";
+import { useChartSeries, usePlannerResults, usePulleySlider, type ChartOptions } from "./use-planner-results";
 
 export type PlannerProps = {
   combinationId: string;
@@ -51,7 +51,10 @@ export function Planner(props: PlannerProps) {
   const [unitsMsg, setUnitsMsg] = useState<string | null>(null);
   const [saving, startSaving] = useTransition();
   const [, startUnits] = useTransition();
-  const [chartOptions, setChartOptions] = useState<ChartOptions>({ showNeighbours: true, showTemperature: false, showBlowerSpeed: false });
+  const [chartOptions, setChartOptions] = useState<ChartOptions>({ showNeighbours: true, extra: "none" });
+  // One engine speed for the ladder and the finder (null: peak power speed), and the slider's what-if pulley (SI).
+  const [chosenRpm, setChosenRpm] = useState<number | null>(null);
+  const [whatIf, setWhatIf] = useState<number | null>(null);
 
   // Live validation with calc's schema: errors beside the fields, results from the last valid state.
   const valuesKey = JSON.stringify(values) + system;
@@ -69,7 +72,7 @@ export function Planner(props: PlannerProps) {
 
   const switchUnits = (next: UnitSystem) => {
     if (next === system) return;
-    form.reset(convertForm(form.getValues(), system, next));
+    form.reset(convertForm(form.getValues(), system, next, baseSpec));
     setSystem(next);
     setUnitsMsg(null);
     startUnits(async () => {
@@ -80,6 +83,7 @@ export function Planner(props: PlannerProps) {
 
   const applyPulley = (diameter: number) => {
     form.setValue("drive.blowerPulleyDiameter", fieldFromSI("length-small", diameter, system), { shouldDirty: true });
+    setWhatIf(null);
   };
 
   const onSave = form.handleSubmit(
@@ -110,42 +114,49 @@ export function Planner(props: PlannerProps) {
       if (r && !r.ok) setSaveMsg({ tone: "danger", text: r.message });
     });
 
-  const results = usePlannerResults(deferredSpec, shelf.blowerPulleys, system);
-  const { series, metrics } = useChartSetup(results, chartOptions, system);
+  const results = usePlannerResults({ spec: deferredSpec, baseSpec, chosenRpm, whatIf, blowerPulleys: shelf.blowerPulleys, system });
+  const series = useChartSeries(results, chartOptions.showNeighbours, system);
   const slider = usePulleySlider(spec.drive.blowerPulleyDiameter, shelf.blowerPulleys, system);
 
   return (
     <div className="flex flex-col gap-4">
       <PlannerHeader name={props.name} combinationId={combinationId} baseRevision={baseRevision} isDemo={props.isDemo} system={system} onUnits={switchUnits} unitsMessage={unitsMsg} />
       {draft.offer ? <DraftOffer revision={baseRevision} savedAt={draft.offer.savedAt} onRestore={draft.restoreDraft} onDiscard={draft.discardDraft} /> : null}
-      <SaveBar canWrite={canWrite} note={note} onNote={setNote} onSave={(e) => void onSave(e)} saving={saving} dirty={dirty} onDuplicate={duplicate} duplicating={duplicating} message={saveMsg} />
+      <SaveBar invalid={!live.ok} canWrite={canWrite} note={note} onNote={setNote} onSave={(e) => void onSave(e)} saving={saving} dirty={dirty} onDuplicate={duplicate} duplicating={duplicating} message={saveMsg} />
 
+      {/* Results first on phones; on wide screens the results column stays in view while the inputs scroll. */}
       <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
-        <div className="flex flex-col gap-3">
+        <div className="order-2 flex min-w-0 flex-col gap-3 lg:order-1">
           <h2 className="text-base font-semibold">Combination</h2>
           <Editor form={form} system={system} errors={errors} blowers={shelf.blowers} values={values} />
         </div>
 
-        <div className="flex flex-col gap-4">
+        <div className="order-1 flex min-w-0 flex-col gap-4 lg:sticky lg:top-2 lg:order-2 lg:max-h-[calc(100vh-1rem)] lg:overflow-y-auto lg:pr-1" data-testid="planner-results">
           {!live.ok ? (
-            <Notice tone="warning" title="Some fields need attention">
-              The results below are for the last combination that made sense. Fix the fields marked in red to update them.
+            <Notice tone="warning" title="Out of date">
+              <span data-testid="results-out-of-date">These figures are for the last combination that made sense; fix the fields marked in red to update them.</span>
             </Notice>
           ) : null}
           {results.ok ? (
             <>
-              <PlannerReadouts results={results} system={system} />
+              <PlannerReadouts results={results} system={system} stale={!live.ok} />
               <PlannerChart
                 results={results}
                 system={system}
                 series={series}
-                metrics={metrics}
                 slider={slider}
-                pulley={{ si: spec.drive.blowerPulleyDiameter, field: values.drive.blowerPulleyDiameter }}
-                onPulley={(v) => form.setValue("drive.blowerPulleyDiameter", v, { shouldDirty: true })}
+                pulleyField={values.drive.blowerPulleyDiameter}
+                whatIf={whatIf}
+                onWhatIf={setWhatIf}
+                onApply={applyPulley}
+                canApply={live.ok}
                 options={chartOptions}
                 onOptions={setChartOptions}
               />
+              <div className="grid grid-cols-1 gap-4 2xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+                <PulleyLadder rows={results.rows} system={system} rpm={results.rpm} fromShelf={shelf.blowerPulleys.length > 0} onUse={applyPulley} />
+                <PulleyFinder spec={results.spec} system={system} rpms={results.rpms} stock={finderStock(shelf.blowerPulleys)} defaultRpm={results.rpm} onRpm={setChosenRpm} onApply={applyPulley} />
+              </div>
               <CautionsPanel cautions={results.cautions} />
             </>
           ) : (
@@ -155,20 +166,6 @@ export function Planner(props: PlannerProps) {
           )}
         </div>
       </div>
-
-      {results.ok ? (
-        <>
-          <PulleyLadder
-            rows={results.rows}
-            system={system}
-            peakRpm={results.peak}
-            redlineRpm={results.spec.engine.redlineRpm}
-            fromShelf={shelf.blowerPulleys.length > 0}
-            onUse={applyPulley}
-          />
-          <PulleyFinder spec={results.spec} system={system} rpms={results.rpms} stock={finderStock(shelf.blowerPulleys)} defaultRpm={results.peak} onApply={applyPulley} />
-        </>
-      ) : null}
     </div>
   );
 }

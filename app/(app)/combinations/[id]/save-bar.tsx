@@ -11,12 +11,14 @@ type SaveBarProps = {
   onSave: (e: React.FormEvent) => void;
   saving: boolean;
   dirty: boolean;
+  /** A field is invalid: nothing to save until it is fixed. */
+  invalid: boolean;
   onDuplicate: () => void;
   duplicating: boolean;
   message: SaveMessage | null;
 };
 
-export function SaveBar({ canWrite, note, onNote, onSave, saving, dirty, onDuplicate, duplicating, message }: SaveBarProps) {
+export function SaveBar({ canWrite, note, onNote, onSave, saving, dirty, invalid, onDuplicate, duplicating, message }: SaveBarProps) {
   return (
     <section aria-label="Save" className="flex flex-wrap items-end gap-3 rounded-lg border border-line bg-panel p-3">
       {canWrite ? (
@@ -38,7 +40,8 @@ export function SaveBar({ canWrite, note, onNote, onSave, saving, dirty, onDupli
               className="rounded-md border border-line bg-bg px-2.5 py-1.5"
             />
           </label>
-          <Button type="submit" disabled={saving}>
+          {/* With nothing changed there is nothing to save: no empty revisions. */}
+          <Button type="submit" disabled={saving || !dirty || invalid} title={!dirty ? "Nothing has changed since the last save" : undefined}>
             {saving ? "Saving…" : "Save revision"}
           </Button>
           <span className="text-xs text-muted" aria-live="polite">

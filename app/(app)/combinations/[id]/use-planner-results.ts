@@ -1,54 +1,60 @@
 "use client";
 // The planner's results, recomputed from the deferred spec so typing stays responsive: the curve,
-// the neighbouring pulleys, the ladder, the cautions, and the chart's series and metrics.
+// the neighbouring pulleys, the ladder at the one chosen speed, the cautions, the what-if pulley
+// and the chart's series.
 import { useMemo } from "react";
-import { cautions as calcCautions, type Caution, type Combination, type UnitSystem } from "@/calc";
-import type { CurveMetric, CurveSeries } from "@/components/charts/curve-chart";
+import { cautions as calcCautions, trySolvePoint, type Caution, type Combination, type UnitSystem } from "@/calc";
+import type { BoostExtra } from "@/components/charts/boost-power-charts";
+import type { CurveSeries } from "@/components/charts/curve-chart";
 import { fieldFromSI } from "@/lib/combinations/form-model";
-import { ladder, ladderDiameters, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, withPulley, type ShelfPulley } from "@/lib/planner/compute";
+import { ladder, ladderDiameters, ladderSpeed, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, withPulley, type ShelfPulley } from "@/lib/planner/compute";
+import { explainSentence } from "@/lib/planner/explain-words";
 import { quantityText } from "@/lib/units/format";
 
-const BASE_METRICS: CurveMetric[] = ["boostGauge", "netPower", "torque"];
+export type ChartOptions = { showNeighbours: boolean; extra: BoostExtra };
 
-export type ChartOptions = { showNeighbours: boolean; showTemperature: boolean; showBlowerSpeed: boolean };
+type ResultsInput = { spec: Combination; baseSpec: Combination; chosenRpm: number | null; whatIf: number | null; blowerPulleys: ShelfPulley[]; system: UnitSystem };
 
-export function usePlannerResults(deferredSpec: Combination, blowerPulleys: ShelfPulley[], system: UnitSystem) {
+export function usePlannerResults({ spec: s, baseSpec, chosenRpm, whatIf, blowerPulleys, system }: ResultsInput) {
   return useMemo(() => {
     try {
-      const s = deferredSpec;
       const rpms = rpmGrid(s);
       const current = safeCurve(s, rpms);
       const peak = peakPowerRpm(current, s.engine.redlineRpm);
+      const rpm = ladderSpeed(chosenRpm, peak);
       const n = neighbourPulleys(s.drive.blowerPulleyDiameter, blowerPulleys, system);
       const smaller = n.smaller === null ? null : { d: n.smaller, points: safeCurve(withPulley(s, n.smaller), rpms) };
       const larger = n.larger === null ? null : { d: n.larger, points: safeCurve(withPulley(s, n.larger), rpms) };
-      const rows = ladder(s, peak, blowerPulleys);
+      const what = whatIf === null ? null : { d: whatIf, points: safeCurve(withPulley(s, whatIf), rpms) };
+      const rows = ladder(s, rpm, blowerPulleys);
       const list: Caution[] = calcCautions(s, current);
-      return { ok: true as const, spec: s, rpms, curve: current, peak, smaller, larger, rows, cautions: list };
+      // The why: the what-if against the current pulley, else the current spec against the saved one.
+      const here = trySolvePoint(s, rpm);
+      const why =
+        whatIf !== null
+          ? explainSentence(here, trySolvePoint(withPulley(s, whatIf), rpm), system, `the ${quantityText("length-small", s.drive.blowerPulleyDiameter, system)} pulley`)
+          : explainSentence(trySolvePoint(baseSpec, rpm), here, system);
+      return { ok: true as const, spec: s, rpms, curve: current, peak, rpm, smaller, larger, whatIf: what, rows, cautions: list, why };
     } catch (e) {
       return { ok: false as const, message: e instanceof Error ? e.message : "The model could not solve this combination." };
     }
-  }, [deferredSpec, blowerPulleys, system]);
+  }, [s, baseSpec, chosenRpm, whatIf, blowerPulleys, system]);
 }
 
 export type PlannerResults = ReturnType<typeof usePlannerResults>;
 export type SolvedResults = Extract<PlannerResults, { ok: true }>;
 
-export function useChartSetup(results: PlannerResults, options: ChartOptions, system: UnitSystem) {
-  const { showNeighbours, showTemperature, showBlowerSpeed } = options;
-  const series = useMemo((): CurveSeries[] => {
+export function useChartSeries(results: PlannerResults, showNeighbours: boolean, system: UnitSystem) {
+  return useMemo((): CurveSeries[] => {
     if (!results.ok) return [];
     const d = results.spec.drive.blowerPulleyDiameter;
-    const out: CurveSeries[] = [{ label: `Current ${quantityText("length-small", d, system)}`, points: results.curve, colorIndex: 0 }];
-    if (showNeighbours && results.smaller) out.push({ label: `${quantityText("length-small", results.smaller.d, system)} (smaller)`, points: results.smaller.points, dashed: true, colorIndex: 5 });
-    if (showNeighbours && results.larger) out.push({ label: `${quantityText("length-small", results.larger.d, system)} (larger)`, points: results.larger.points, dashed: true, colorIndex: 2 });
+    const len = (x: number) => quantityText("length-small", x, system);
+    const out: CurveSeries[] = [{ label: `Current ${len(d)}`, points: results.curve, colorIndex: 0 }];
+    if (results.whatIf) out.push({ label: `What-if ${len(results.whatIf.d)}`, points: results.whatIf.points, colorIndex: 5, dashed: true });
+    if (showNeighbours && results.smaller) out.push({ label: `${len(results.smaller.d)} smaller`, points: results.smaller.points, muted: true });
+    if (showNeighbours && results.larger) out.push({ label: `${len(results.larger.d)} larger`, points: results.larger.points, muted: true });
     return out;
   }, [results, showNeighbours, system]);
-  const metrics = useMemo(
-    (): CurveMetric[] => [...BASE_METRICS, ...(showTemperature ? (["manifoldTemperature"] as const) : []), ...(showBlowerSpeed ? (["blowerRpm"] as const) : [])],
-    [showTemperature, showBlowerSpeed],
-  );
-  return { series, metrics };
 }
 
 /** The pulley slider's range: the ladder's sizes and the current one, in the user's units. */

@@ -27,10 +27,10 @@ export default async function NewCombinationPage() {
       <BackLink href="/combinations" label="Combinations" className="mb-2 text-sm" linkClassName="underline" />
       <h1 className="mb-1 text-2xl font-semibold">New combination</h1>
       <p className="mb-6 text-sm text-muted">
-        Pick a starting point and give it a name; the planner opens next, where you change the engine, blower and pulleys to
+        Pick a starting point (or a blank start), type the main figures you know, and give it a name; the planner opens next, where you change the engine, blower and pulleys to
         match the real car. The starting points are invented demo values.
       </p>
-      <NewCombinationForm templates={templates} staff={staff} createAction={createCombinationAction} />
+      <NewCombinationForm templates={templates} units={user.unitSystem} staff={staff} createAction={createCombinationAction} />
     </div>
   );
 }

@@ -65,7 +65,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
         <h2 id="revisions-title" className="mb-2 text-lg font-semibold">
           Revisions
         </h2>
-        <div className="overflow-x-auto rounded-lg border border-line bg-panel">
+        <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
           <table className="w-full text-sm tabular-nums">
             <thead className="border-b border-line text-left text-muted">
               <tr>
