@@ -7,9 +7,9 @@ import { findPulley, ladder, ladderDiameters, neighbourPulleys, peakPowerRpm, rp
 import { deltaRows } from "@/lib/planner/side-by-side";
 import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
 import { deltaText, displayValue } from "@/lib/units/format";
-import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import { vintageV8Cam, vintageV8DrawThrough, workTruckV6 } from "@/lib/combinations/demo-specs";
 
-const base: Combination = combinationSchema.parse(smallBlockBaseline);
+const base: Combination = combinationSchema.parse(workTruckV6);
 const shelfPulley = (inches: number, stock: number): ShelfPulley => ({ id: `p${inches}`, partNumber: `BP-${inches}`, diameter: inToM(inches), price: "49.00", stock });
 
 describe("curves and the ladder", () => {
@@ -87,9 +87,10 @@ describe("VE starting shapes", () => {
 });
 
 describe("Side by side", () => {
-  it("reads heads and cam as less boost, and the smaller pulley as more, at 4500 rpm", () => {
+  it("reads a cam change as less boost, and then a smaller pulley as more, at 4500 rpm", () => {
     // common practice, no published source: better breathing lowers boost under the same blower and pulley
-    const specs = [smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley].map((s) => combinationSchema.parse(s));
+    const camAndPulley = { ...vintageV8Cam, drive: { ...vintageV8Cam.drive, blowerPulleyDiameter: vintageV8Cam.drive.blowerPulleyDiameter * 0.9 } };
+    const specs = [vintageV8DrawThrough, vintageV8Cam, camAndPulley].map((s) => combinationSchema.parse(s));
     const rows = deltaRows(specs, [3000, 4500]);
     const boost = rows.find((r) => r.quantity.key === "boostGauge" && r.rpm === 4500)!;
     expect(boost.cells[0].delta).toBe(0);
