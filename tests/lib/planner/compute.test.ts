@@ -69,6 +69,14 @@ describe("curves and the ladder", () => {
 });
 
 describe("VE starting shapes", () => {
+  it("are named for where they peak: the label's share of redline is the curve's highest point", () => {
+    for (const shape of VE_SHAPES) {
+      const top = shape.points.reduce((a, b) => (b[1] > a[1] ? b : a));
+      expect(shape.label).toContain(`Peak at ${Math.round(top[0] * 100)} % of redline`);
+      expect(shape.id).toBe(`peak-${Math.round(top[0] * 100)}-${shape.id.split("-").at(-1)}`);
+    }
+  });
+
   it("fill the table's speeds with plausible VE that calc does not question", () => {
     for (const shape of VE_SHAPES) {
       const rows = applyShape(shape, base.engine.redlineRpm, base.engine.veCurve);
