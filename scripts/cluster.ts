@@ -2,6 +2,7 @@
 // Debian's server binaries are installed with apt-get when missing. PostgreSQL refuses to run
 // as root, so when we are root every server command runs as the unprivileged `postgres` user.
 import { execFileSync, spawnSync } from "node:child_process";
+import crypto from "node:crypto";
 import fs from "node:fs";
 import net from "node:net";
 import path from "node:path";
@@ -49,19 +50,31 @@ function runPg(bin: string, cmd: string, args: string[], opts: { allowFail?: boo
   return r;
 }
 
-/** Makes `dir` (and its parents, as far as needed) usable by the postgres user when we are root. */
-function prepareDir(dir: string) {
+/** Where clusters live when the project folder is closed to the postgres user (root only). */
+export const FALLBACK_ROOT = process.env.PW_PG_FALLBACK_ROOT ?? "/var/lib/pulleywright/clusters";
+
+const postgresCanWrite = (dir: string) => spawnSync("runuser", ["-u", "postgres", "--", "test", "-w", dir]).status === 0;
+
+/**
+ * The folder the cluster really lives in. Normally `dir`. As root, when a parent folder of `dir`
+ * is closed to the postgres user (a clone in /root or in a `mktemp -d` folder), the cluster lives
+ * in a folder of its own under FALLBACK_ROOT, named after `dir` so each clone keeps its own data
+ * across restarts; a note in `dir`'s parent says where.
+ */
+export function clusterHome(dir: string): string {
   fs.mkdirSync(dir, { recursive: true, mode: 0o700 });
-  if (isRoot()) execFileSync("chown", ["-R", "postgres:postgres", dir]);
-  if (isRoot()) {
-    const probe = spawnSync("runuser", ["-u", "postgres", "--", "test", "-w", dir]);
-    if (probe.status !== 0) {
-      throw new Error(
-        `The postgres user cannot reach ${dir} (a parent folder is closed to it). ` +
-          "Set PW_DATA_DIR to a folder it can reach, or DATABASE_URL to an existing server.",
-      );
-    }
+  if (!isRoot()) return dir;
+  execFileSync("chown", ["-R", "postgres:postgres", dir]);
+  if (postgresCanWrite(dir)) return dir;
+  const home = path.join(FALLBACK_ROOT, crypto.createHash("sha256").update(dir).digest("hex").slice(0, 16));
+  fs.mkdirSync(home, { recursive: true, mode: 0o700 });
+  execFileSync("chown", ["postgres:postgres", home]);
+  fs.chmodSync(home, 0o700);
+  if (!postgresCanWrite(home)) {
+    throw new Error(`The postgres user can reach neither ${dir} nor ${home}. Set PW_DATA_DIR to a folder it can reach, or DATABASE_URL to an existing server.`);
   }
+  fs.writeFileSync(path.join(path.dirname(dir), "pg-location.txt"), `The PostgreSQL data for ${dir} lives in ${home}\n(the folder above is closed to the postgres user).\n`);
+  return home;
 }
 
 /** A TCP port on 127.0.0.1 that nothing listens on right now. */
@@ -94,10 +107,9 @@ function portInUse(port: number): Promise<boolean> {
 export async function startCluster(opts: { dir: string; port: number; log?: (m: string) => void }): Promise<Cluster> {
   const log = opts.log ?? console.log;
   const bin = ensurePostgres(log);
-  const dir = path.resolve(opts.dir);
+  const dir = clusterHome(path.resolve(opts.dir));
   const url = `postgres://app@127.0.0.1:${opts.port}/app`;
   const fresh = !fs.existsSync(path.join(dir, "PG_VERSION"));
-  prepareDir(dir);
   if (fresh) {
     runPg(bin, "initdb", ["-D", dir, "-U", "app", "--auth=trust", "-E", "UTF8", "--locale=C.UTF-8"]);
     fs.appendFileSync(

@@ -12,11 +12,11 @@ import { getShopDetails, type ShopDetails } from "@/db/repo/shop";
 import { toActor } from "@/db/repo/users";
 
 export type Loaded = { ok: true; sheet: Recommendation; shop: ShopDetails; unitSystem: UnitSystem; expiresAt?: Date };
-export type Refused = { ok: false; reason: Extract<ShareVerdict, { ok: false }>["reason"] | "gone" };
+export type Refused = { ok: false; reason: Extract<ShareVerdict, { ok: false }>["reason"] | "gone" | "revoked" };
 
 export const unitsParam = (v: unknown): UnitSystem => (v === "metric" ? "metric" : "imperial");
 
-/** By token: the token must be genuine, unexpired and (when `id` is given) for this very sheet. */
+/** By token: the token must be genuine, unexpired, of the sheet's current share version and (when `id` is given) for this very sheet. */
 export async function loadByToken(token: string, units: unknown, id?: string): Promise<Loaded | Refused> {
   const v = verifyShareToken(token);
   if (!v.ok) return { ok: false, reason: v.reason };
@@ -24,6 +24,8 @@ export async function loadByToken(token: string, units: unknown, id?: string): P
   const db = getDb();
   try {
     const [sheet, shop] = await Promise.all([getSharedRecommendation(db, v), getShopDetails(db)]);
+    // The shop stopped the links sent before (the sheet's share version moved on).
+    if (sheet.shareVersion !== v.version) return { ok: false, reason: "revoked" };
     return { ok: true, sheet, shop, unitSystem: unitsParam(units), expiresAt: v.expiresAt };
   } catch (e) {
     if (e instanceof NotFoundError) return { ok: false, reason: "gone" };

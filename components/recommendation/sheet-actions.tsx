@@ -34,6 +34,11 @@ export function SheetActions({ id, status, customerEmail, sentAt, lastError }: P
       await apiJson(`/api/recommendations/${id}/send`, { method: "POST" });
       return `Sent to ${customerEmail}.`;
     });
+  const stopLinks = () =>
+    run("stop-links", async () => {
+      await apiJson(`/api/recommendations/${id}/share-links`, { method: "DELETE" });
+      return "The links sent so far no longer open this sheet. Send it again to give the customer a new one.";
+    });
   const setStatus = (next: "draft" | "accepted" | "declined") =>
     run(next, async () => {
       await apiJson(`/api/recommendations/${id}/status`, { method: "POST", json: { status: next } });
@@ -72,6 +77,9 @@ export function SheetActions({ id, status, customerEmail, sentAt, lastError }: P
             </Button>
             <Button type="button" variant="ghost" onClick={() => setStatus("draft")} disabled={!!busy}>
               Back to draft
+            </Button>
+            <Button type="button" variant="ghost" onClick={stopLinks} disabled={!!busy}>
+              {busy === "stop-links" ? "Stopping…" : "Stop sent links"}
             </Button>
           </>
         ) : null}

@@ -8,7 +8,7 @@ import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
 import { preparedFor } from "../prepared";
 import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "@/lib/errors";
-import { assert, canCreateForCustomer, canReadOwned, canWriteOwned, isShopStaff, type Actor } from "../policy";
+import { assert, canCreateForCustomer, canReadOwned, canSeeCustomer, canWriteOwned, isShopStaff, type Actor } from "../policy";
 import { combinationRevisions, combinations, users, type CombinationRow } from "../schema";
 
 /** Fields a person edits besides the spec. */
@@ -81,7 +81,9 @@ function buildListQuery(db: DbOrTx, shape: ListShape, key: string) {
   if (shape.scope === "demo") conds.push(eq(combinations.isDemo, true));
   if (shape.search) {
     const like = sql.placeholder("like");
-    conds.push(or(ilike(combinations.name, like), ilike(combinations.customerName, like), ilike(combinations.customerContact, like)));
+    // Customer fields are searched only where the searcher may see them (else a match would tell).
+    const customerMatch = or(ilike(combinations.customerName, like), ilike(combinations.customerContact, like));
+    conds.push(or(ilike(combinations.name, like), shape.visibility === "all" ? customerMatch : and(eq(combinations.ownerId, actorId), customerMatch)));
   }
   const where = and(...conds);
   const col = combinations[shape.sort];
@@ -130,7 +132,12 @@ export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuer
   };
   const rows = await prepared.page.execute(params);
   const total = rows.length ? rows[0].total : (await prepared.total.execute(params))[0].n;
-  return { items: rows.map(({ total: _t, ...r }) => r), total, page: q.page, pageSize: q.pageSize };
+  return { items: rows.map(({ total: _t, ...r }) => maskCustomer(actor, r)), total, page: q.page, pageSize: q.pageSize };
+}
+
+/** Hides the customer fields of a row the actor may read but whose customer is not theirs to know. */
+function maskCustomer<T extends { ownerId: string; customerName: string | null; customerContact: string | null }>(actor: Actor, row: T): T {
+  return canSeeCustomer(actor, row.ownerId) ? row : { ...row, customerName: null, customerContact: null };
 }
 
 async function findRow(db: DbOrTx, id: string, opts: { includeDeleted?: boolean } = {}) {
@@ -146,7 +153,7 @@ async function findRow(db: DbOrTx, id: string, opts: { includeDeleted?: boolean 
 export async function getCombination(db: DbOrTx, actor: Actor, id: string): Promise<CombinationRow & { spec: Combination }> {
   const row = await findRow(db, id);
   if (!row || !canReadOwned(actor, row.ownerId, { isDemo: row.isDemo })) throw new NotFoundError("No such combination.");
-  return row as CombinationRow & { spec: Combination };
+  return maskCustomer(actor, row) as CombinationRow & { spec: Combination };
 }
 
 async function getWritable(db: DbOrTx, actor: Actor, id: string, opts: { includeDeleted?: boolean } = {}) {

@@ -3,7 +3,7 @@
 // them (db/policy.ts canWriteRecommendations); a customer reaches one sheet only through a signed
 // link, which the route verifies before calling getSharedRecommendation. The spec is copied into
 // the sheet so later edits to the combination never change what a customer was sent.
-import { and, count, desc, eq, ilike, or, type SQL } from "drizzle-orm";
+import { and, count, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
@@ -180,5 +180,25 @@ export async function recordSendFailure(db: DbOrTx, actor: Actor, id: string, me
     .set({ lastError: message.slice(0, 500), updatedAt: new Date() })
     .where(eq(recommendations.id, id))
     .returning();
+  return row;
+}
+
+/**
+ * The outbox's report on a sheet's e-mail (no actor: the mail sender reports what happened to a
+ * send that a permitted user started). Success marks it sent; a failure keeps the status and the error.
+ */
+export async function settleRecommendationMail(db: DbOrTx, id: string, error: string | null, at = new Date()) {
+  const set = error === null ? { status: "sent" as const, sentAt: at, lastError: null, updatedAt: at } : { lastError: error.slice(0, 500), updatedAt: at };
+  await db.update(recommendations).set(set).where(eq(recommendations.id, id));
+}
+
+/** Stops every share link sent so far for a sheet (its share version moves on); a new send makes a new link. */
+export async function revokeShareLinks(db: DbOrTx, actor: Actor, id: string) {
+  await getRecommendation(db, actor, id);
+  const [row] = await db
+    .update(recommendations)
+    .set({ shareVersion: sql`${recommendations.shareVersion} + 1`, updatedAt: new Date() })
+    .where(eq(recommendations.id, id))
+    .returning({ shareVersion: recommendations.shareVersion });
   return row;
 }

@@ -1,7 +1,10 @@
 // Rules of a lesson's records, shared by the REST API, the server actions and the forms.
 import { z } from "zod";
 import { combinationSchema, type Combination } from "@/calc";
-import { text } from "@/lib/validation/text";
+import { plainText } from "@/lib/validation/text";
+
+// Multi-line: notes keep their line breaks; names refuse control and direction-override characters alike.
+const text = (label: string, max: number) => plainText(label, max, { multiline: true });
 
 
 /** Chart series a step may show. */

@@ -1,10 +1,12 @@
 // A recommendation sheet's rules without the database: the zod schemas of what a person fills
 // in (shared by the form in the browser and the API) and the statuses.
 import { z } from "zod";
-import { text } from "@/lib/validation/text";
+import { plainText } from "@/lib/validation/text";
 import { pulleyDiameterSchema } from "@/calc";
 import { moneySchema, partNumberSchema } from "@/lib/shelf/rules";
 
+// Multi-line: notes keep their line breaks; names refuse control and direction-override characters alike.
+const text = (label: string, max: number) => plainText(label, max, { multiline: true });
 
 export const MAX_PART_LINES = 40;
 

@@ -4,7 +4,8 @@
 // in `session.userId`. Call it before importing the handlers, which the tests import dynamically.
 import { vi } from "vitest";
 
-export type MockSession = { db: unknown; userId: string | null };
+/** `sv`: the session version the cookie was made with (none, as in cookies from before versions, when unset). */
+export type MockSession = { db: unknown; userId: string | null; sv?: number };
 
 export function mockSession(): MockSession {
   const session: MockSession = { db: undefined, userId: null };
@@ -23,7 +24,7 @@ export function mockSession(): MockSession {
     }),
     headers: async () => new Headers(),
   }));
-  vi.doMock("next-auth/jwt", () => ({ decode: async () => (session.userId ? { sub: session.userId } : null) }));
+  vi.doMock("next-auth/jwt", () => ({ decode: async () => (session.userId ? { sub: session.userId, ...(session.sv === undefined ? {} : { sv: session.sv }) } : null) }));
   vi.doMock("next/cache", () => ({ revalidatePath: () => {}, revalidateTag: () => {} }));
   return session;
 }

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/app/_lib/session";
+import { SignOutEverywhere } from "./sign-out-everywhere";
 import { UnitsForm } from "./units-form";
 
 export const metadata: Metadata = { title: "Settings" };
@@ -18,6 +19,7 @@ export default async function SettingsPage() {
         <dd>{user.role}</dd>
       </dl>
       <UnitsForm current={user.unitSystem} />
+      <SignOutEverywhere />
     </div>
   );
 }

@@ -5,6 +5,15 @@ import { loadByToken } from "@/app/_lib/recommendation-load";
 import { PrintButton } from "@/components/recommendation/print-button";
 import { SheetView } from "@/components/recommendation/sheet-view";
 
+/** A token with a broken %-escape is simply not a token (refused below), never an error. */
+function safeDecode(s: string): string {
+  try {
+    return decodeURIComponent(s);
+  } catch {
+    return s;
+  }
+}
+
 export const metadata: Metadata = { title: "Your recommendation", robots: { index: false, follow: false } };
 
 type Props = { params: Promise<{ token: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -12,7 +21,7 @@ type Props = { params: Promise<{ token: string }>; searchParams: Promise<Record<
 /** A customer's read-only view of one sheet, opened from the e-mailed link; no account needed. */
 export default async function SharedSheetPage({ params, searchParams }: Props) {
   const [{ token }, sp] = await Promise.all([params, searchParams]);
-  const loaded = await loadByToken(decodeURIComponent(token), sp.units);
+  const loaded = await loadByToken(safeDecode(token), sp.units);
   if (!loaded.ok) return <LinkRefused reason={loaded.reason} />;
   const other = loaded.unitSystem === "metric" ? "imperial" : "metric";
   return (

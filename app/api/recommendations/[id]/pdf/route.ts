@@ -21,7 +21,7 @@ export const GET = route(async (req, { params }: Ctx) => {
   const rec = await getRecommendation(getDb(), actor, id);
   const units = (await getCurrentUser())?.unitSystem ?? "imperial";
   const paper = parseQuery(req, querySchema).paper ?? (units === "metric" ? "a4" : "letter");
-  const { token } = makeShareToken(rec.id, PRINT_TOKEN_TTL_SECONDS);
+  const { token } = makeShareToken(rec.id, rec.shareVersion, PRINT_TOKEN_TTL_SECONDS);
   let pdf: Buffer;
   try {
     pdf = await renderPdf(appUrl(`/recommendations/${rec.id}/print?t=${encodeURIComponent(token)}&units=${units}`), paper);
