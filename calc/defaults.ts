@@ -64,11 +64,11 @@ export const FUEL_DEMO_DEFAULTS = {
   evaporatedBeforeBlower: 0,
 } as const;
 
-/** DEMO combination: a generic ~5.0 L V8 under a generic Roots blower, sea level, 25 °C (fresh object, SI). */
+/** DEMO combination: a generic ~4.6 L V8 under a generic Roots blower, sea level, 25 °C (fresh object, SI). */
 export function exampleCombination(): Combination {
   return {
     engine: {
-      displacement: 0.005,
+      displacement: 0.0046,
       cylinders: 8,
       veCurve: [
         { rpm: 1500, ve: 0.72 },

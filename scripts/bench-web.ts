@@ -12,11 +12,11 @@ const server = await serveThrowaway({ distDir: ".next-bench", build: !args.inclu
 const browser = await launchBrowser();
 try {
   const cookie = await signInCookie(server.url, "tuner@example.com");
-  const list = (await (await fetch(`${server.url}/api/combinations?search=Small-block&pageSize=5`, { headers: { cookie } })).json()) as {
+  const list = (await (await fetch(`${server.url}/api/combinations?search=Work%20truck&pageSize=5`, { headers: { cookie } })).json()) as {
     items: { id: string; name: string }[];
   };
-  const demo = list.items.find((c) => c.name.startsWith("Small-block"));
-  if (!demo) throw new Error("the demo small-block combination was not found");
+  const demo = list.items.find((c) => c.name.startsWith("Work truck"));
+  if (!demo) throw new Error("the demo work truck combination was not found");
   const routes = [
     "/",
     "/combinations",

@@ -33,7 +33,7 @@ const variants: [string, (c: Combination) => Combination][] = [
 ];
 
 const engines: [string, Combination][] = [
-  ["demo 5 L V8, 1.6 L Roots, no intercooler", exampleCombination()],
+  ["demo 4.6 L V8, 1.6 L Roots, no intercooler", exampleCombination()],
   ["same V8, 1.2 L twin-screw, no intercooler", { ...exampleTwinScrewCombination(), intercooler: null }],
   ["same V8, 1.2 L twin-screw, intercooled", exampleTwinScrewCombination()],
 ];

@@ -1,10 +1,14 @@
-// Writes the demo's synthetic log (db/seed/datalogs.ts) to public/samples/demo-datalog.csv, so a
-// person can try the upload with a file that matches the demo small-block. Run: npx tsx scripts/write-demo-datalog.ts
+// Writes the demo's synthetic logs (db/seed/datalogs.ts) to public/samples/, so a person can try
+// the upload and the calibration with the files the demo work truck's logs were seeded from.
+// Run after a change to the model: npx tsx scripts/write-demo-datalog.ts
 import fs from "node:fs";
 import path from "node:path";
-import { demoDatalogCsv } from "../db/seed/datalogs";
+import { DEMO_DATALOGS, demoLogCsv } from "../db/seed/datalogs";
 
-const out = path.join(import.meta.dirname, "..", "public", "samples", "demo-datalog.csv");
-fs.mkdirSync(path.dirname(out), { recursive: true });
-fs.writeFileSync(out, demoDatalogCsv());
-console.log(`wrote ${path.relative(process.cwd(), out)}`);
+const dir = path.join(import.meta.dirname, "..", "public", "samples");
+fs.mkdirSync(dir, { recursive: true });
+for (const log of DEMO_DATALOGS) {
+  const out = path.join(dir, log.fileName);
+  fs.writeFileSync(out, demoLogCsv(log));
+  console.log(`wrote ${path.relative(process.cwd(), out)}`);
+}

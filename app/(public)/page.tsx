@@ -10,8 +10,8 @@ export default async function HomePage() {
         <p className="max-w-2xl text-lg text-muted">
           A Roots or twin-screw blower&apos;s boost is not a setting: it is what the blower pushes against what the
           engine swallows. Pulleywright predicts boost, blower speed, charge temperature, drive power and fuel from the
-          engine, the blower and the two pulleys, finds the pulley for a target boost, and shows what a head, cam or
-          pulley change does.
+          engine, the blower and the two pulleys, finds the pulley for a target boost, and shows what a change of
+          cam, intercooler, altitude or pulley does before any part is ordered.
         </p>
         <div className="flex gap-3">
           {user ? (
@@ -37,7 +37,7 @@ export default async function HomePage() {
         {[
           ["Planner", "Edit a combination and watch boost, power and torque against engine speed redraw as you go."],
           ["Pulley ladder and finder", "Every candidate blower pulley with boost, blower speed against its limit, charge temperature and warnings; or the exact size for a target boost."],
-          ["Side by side", "Heads and cam against a smaller pulley: better breathing lowers boost, a smaller pulley raises it everywhere."],
+          ["Side by side", "Two combinations or two revisions on one chart, with the difference at the speeds you pick and the reason boost moved."],
           ["Datalogs", "Upload measured boost, compare it with the prediction and calibrate the engine's real volumetric efficiency."],
           ["Recommendation sheet", "Turn a customer's engine into a printed or e-mailed recommendation with parts, prices and cautions."],
           ["Lessons", "An instructor's ordered comparisons for the classroom, with a what-if slider."],

@@ -31,7 +31,7 @@ export function NewCombinationForm({ templates, units, staff, createAction }: Ne
 
   return (
     <form action={action} className="flex flex-col gap-5" noValidate>
-      <Field label="Name" name="name" required maxLength={120} placeholder="e.g. Weekend small-block" errors={fe.name} autoComplete="off" {...bind("name")} />
+      <Field label="Name" name="name" required maxLength={120} placeholder="e.g. Tow truck, 3.2 in pulley" errors={fe.name} autoComplete="off" {...bind("name")} />
 
       <fieldset className="flex flex-col gap-2" aria-describedby={fe.template ? "template-error" : undefined}>
         <legend className="mb-1 text-sm font-medium">Starting point</legend>

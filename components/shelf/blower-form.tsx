@@ -43,7 +43,7 @@ export function BlowerForm({ system, row, onDone, onCancel }: Props) {
 
   return (
     <ShelfFormFrame noun="blower" row={row} onSubmit={submit} onCancel={onCancel} isSubmitting={isSubmitting} rootError={errors.root?.message}>
-      <Field label="Part number" {...form.register("partNumber")} errors={err("partNumber")} placeholder="PW-BL-R190" />
+      <Field label="Part number" {...form.register("partNumber")} errors={err("partNumber")} placeholder="PW-BL-R160" />
       <Field label="Name" {...form.register("name")} errors={err("name")} placeholder="Roots 1.9 L/rev" />
       <FormSelect id="f-kind" label="Kind" field={form.register("kind")} error={err("kind")} options={[["roots", "Roots"], ["twin-screw", "Twin-screw"]]} />
       <Field label="Displacement" unit={unit} inputMode="decimal" {...form.register("displacementPerRev")} errors={err("displacementPerRev")} />

@@ -1,17 +1,45 @@
 import { and, eq } from "drizzle-orm";
 import type { Db } from "../connect";
 import { toActor } from "../repo/users";
+import type { Actor } from "../policy";
 import { createCombination, saveCombination } from "../repo/combinations";
 import { combinations, users } from "../schema";
-import { bigBlockTwinScrew, fourCylinderRoots, smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import type { CombinationInput } from "@/calc";
+import {
+  bigInchIntercooled,
+  bigInchLargerInjectors,
+  bigInchTwinScrew,
+  roadCarFour,
+  roadCarFourAtAltitude,
+  vintageV8Cam,
+  vintageV8DrawThrough,
+  workTruckV6,
+  workTruckV6SmallerPulley,
+} from "@/lib/combinations/demo-specs";
 import type { DemoUsers } from "./index";
 
-/** Ids of the demo combinations, by role in the scenario. */
-export type DemoCombinations = { smallBlock: string; bigBlock: string; fourCylinder: string; memberCar: string };
+/** Names of the demo combinations, which tests and the README refer to. */
+export const DEMO_COMBINATION_NAMES = {
+  workTruck: "Work truck V6 4.3 L, Roots",
+  bigInch: "Big-inch V8 7.4 L, twin-screw",
+  vintage: "Vintage V8 5.7 L, draw-through Roots",
+  memberCar: "My road car, 2.4 L four",
+} as const;
 
-async function ensure(db: Db, ownerId: string, name: string, make: () => Promise<{ id: string }>) {
-  const [existing] = await db.select({ id: combinations.id }).from(combinations).where(and(eq(combinations.ownerId, ownerId), eq(combinations.name, name)));
-  return existing ? existing.id : (await make()).id;
+/** Ids of the demo combinations, by role in the scenario. */
+export type DemoCombinations = Record<keyof typeof DEMO_COMBINATION_NAMES, string>;
+
+type Story = { customerName?: string; customerContact?: string; revisions: readonly [CombinationInput, string][] };
+
+/** The shop's (or member's) combination with its history, added once by owner and name. */
+async function ensure(db: Db, owner: Actor, name: string, story: Story, isDemo: boolean) {
+  const [existing] = await db.select({ id: combinations.id }).from(combinations).where(and(eq(combinations.ownerId, owner.id), eq(combinations.name, name)));
+  if (existing) return existing.id;
+  const [[first, firstNote], ...rest] = story.revisions;
+  const c = await createCombination(db, owner, { name, spec: first, customerName: story.customerName, customerContact: story.customerContact, note: firstNote }, { isDemo });
+  let revision = 1;
+  for (const [spec, note] of rest) await saveCombination(db, owner, c.id, { spec, baseRevision: revision++, note });
+  return c.id;
 }
 
 export async function seedCombinations(db: Db, people: DemoUsers): Promise<DemoCombinations> {
@@ -19,27 +47,42 @@ export async function seedCombinations(db: Db, people: DemoUsers): Promise<DemoC
   const [memberRow] = await db.select().from(users).where(eq(users.id, people.member.id));
   const tuner = toActor(tunerRow);
   const member = toActor(memberRow);
+  const N = DEMO_COMBINATION_NAMES;
 
-  // Three revisions: baseline, heads and cam (boost falls), smaller pulley (boost rises again).
-  const smallBlock = await ensure(db, tuner.id, "Small-block 5.0 L street build", async () => {
-    const c = await createCombination(
-      db,
-      tuner,
-      { name: "Small-block 5.0 L street build", spec: smallBlockBaseline, customerName: "Jordan Example", customerContact: "jordan@example.com", note: "Baseline as it came in" },
-      { isDemo: true },
-    );
-    await saveCombination(db, tuner, c.id, { spec: smallBlockHeadsCam, baseRevision: 1, note: "Ported heads and bigger cam" });
-    await saveCombination(db, tuner, c.id, { spec: smallBlockSmallerPulley, baseRevision: 2, note: "Smaller blower pulley" });
-    return c;
-  });
-  const bigBlock = await ensure(db, tuner.id, "Big V8 7.0 L twin-screw, intercooled", () =>
-    createCombination(db, tuner, { name: "Big V8 7.0 L twin-screw, intercooled", spec: bigBlockTwinScrew, note: "Shop example" }, { isDemo: true }),
-  );
-  const fourCylinder = await ensure(db, tuner.id, "Four-cylinder 2.0 L Roots", () =>
-    createCombination(db, tuner, { name: "Four-cylinder 2.0 L Roots", spec: fourCylinderRoots, note: "Shop example" }, { isDemo: true }),
-  );
-  const memberCar = await ensure(db, member.id, "My weekend small-block", () =>
-    createCombination(db, member, { name: "My weekend small-block", spec: smallBlockBaseline, note: "As bought" }),
-  );
-  return { smallBlock, bigBlock, fourCylinder, memberCar };
+  // A datalog showed less boost than the catalogue promised; the smaller pulley wins it back.
+  const workTruck = await ensure(db, tuner, N.workTruck, {
+    customerName: "Riley Example",
+    customerContact: "riley@example.com",
+    revisions: [
+      [workTruckV6, "As it came in: 3.4 in blower pulley, catalogue blower figures"],
+      [workTruckV6SmallerPulley, "3.1 in blower pulley after the first dyno log read low"],
+    ],
+  }, true);
+  // Hot charge and high injector duty: an intercooler first, then larger injectors.
+  const bigInch = await ensure(db, tuner, N.bigInch, {
+    customerName: "Casey Example",
+    customerContact: "casey@example.com",
+    revisions: [
+      [bigInchTwinScrew, "Twin-screw without an intercooler"],
+      [bigInchIntercooled, "Air-to-water intercooler added"],
+      [bigInchLargerInjectors, "Larger injectors for the top end"],
+    ],
+  }, true);
+  // Same blower and pulleys, a cam that breathes better from the middle up.
+  const vintage = await ensure(db, tuner, N.vintage, {
+    customerName: "Avery Example",
+    customerContact: "avery@example.com",
+    revisions: [
+      [vintageV8DrawThrough, "As restored, original mild cam"],
+      [vintageV8Cam, "Cam-only change, same blower and pulleys"],
+    ],
+  }, true);
+  // The member's own car, before and after moving to 1,600 m.
+  const memberCar = await ensure(db, member, N.memberCar, {
+    revisions: [
+      [roadCarFour, "At sea level, as bought"],
+      [roadCarFourAtAltitude, "Moved to 1,600 m"],
+    ],
+  }, false);
+  return { workTruck, bigInch, vintage, memberCar };
 }

@@ -1,14 +1,18 @@
-// The demo's synthetic datalog: a wide-open-throttle pull of the "Small-block 5.0 L street build",
-// generated with calc from an invented "true" VE curve a few percent off the stored one, plus
-// seeded noise, a few part-throttle rows and two spikes. Nothing here comes from a real test.
-// The same text ships as public/samples/demo-datalog.csv (scripts/write-demo-datalog.ts).
+// The demo's synthetic datalogs: two wide-open-throttle pulls of the work truck, one at the 3.4 in
+// blower pulley it came in with and one at the 3.1 in pulley fitted after the first log. Both are
+// generated with calc from a STATED invented truth that differs from the catalogue figures the
+// combination holds (DEMO_TRUTH below: a blower that slips more than its data sheet says, and an
+// engine that breathes a few percent better), plus seeded noise, a few part-throttle rows and two
+// spikes. Calibrating from the two logs recovers that truth (tests/lib/datalogs/demo-logs.test.ts).
+// Nothing here comes from a real test. The same texts ship in public/samples/
+// (scripts/write-demo-datalog.ts).
 import { and, eq } from "drizzle-orm";
-import { combinationSchema, paToPsi, solvePoint, veAt, type CombinationInput, type VePoint } from "@/calc";
+import { combinationSchema, paToPsi, solvePoint, veAt, type Combination, type CombinationInput, type VePoint } from "@/calc";
 import type { Db } from "../connect";
 import { createDatalog } from "../repo/datalogs";
 import { combinations, datalogs } from "../schema";
 import type { DemoCombinations } from "./combinations";
-import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import { workTruckV6, workTruckV6SmallerPulley } from "@/lib/combinations/demo-specs";
 import type { DemoUsers } from "./index";
 
 /** Deterministic PRNG (mulberry32): the same seed gives the same log on every machine. */
@@ -31,6 +35,8 @@ function gaussian(rand: () => number): () => number {
 export interface SynthOptions {
   /** The engine's "true" VE curve, used instead of the spec's to make the measurements. */
   trueVeCurve: readonly VePoint[];
+  /** The blower's "true" volumetric efficiency at its reference point (its slip), instead of the spec's. */
+  trueBlowerVolumetricEfficiency?: number;
   fromRpm?: number;
   toRpm?: number;
   /** Wide-open-throttle rows in the sweep. */
@@ -52,14 +58,15 @@ export interface SynthOptions {
 
 /**
  * A CSV log (comma-separated, header row, psi gauge, °F) that calc predicts for `spec` with the
- * engine breathing like `trueVeCurve`: Time (s), Engine speed (rpm), Throttle (%), Boost (psi),
+ * engine breathing like `trueVeCurve` (and the blower slipping as `trueBlowerVolumetricEfficiency`): Time (s), Engine speed (rpm), Throttle (%), Boost (psi),
  * and optionally Intake air (°F).
  */
 export function synthesizeLogCsv(spec: CombinationInput, o: SynthOptions): string {
   const c = combinationSchema.parse(spec);
-  const truth = { ...c, engine: { ...c.engine, veCurve: [...o.trueVeCurve] } };
+  const blower = { ...c.blower, volumetricEfficiencyRef: o.trueBlowerVolumetricEfficiency ?? c.blower.volumetricEfficiencyRef };
+  const truth: Combination = { ...c, blower, engine: { ...c.engine, veCurve: [...o.trueVeCurve] } };
   const from = o.fromRpm ?? 2000;
-  const to = o.toRpm ?? 6000;
+  const to = o.toRpm ?? Math.min(6000, c.engine.redlineRpm);
   const n = o.samples ?? 401;
   const rand = seededRandom(o.seed ?? 7);
   const normal = gaussian(rand);
@@ -91,27 +98,59 @@ export function synthesizeLogCsv(spec: CombinationInput, o: SynthOptions): strin
   return rows.join("\n") + "\n";
 }
 
-/** The invented "true" breathing of the demo small-block: a few percent off the stored curve. */
+/**
+ * The stated invented truth behind the demo logs. The combination holds the catalogue figures;
+ * the truck's real blower slips more (volumetric efficiency 0.74 at its reference point against
+ * the data sheet's 0.82), and its engine breathes a few percent better than the VE curve typed in.
+ */
+export const DEMO_TRUTH = {
+  blowerVolumetricEfficiency: 0.74,
+  /** Relative VE offsets, one per point of the stored curve. */
+  veOffsets: [0.02, 0.03, 0.04, 0.04, 0.03],
+} as const;
+
+/** The truck's "true" VE curve: the stored one moved by DEMO_TRUTH.veOffsets. */
 export function demoTrueVeCurve(): VePoint[] {
-  const stored = combinationSchema.parse(smallBlockSmallerPulley).engine.veCurve;
-  const off = [-0.04, -0.03, 0.02, 0.04, 0.05, 0.03];
-  return stored.map((p, i) => ({ rpm: p.rpm, ve: Math.round(p.ve * (1 + (off[i] ?? 0)) * 1000) / 1000 }));
+  const stored = combinationSchema.parse(workTruckV6).engine.veCurve;
+  return stored.map((p, i) => ({ rpm: p.rpm, ve: Math.round(p.ve * (1 + (DEMO_TRUTH.veOffsets[i] ?? 0)) * 1000) / 1000 }));
 }
 
-export const DEMO_DATALOG_NAME = "Dyno pull, 3.1 in pulley (synthetic demo)";
-export const DEMO_DATALOG_FILE = "demo-datalog.csv";
+/** The truck as it really is, at a blower pulley diameter (m): the truth the logs were made from. */
+export function demoTruth(blowerPulleyDiameter: number): Combination {
+  const c = combinationSchema.parse(workTruckV6);
+  return {
+    ...c,
+    engine: { ...c.engine, veCurve: demoTrueVeCurve() },
+    blower: { ...c.blower, volumetricEfficiencyRef: DEMO_TRUTH.blowerVolumetricEfficiency },
+    drive: { ...c.drive, blowerPulleyDiameter },
+  };
+}
 
-/** The demo log's text: also written to public/samples/demo-datalog.csv. */
-export function demoDatalogCsv(): string {
-  return synthesizeLogCsv(smallBlockSmallerPulley, {
+/** The two demo logs: the pull before the pulley swap and the one after. */
+export const DEMO_DATALOGS = [
+  { name: "Dyno pull, 3.4 in pulley (synthetic demo)", fileName: "demo-datalog.csv", spec: workTruckV6, seed: 4301 },
+  { name: "Dyno pull, 3.0 in pulley (synthetic demo)", fileName: "demo-datalog-3.0in.csv", spec: workTruckV6SmallerPulley, seed: 4302 },
+] as const;
+
+/** The first log's name (the one before the pulley swap). */
+export const DEMO_DATALOG_NAME = DEMO_DATALOGS[0].name;
+
+/** A demo log's text, as stored by the seed and written to public/samples/. */
+export function demoLogCsv(log: (typeof DEMO_DATALOGS)[number]): string {
+  return synthesizeLogCsv(log.spec, {
     trueVeCurve: demoTrueVeCurve(),
+    trueBlowerVolumetricEfficiency: DEMO_TRUTH.blowerVolumetricEfficiency,
+    fromRpm: 1800,
     noisePsi: 0.15,
     noiseF: 1.5,
-    seed: 20240611,
+    seed: log.seed,
     partThrottleRows: 8,
     outlierRows: [57, 263],
   });
 }
+
+/** The first demo log's text (public/samples/demo-datalog.csv). */
+export const demoDatalogCsv = () => demoLogCsv(DEMO_DATALOGS[0]);
 
 /** The columns of the demo file, as the upload form's mapping step would set them. */
 export const DEMO_DATALOG_MAPPING = {
@@ -129,20 +168,22 @@ export const DEMO_DATALOG_MAPPING = {
 } as const;
 
 export async function seedDatalogs(db: Db, people: DemoUsers, combos: DemoCombinations) {
-  const [combo] = await db.select({ id: combinations.id }).from(combinations).where(eq(combinations.id, combos.smallBlock));
+  const [combo] = await db.select({ id: combinations.id }).from(combinations).where(eq(combinations.id, combos.workTruck));
   if (!combo) return;
-  const [existing] = await db
-    .select({ id: datalogs.id })
-    .from(datalogs)
-    .where(and(eq(datalogs.combinationId, combo.id), eq(datalogs.name, DEMO_DATALOG_NAME)));
-  if (existing) return;
-  await createDatalog(db, people.tuner, {
-    combinationId: combo.id,
-    name: DEMO_DATALOG_NAME,
-    fileName: DEMO_DATALOG_FILE,
-    text: demoDatalogCsv(),
-    mapping: { ...DEMO_DATALOG_MAPPING },
-  });
+  for (const log of DEMO_DATALOGS) {
+    const [existing] = await db
+      .select({ id: datalogs.id })
+      .from(datalogs)
+      .where(and(eq(datalogs.combinationId, combo.id), eq(datalogs.name, log.name)));
+    if (existing) continue;
+    await createDatalog(db, people.tuner, {
+      combinationId: combo.id,
+      name: log.name,
+      fileName: log.fileName,
+      text: demoLogCsv(log),
+      mapping: { ...DEMO_DATALOG_MAPPING },
+    });
+  }
 }
 
 /** VE of the demo's true curve at an engine speed (for tests and the sample's documentation). */

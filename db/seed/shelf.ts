@@ -11,10 +11,10 @@ const litre = 0.001;
 
 /** Blowers matching the demo combinations (lib/combinations/demo-specs.ts), plus one more for the list. */
 export const DEMO_BLOWERS = [
-  { partNumber: "PW-BL-R190", name: "Roots 1.9 L/rev", kind: "roots", displacementPerRev: 1.9 * litre, builtInVolumeRatio: 1, maxRpm: 14_000, volumetricEfficiencyRef: 0.82, referenceRpm: 10_000, internalEfficiency: 0.85, mechanicalEfficiency: 0.95, price: "2890.00", stock: 2, notes: "Demo blower: generic Roots, for mid-size V8 street builds." },
-  { partNumber: "PW-BL-T290", name: "Twin-screw 2.9 L/rev", kind: "twin-screw", displacementPerRev: 2.9 * litre, builtInVolumeRatio: 1.6, maxRpm: 16_000, volumetricEfficiencyRef: 0.92, referenceRpm: 10_000, internalEfficiency: 0.88, mechanicalEfficiency: 0.95, price: "4650.00", stock: 1, notes: "Demo blower: generic twin-screw; pair it with an intercooler." },
-  { partNumber: "PW-BL-R090", name: "Roots 0.9 L/rev", kind: "roots", displacementPerRev: 0.9 * litre, builtInVolumeRatio: 1, maxRpm: 16_000, volumetricEfficiencyRef: 0.8, referenceRpm: 11_000, internalEfficiency: 0.85, mechanicalEfficiency: 0.95, price: "1475.00", stock: 0, notes: "Demo blower: small generic Roots for four-cylinder engines. On order." },
-  { partNumber: "PW-BL-T160", name: "Twin-screw 1.6 L/rev", kind: "twin-screw", displacementPerRev: 1.6 * litre, builtInVolumeRatio: 1.5, maxRpm: 18_000, volumetricEfficiencyRef: 0.9, referenceRpm: 12_000, internalEfficiency: 0.86, mechanicalEfficiency: 0.95, price: "3120.00", stock: 3, notes: "Demo blower: generic twin-screw for small V6 and four-cylinder engines." },
+  { partNumber: "PW-BL-R160", name: "Roots 1.6 L/rev", kind: "roots", displacementPerRev: 1.6 * litre, builtInVolumeRatio: 1, maxRpm: 14_000, volumetricEfficiencyRef: 0.82, referenceRpm: 10_000, internalEfficiency: 0.85, mechanicalEfficiency: 0.95, price: "2640.00", stock: 2, notes: "Demo blower: generic Roots for V6 and small V8 trucks. Data-sheet slip; one demo truck's logs show more." },
+  { partNumber: "PW-BL-R230", name: "Roots 2.3 L/rev", kind: "roots", displacementPerRev: 2.3 * litre, builtInVolumeRatio: 1, maxRpm: 13_000, volumetricEfficiencyRef: 0.8, referenceRpm: 9_000, internalEfficiency: 0.85, mechanicalEfficiency: 0.95, price: "3180.00", stock: 1, notes: "Demo blower: generic Roots, carburettor on top (draw-through) or throttle body ahead." },
+  { partNumber: "PW-BL-T290", name: "Twin-screw 2.9 L/rev", kind: "twin-screw", displacementPerRev: 2.9 * litre, builtInVolumeRatio: 1.6, maxRpm: 16_000, volumetricEfficiencyRef: 0.92, referenceRpm: 10_000, internalEfficiency: 0.88, mechanicalEfficiency: 0.95, price: "4650.00", stock: 1, notes: "Demo blower: generic twin-screw for big-inch engines; pair it with an intercooler." },
+  { partNumber: "PW-BL-T120", name: "Twin-screw 1.2 L/rev", kind: "twin-screw", displacementPerRev: 1.2 * litre, builtInVolumeRatio: 1.5, maxRpm: 18_000, volumetricEfficiencyRef: 0.9, referenceRpm: 12_000, internalEfficiency: 0.86, mechanicalEfficiency: 0.95, price: "2980.00", stock: 0, notes: "Demo blower: generic twin-screw for four-cylinder road cars. On order." },
 ] as const;
 
 /** PW-BP-0340-8: position letter, diameter in hundredths of an inch, rib count. */
@@ -47,6 +47,7 @@ export function demoPulleys() {
   sizes(2.6, 4.0, 0.2).forEach((d, i) => rows.push(blowerPulley(d, 6, i)));
   const crank = [
     { d: 5.5, ribs: 8, price: "189.00", stock: 2 },
+    { d: 6.0, ribs: 8, price: "199.00", stock: 2 },
     { d: 6.5, ribs: 8, price: "215.00", stock: 3 },
     { d: 7.0, ribs: 8, price: "229.00", stock: 0 },
     { d: 8.0, ribs: 8, price: "259.00", stock: 1 },

@@ -1,32 +1,40 @@
-// Invented demo engines and blowers: generic shapes for the demo only, not taken from any test
-// or product. Values are SI like calc/ (m, m³, Pa, K, kg/s, kg/J).
+// Invented demo engines and blowers for the demo shop's own storylines: generic shapes, not taken
+// from any test or product. Values are SI like calc/ (m, m³, Pa, K, kg/s, kg/J).
+//
+// - a 4.3 L V6 work truck on a Roots blower: a datalog, then a smaller blower pulley;
+// - a 7.4 L V8 on a twin-screw: an intercooler added, then larger injectors;
+// - a 5.7 L vintage V8 on a draw-through Roots under a carburettor: a cam-only change;
+// - a 2.4 L four-cylinder road car on a small twin-screw: its owner moves to altitude.
 import type { CombinationInput } from "@/calc";
 
 const inch = 0.0254;
 const litre = 0.001;
 /** 0.5 lb/(hp·h) in kg/J: 0.45359237 kg / (745.6999 W · 3600 s). */
 const bsfcHalf = (0.5 * 0.45359237) / (745.6999 * 3600);
+/** lb/h of fuel in kg/s. */
+const lbPerHour = (x: number) => (x * 0.45359237) / 3600;
+/** cfm in m³/s. */
+const cfm = (x: number) => x * 0.00047194745;
 
 const seaLevel = { pressure: 101_325, temperature: 298.15, inletLoss: 1_500 };
 
-/** A mild small-block V8 of about five litres under a generic Roots blower. */
-export const smallBlockBaseline: CombinationInput = {
+/** Work truck: a 4.3 L V6 under a 1.6 L Roots, as it came in (3.4 in blower pulley). */
+export const workTruckV6: CombinationInput = {
   engine: {
-    displacement: 5.0 * litre,
-    cylinders: 8,
-    redlineRpm: 6200,
+    displacement: 4.3 * litre,
+    cylinders: 6,
+    redlineRpm: 5200,
     veCurve: [
-      { rpm: 1500, ve: 0.78 },
-      { rpm: 2500, ve: 0.84 },
+      { rpm: 1500, ve: 0.8 },
+      { rpm: 2500, ve: 0.86 },
       { rpm: 3500, ve: 0.88 },
-      { rpm: 4500, ve: 0.9 },
-      { rpm: 5500, ve: 0.87 },
-      { rpm: 6200, ve: 0.82 },
+      { rpm: 4500, ve: 0.85 },
+      { rpm: 5200, ve: 0.8 },
     ],
   },
   blower: {
     kind: "roots",
-    displacementPerRev: 1.9 * litre,
+    displacementPerRev: 1.6 * litre,
     builtInVolumeRatio: 1,
     maxRpm: 14_000,
     volumetricEfficiencyRef: 0.82,
@@ -34,48 +42,30 @@ export const smallBlockBaseline: CombinationInput = {
     internalEfficiency: 0.85,
     mechanicalEfficiency: 0.95,
   },
-  drive: { crankPulleyDiameter: 6.5 * inch, blowerPulleyDiameter: 3.4 * inch, beltSlip: 0.02 },
+  drive: { crankPulleyDiameter: 6.0 * inch, blowerPulleyDiameter: 3.4 * inch, beltSlip: 0.02 },
   ambient: seaLevel,
   intercooler: null,
-  fuel: { afr: 11.8, bsfc: bsfcHalf * 1.1, injectorCount: 8, injectorFlow: (42 * 0.45359237) / 3600, maxDuty: 0.85, evaporatedBeforeBlower: 0 },
+  fuel: { afr: 11.8, bsfc: bsfcHalf * 1.1, injectorCount: 6, injectorFlow: lbPerHour(36), maxDuty: 0.85, evaporatedBeforeBlower: 0 },
 };
 
-/** The same engine after ported heads and a bigger cam: it breathes better at speed. */
-export const smallBlockHeadsCam: CombinationInput = {
-  ...smallBlockBaseline,
+/** The work truck after its datalog: a 3.0 in blower pulley to win back what the blower slips. */
+export const workTruckV6SmallerPulley: CombinationInput = {
+  ...workTruckV6,
+  drive: { ...workTruckV6.drive, blowerPulleyDiameter: 3.0 * inch },
+};
+
+/** Big-inch V8: 7.4 L under a 2.9 L twin-screw, first without an intercooler. */
+export const bigInchTwinScrew: CombinationInput = {
   engine: {
-    ...smallBlockBaseline.engine,
-    redlineRpm: 6500,
-    veCurve: [
-      { rpm: 1500, ve: 0.76 },
-      { rpm: 2500, ve: 0.85 },
-      { rpm: 3500, ve: 0.92 },
-      { rpm: 4500, ve: 0.97 },
-      { rpm: 5500, ve: 0.97 },
-      { rpm: 6500, ve: 0.92 },
-    ],
-  },
-};
-
-/** Heads and cam, then a smaller blower pulley to win back the boost. */
-export const smallBlockSmallerPulley: CombinationInput = {
-  ...smallBlockHeadsCam,
-  drive: { ...smallBlockHeadsCam.drive, blowerPulleyDiameter: 3.1 * inch },
-};
-
-/** A larger V8 of about seven litres under a generic twin-screw with an air-to-water intercooler. */
-export const bigBlockTwinScrew: CombinationInput = {
-  engine: {
-    displacement: 7.0 * litre,
+    displacement: 7.4 * litre,
     cylinders: 8,
-    redlineRpm: 6500,
+    redlineRpm: 6000,
     veCurve: [
       { rpm: 2000, ve: 0.82 },
       { rpm: 3000, ve: 0.88 },
-      { rpm: 4000, ve: 0.92 },
-      { rpm: 5000, ve: 0.93 },
-      { rpm: 6000, ve: 0.9 },
-      { rpm: 6500, ve: 0.86 },
+      { rpm: 4000, ve: 0.91 },
+      { rpm: 5000, ve: 0.9 },
+      { rpm: 6000, ve: 0.84 },
     ],
   },
   blower: {
@@ -88,38 +78,103 @@ export const bigBlockTwinScrew: CombinationInput = {
     internalEfficiency: 0.88,
     mechanicalEfficiency: 0.95,
   },
-  drive: { crankPulleyDiameter: 8.0 * inch, blowerPulleyDiameter: 3.8 * inch, beltSlip: 0.02 },
+  drive: { crankPulleyDiameter: 7.0 * inch, blowerPulleyDiameter: 3.8 * inch, beltSlip: 0.02 },
   ambient: seaLevel,
-  intercooler: { effectiveness: 0.7, pressureDrop: 7_000, coolantTemperature: 308.15 },
-  fuel: { afr: 11.5, bsfc: bsfcHalf * 1.1, injectorCount: 8, injectorFlow: (60 * 0.45359237) / 3600, maxDuty: 0.85, evaporatedBeforeBlower: 0 },
+  intercooler: null,
+  fuel: { afr: 11.5, bsfc: bsfcHalf * 1.1, injectorCount: 8, injectorFlow: lbPerHour(42), maxDuty: 0.85, evaporatedBeforeBlower: 0 },
 };
 
-/** A two-litre four-cylinder with a small generic Roots blower. */
-export const fourCylinderRoots: CombinationInput = {
+/** The big-inch V8 with an air-to-water intercooler added. */
+export const bigInchIntercooled: CombinationInput = {
+  ...bigInchTwinScrew,
+  intercooler: { effectiveness: 0.7, pressureDrop: 7_000, coolantTemperature: 308.15 },
+};
+
+/** The intercooled big-inch V8 on larger injectors. */
+export const bigInchLargerInjectors: CombinationInput = {
+  ...bigInchIntercooled,
+  fuel: { ...bigInchIntercooled.fuel, injectorFlow: lbPerHour(60) },
+};
+
+/** Vintage V8: 5.7 L with a 2.3 L Roots drawing through a carburettor, mild cam. */
+export const vintageV8DrawThrough: CombinationInput = {
   engine: {
-    displacement: 2.0 * litre,
-    cylinders: 4,
-    redlineRpm: 7200,
+    displacement: 5.7 * litre,
+    cylinders: 8,
+    redlineRpm: 5500,
     veCurve: [
-      { rpm: 2000, ve: 0.8 },
-      { rpm: 3500, ve: 0.88 },
-      { rpm: 5000, ve: 0.93 },
-      { rpm: 6500, ve: 0.9 },
-      { rpm: 7200, ve: 0.85 },
+      { rpm: 1500, ve: 0.8 },
+      { rpm: 2500, ve: 0.85 },
+      { rpm: 3500, ve: 0.86 },
+      { rpm: 4500, ve: 0.82 },
+      { rpm: 5500, ve: 0.76 },
     ],
   },
   blower: {
     kind: "roots",
-    displacementPerRev: 0.9 * litre,
+    displacementPerRev: 2.3 * litre,
     builtInVolumeRatio: 1,
-    maxRpm: 16_000,
+    maxRpm: 13_000,
     volumetricEfficiencyRef: 0.8,
-    referenceRpm: 11_000,
+    referenceRpm: 9_000,
     internalEfficiency: 0.85,
     mechanicalEfficiency: 0.95,
   },
-  drive: { crankPulleyDiameter: 5.5 * inch, blowerPulleyDiameter: 2.9 * inch, beltSlip: 0.02 },
-  ambient: { pressure: 98_000, temperature: 293.15, inletLoss: 1_000 },
+  drive: { crankPulleyDiameter: 7.0 * inch, blowerPulleyDiameter: 3.6 * inch, beltSlip: 0.02 },
+  ambient: { ...seaLevel, inletLoss: 0, inletRestriction: { ratedFlow: cfm(1000), ratingDepression: 5079 } },
   intercooler: null,
-  fuel: { afr: 12.0, bsfc: bsfcHalf, injectorCount: 4, injectorFlow: (30 * 0.45359237) / 3600, maxDuty: 0.85, evaporatedBeforeBlower: 0 },
+  fuel: { afr: 12.0, bsfc: bsfcHalf * 1.1, evaporatedBeforeBlower: 0.3, evaporatedInBlower: 0.5 },
+};
+
+/** The vintage V8 after a cam-only change: it breathes better from the middle up, same pulleys. */
+export const vintageV8Cam: CombinationInput = {
+  ...vintageV8DrawThrough,
+  engine: {
+    ...vintageV8DrawThrough.engine,
+    redlineRpm: 6000,
+    veCurve: [
+      { rpm: 1500, ve: 0.77 },
+      { rpm: 2500, ve: 0.84 },
+      { rpm: 3500, ve: 0.9 },
+      { rpm: 4500, ve: 0.92 },
+      { rpm: 5500, ve: 0.88 },
+      { rpm: 6000, ve: 0.84 },
+    ],
+  },
+};
+
+/** Road car: a 2.4 L four-cylinder under a 1.2 L twin-screw, at its owner's old home by the coast. */
+export const roadCarFour: CombinationInput = {
+  engine: {
+    displacement: 2.4 * litre,
+    cylinders: 4,
+    redlineRpm: 6800,
+    veCurve: [
+      { rpm: 2000, ve: 0.82 },
+      { rpm: 3500, ve: 0.9 },
+      { rpm: 5000, ve: 0.93 },
+      { rpm: 6000, ve: 0.9 },
+      { rpm: 6800, ve: 0.84 },
+    ],
+  },
+  blower: {
+    kind: "twin-screw",
+    displacementPerRev: 1.2 * litre,
+    builtInVolumeRatio: 1.5,
+    maxRpm: 18_000,
+    volumetricEfficiencyRef: 0.9,
+    referenceRpm: 12_000,
+    internalEfficiency: 0.86,
+    mechanicalEfficiency: 0.95,
+  },
+  drive: { crankPulleyDiameter: 5.5 * inch, blowerPulleyDiameter: 3.2 * inch, beltSlip: 0.02 },
+  ambient: { pressure: 101_325, temperature: 293.15, inletLoss: 1_000 },
+  intercooler: { effectiveness: 0.65, pressureDrop: 5_000, coolantTemperature: 308.15 },
+  fuel: { afr: 12.0, bsfc: bsfcHalf, injectorCount: 4, injectorFlow: lbPerHour(48), maxDuty: 0.85, evaporatedBeforeBlower: 0 },
+};
+
+/** The road car after the move to 1,600 m: 1,600 m standard atmosphere (ISO 2533), a cooler 15 °C day. */
+export const roadCarFourAtAltitude: CombinationInput = {
+  ...roadCarFour,
+  ambient: { pressure: 83_527, temperature: 288.15, inletLoss: 1_000 },
 };

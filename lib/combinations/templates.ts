@@ -3,14 +3,15 @@
 import type { CombinationInput, UnitSystem } from "@/calc";
 import { applyShape, VE_SHAPES } from "@/lib/planner/ve-shapes";
 import { withMainFigures, type MainFigures } from "./main-figures";
-import { bigBlockTwinScrew, fourCylinderRoots, smallBlockBaseline } from "@/lib/combinations/demo-specs";
+import { bigInchIntercooled, roadCarFour, vintageV8DrawThrough, workTruckV6 } from "@/lib/combinations/demo-specs";
 
-export type TemplateKey = "small-block-roots" | "big-v8-twin-screw" | "four-cylinder-roots";
+export type TemplateKey = "v6-roots" | "big-v8-twin-screw" | "vintage-v8-draw-through" | "four-cylinder-twin-screw";
 
 export const TEMPLATES: readonly { key: TemplateKey; label: string; spec: CombinationInput }[] = [
-  { key: "small-block-roots", label: "Small-block V8 ~5 L, Roots", spec: smallBlockBaseline },
-  { key: "big-v8-twin-screw", label: "Large V8 ~7 L, twin-screw", spec: bigBlockTwinScrew },
-  { key: "four-cylinder-roots", label: "Four-cylinder ~2 L, Roots", spec: fourCylinderRoots },
+  { key: "v6-roots", label: "V6 ~4.3 L, Roots", spec: workTruckV6 },
+  { key: "big-v8-twin-screw", label: "Big-inch V8 ~7.4 L, twin-screw, intercooled", spec: bigInchIntercooled },
+  { key: "vintage-v8-draw-through", label: "Vintage V8 ~5.7 L, Roots drawing through a carburettor", spec: vintageV8DrawThrough },
+  { key: "four-cylinder-twin-screw", label: "Four-cylinder ~2.4 L, twin-screw, intercooled", spec: roadCarFour },
 ];
 
 export const TEMPLATE_KEYS = TEMPLATES.map((t) => t.key) as [TemplateKey, ...TemplateKey[]];

@@ -1,14 +1,15 @@
-// Starting shapes for the VE table, from mild to wild. Invented, generic curves for a first
-// guess only (not measured on any engine): the tuner replaces them with their own figures.
+// Starting shapes for the VE table, named for what they look like: where the curve peaks (as a
+// share of redline) and how broad the peak is. Invented, generic curves for a first guess only
+// (not measured on any engine): the tuner replaces them with their own figures.
 
 /** A VE shape: points of (engine speed as a fraction of redline, VE as a fraction). */
 export type VeShape = { id: string; label: string; points: readonly (readonly [number, number])[] };
 
 export const VE_SHAPES: readonly VeShape[] = [
-  { id: "mild", label: "Mild street (early, flat torque)", points: [[0.2, 0.78], [0.45, 0.86], [0.65, 0.87], [0.85, 0.83], [1, 0.77]] },
-  { id: "street-strip", label: "Street/strip (fuller top end)", points: [[0.2, 0.74], [0.45, 0.85], [0.7, 0.92], [0.85, 0.91], [1, 0.86]] },
-  { id: "wild", label: "Wild (soft low end, strong top)", points: [[0.2, 0.66], [0.45, 0.8], [0.7, 0.94], [0.88, 0.99], [1, 0.95]] },
-  { id: "race", label: "Race (peaky, high speed)", points: [[0.2, 0.6], [0.5, 0.78], [0.75, 0.96], [0.92, 1.04], [1, 1.01]] },
+  { id: "peak-65-broad", label: "Peak at 65 % of redline, broad and flat", points: [[0.2, 0.78], [0.45, 0.86], [0.65, 0.87], [0.85, 0.83], [1, 0.77]] },
+  { id: "peak-70-plateau", label: "Peak at 70 % of redline, held to 85 %", points: [[0.2, 0.74], [0.45, 0.85], [0.7, 0.92], [0.85, 0.91], [1, 0.86]] },
+  { id: "peak-88-late", label: "Peak at 88 % of redline, low at the bottom", points: [[0.2, 0.66], [0.45, 0.8], [0.7, 0.94], [0.88, 0.99], [1, 0.95]] },
+  { id: "peak-92-narrow", label: "Peak at 92 % of redline, narrow", points: [[0.2, 0.6], [0.5, 0.78], [0.75, 0.96], [0.92, 1.04], [1, 1.01]] },
 ];
 
 /** VE (fraction) of a shape at a fraction of redline, piecewise-linear and flat outside. */

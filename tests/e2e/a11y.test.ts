@@ -60,8 +60,8 @@ async function keyboardWalk(page: Page) {
 
 async function demoIds() {
   const tuner = await signedIn("tuner@example.com");
-  const list = await tuner.json("/api/combinations?search=Small-block&pageSize=5");
-  const demo = (list.data.items as { id: string; name: string }[]).find((c) => c.name.startsWith("Small-block"));
+  const list = await tuner.json("/api/combinations?search=Work%20truck&pageSize=5");
+  const demo = (list.data.items as { id: string; name: string }[]).find((c) => c.name.startsWith("Work truck"));
   return { demo: demo!.id };
 }
 

@@ -44,7 +44,7 @@ describe("accounts and history in the browser", () => {
     await page.getByRole("link", { name: "New combination", exact: true }).click();
     await page.waitForURL((u) => u.pathname === "/combinations/new", T);
     await page.getByLabel("Name", { exact: true }).fill("Riley's street car");
-    await page.getByLabel("Small-block V8 ~5 L, Roots").check();
+    await page.getByLabel("V6 ~4.3 L, Roots").check();
     await page.getByRole("button", { name: "Create and open in the planner" }).click();
     await page.waitForURL((u) => /^\/combinations\/[0-9a-f-]{36}$/.test(u.pathname), T);
     planner = new URL(page.url()).pathname;
@@ -138,7 +138,7 @@ describe("accounts and history in the browser", () => {
     await expect(page.locator("header").textContent()).resolves.toMatch(/Tuner/);
     // A tuner sees the shop's combinations, the demo examples among them.
     await page.getByLabel("Show").selectOption("demo");
-    await page.getByRole("link", { name: "Small-block 5.0 L street build", exact: true }).waitFor(T);
+    await page.getByRole("link", { name: "Work truck V6 4.3 L, Roots", exact: true }).waitFor(T);
   });
 
   it("the admin's mailbox page shows a sign-in link e-mailed to the member; other roles are turned away", async () => {

@@ -12,7 +12,7 @@ import { createCombination } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { users } from "@/db/schema";
 import { DEMO_DATALOG_MAPPING } from "@/db/seed/datalogs";
-import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import { workTruckV6SmallerPulley } from "@/lib/combinations/demo-specs";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { signedIn } from "../support/http";
 
@@ -29,7 +29,7 @@ function messy(): string {
 
 async function freshCombination(email: string) {
   const [u] = await db.select().from(users).where(eq(users.email, email));
-  return createCombination(db, toActor(u), { name: `Messy e2e ${Date.now()}`, spec: smallBlockSmallerPulley });
+  return createCombination(db, toActor(u), { name: `Messy e2e ${Date.now()}`, spec: workTruckV6SmallerPulley });
 }
 
 afterAll(async () => {

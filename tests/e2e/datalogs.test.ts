@@ -10,7 +10,7 @@ import { createCombination, getCombination } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { users } from "@/db/schema";
 import { DEMO_DATALOG_MAPPING, DEMO_DATALOG_NAME } from "@/db/seed/datalogs";
-import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { Client, signedIn } from "../support/http";
 
@@ -24,7 +24,7 @@ async function actorFor(email: string) {
 
 /** A fresh combination for the test, so the demo scenario's own revisions stay as seeded. */
 async function freshCombination(email: string, name: string) {
-  return createCombination(db, await actorFor(email), { name: `${name} ${Date.now()}`, spec: smallBlockSmallerPulley });
+  return createCombination(db, await actorFor(email), { name: `${name} ${Date.now()}`, spec: workTruckV6 });
 }
 
 /** Boost at redline on a pulley (m), as the planner's ladder computes it. */
@@ -99,7 +99,7 @@ describe("upload, overlay, calibrate and the ladder in Chromium", () => {
   });
 
   it("the tuner uploads the demo log, maps columns, sees the overlay, calibrates, and the ladder changes", async () => {
-    const combo = await freshCombination("tuner@example.com", "Datalog e2e small-block");
+    const combo = await freshCombination("tuner@example.com", "Datalog e2e work truck");
     const context = await browser.newContext();
     const page = await signIn(context, "tuner@example.com");
     const errors = watchErrors(page);

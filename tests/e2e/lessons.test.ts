@@ -7,8 +7,8 @@ import type { Browser, Page } from "playwright-core";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { Client, signedIn } from "../support/http";
 
-const SMALL_BLOCK = "Small-block 5.0 L street build";
-const BIG_V8 = "Big V8 7.0 L twin-screw, intercooled";
+const WORK_TRUCK = "Work truck V6 4.3 L, Roots";
+const BIG_INCH = "Big-inch V8 7.4 L, twin-screw";
 
 type Item = { combination: string; revision: string; label: string };
 
@@ -50,25 +50,25 @@ describe("lessons in Chromium", () => {
     lessonId = new URL(page.url()).pathname.split("/")[2];
 
     await addStep(page, "Two engines", [
-      { combination: SMALL_BLOCK, revision: "1", label: "Small-block" },
-      { combination: BIG_V8, revision: "current", label: "Big V8" },
+      { combination: WORK_TRUCK, revision: "1", label: "Work truck" },
+      { combination: BIG_INCH, revision: "current", label: "Big-inch V8" },
     ]);
     await addStep(page, "Pulley change", [
-      { combination: SMALL_BLOCK, revision: "2", label: "Heads and cam" },
-      { combination: SMALL_BLOCK, revision: "3", label: "Smaller pulley" },
+      { combination: WORK_TRUCK, revision: "1", label: "3.4 in pulley" },
+      { combination: WORK_TRUCK, revision: "2", label: "3.0 in pulley" },
     ]);
-    await addStep(page, "Heads and cam", [
-      { combination: SMALL_BLOCK, revision: "1", label: "Baseline" },
-      { combination: SMALL_BLOCK, revision: "2", label: "Heads and cam" },
-      { combination: SMALL_BLOCK, revision: "3", label: "Smaller pulley" },
+    await addStep(page, "Intercooler and injectors", [
+      { combination: BIG_INCH, revision: "1", label: "No intercooler" },
+      { combination: BIG_INCH, revision: "2", label: "Intercooled" },
+      { combination: BIG_INCH, revision: "3", label: "Larger injectors" },
     ]);
-    // Put "Heads and cam" before "Pulley change" with the keyboard.
+    // Put "Intercooler and injectors" before "Pulley change" with the keyboard.
     const moveUp = page.getByRole("button", { name: "Move step 3 up" });
     await moveUp.focus();
     await page.keyboard.press("Enter");
     await expect
       .poll(() => page.getByRole("listitem", { name: /^Step \d+:/ }).evaluateAll((els) => els.map((e) => e.getAttribute("aria-label"))), { timeout: 15_000 })
-      .toEqual(["Step 1: Two engines", "Step 2: Heads and cam", "Step 3: Pulley change"]);
+      .toEqual(["Step 1: Two engines", "Step 2: Intercooler and injectors", "Step 3: Pulley change"]);
 
     await page.getByRole("button", { name: "Publish", exact: true }).click();
     await expect.poll(() => page.getByTestId("lesson-status").textContent(), { timeout: 15_000 }).toContain("Published");
@@ -98,7 +98,7 @@ describe("lessons in Chromium", () => {
 
     await page.keyboard.press("ArrowRight");
     await expect.poll(() => counter.textContent()).toBe("Step 2 of 3");
-    await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Heads and cam");
+    await expect.poll(() => page.getByRole("heading", { level: 1 }).textContent()).toBe("Intercooler and injectors");
     await page.keyboard.press("End");
     await expect.poll(() => counter.textContent()).toBe("Step 3 of 3");
     await page.getByRole("button", { name: "← Previous" }).click();
@@ -113,13 +113,13 @@ describe("lessons in Chromium", () => {
     await expect.poll(() => table.textContent()).not.toBe(before);
     // Arrow keys on the slider move the slider, not the step.
     expect(await counter.textContent()).toBe("Step 2 of 3");
-    const boostOf = (text: string | null) => Number(/Heads and cam([\d.]+) (?:psi|kPa)/.exec(text ?? "")?.[1]);
+    const boostOf = (text: string | null) => Number(/Intercooled([\d.]+) (?:psi|kPa)/.exec(text ?? "")?.[1]);
     const [was, now] = [boostOf(before), boostOf(await table.textContent())];
     expect(Number.isFinite(was)).toBe(true);
     expect(now).toBeGreaterThan(was);
 
     // Copy the second item into the member's own combinations.
-    await page.getByRole("button", { name: "Copy “Heads and cam” to my combinations" }).click();
+    await page.getByRole("button", { name: "Copy “Intercooled” to my combinations" }).click();
     const open = page.getByRole("link", { name: "Open in the planner" });
     await open.waitFor({ timeout: 30_000 });
     const href = (await open.getAttribute("href")) ?? "";
@@ -127,8 +127,8 @@ describe("lessons in Chromium", () => {
     const res = await context.request.get(`${BASE_URL}/api${href}`);
     expect(res.status()).toBe(200);
     const copy = (await res.json()) as { name: string; spec: { drive: { blowerPulleyDiameter: number } } };
-    expect(copy.name).toBe(`Heads and cam (from lesson ${title})`);
-    expect(copy.spec.drive.blowerPulleyDiameter).toBeCloseTo(3.4 * 0.0254, 9); // demo revision 2 keeps the 3.4 in pulley (lib/combinations/demo-specs.ts)
+    expect(copy.name).toBe(`Intercooled (from lesson ${title})`);
+    expect(copy.spec.drive.blowerPulleyDiameter).toBeCloseTo(3.8 * 0.0254, 9); // the big-inch V8 keeps its 3.8 in pulley (lib/combinations/demo-specs.ts)
     expect(errors).toEqual([]);
     await context.close();
   });

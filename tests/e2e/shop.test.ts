@@ -1,4 +1,4 @@
-// The shop in Chromium against the served app: sales turns the demo small-block into a
+// The shop in Chromium against the served app: sales turns the demo work truck into a
 // recommendation sheet, prints it to a one-page PDF, e-mails it, and the customer opens the
 // link signed out; the admin edits a shelf price; a member may not write the shelf.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -46,7 +46,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await browser?.close();
   });
 
-  it("sales makes a sheet from the demo small-block, prints one PDF page, e-mails it, and the link opens signed out", async () => {
+  it("sales makes a sheet from the demo work truck, prints one PDF page, e-mails it, and the link opens signed out", async () => {
     const context = await browser.newContext();
     const page = await signIn(context, "sales@example.com");
     const errors = watchErrors(page);
@@ -54,7 +54,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
 
     await page.goto(`${BASE_URL}/recommendations/new`);
     const select = page.getByLabel("Combination", { exact: true });
-    const label = (await select.locator("option").allTextContents()).find((t) => t.startsWith("Small-block 5.0 L street build"));
+    const label = (await select.locator("option").allTextContents()).find((t) => t.startsWith("Work truck V6 4.3 L, Roots"));
     expect(label).toBeDefined();
     await select.selectOption({ label: label! });
     await page.getByRole("button", { name: "Continue" }).click();
@@ -68,7 +68,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await page.getByRole("button", { name: "Find pulley" }).click();
     await expect(page.getByTestId("finder-result").textContent()).resolves.toMatch(/For 8\.0 psi at [\d,]+ rpm the blower pulley is [\d.]+ in/);
 
-    await expect(page.getByLabel("Customer name").inputValue()).resolves.toBe("Jordan Example");
+    await expect(page.getByLabel("Customer name").inputValue()).resolves.toBe("Riley Example");
     await page.getByLabel("Customer e-mail").fill(email);
     await page.getByLabel("Vehicle notes").fill("Street car <on pump fuel> & weekends");
     await page.getByRole("button", { name: "Add this pulley to the parts" }).click();
@@ -106,7 +106,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const res = await context.request.get(`${BASE_URL}/api/recommendations/${id}/pdf`, { timeout: 60_000 });
     expect(res.status()).toBe(200);
     expect(res.headers()["content-type"]).toBe("application/pdf");
-    expect(res.headers()["content-disposition"]).toMatch(/^attachment; filename="recommendation-jordan-example\.pdf"$/);
+    expect(res.headers()["content-disposition"]).toMatch(/^attachment; filename="recommendation-riley-example\.pdf"$/);
     expect(pdfPages(await res.body())).toEqual({ count: 1, objects: 1 });
 
     // E-mail it.
@@ -130,7 +130,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const sharedErrors = watchErrors(shared);
     await shared.goto(link!);
     await sheetReady(shared);
-    await expect(shared.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Jordan Example");
+    await expect(shared.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Riley Example");
     await expect(shared.getByTestId("sheet-total").textContent()).resolves.toBe(expectedTotal);
     expect(await shared.getByRole("button", { name: /send|edit|mark/i }).count()).toBe(0);
     expect(sharedErrors).toEqual([]);

@@ -5,7 +5,7 @@ import type { Actor } from "@/db/policy";
 import { createCombination, getCombination } from "@/db/repo/combinations";
 import { calibrateFromDatalog, createDatalog, getDatalogAnalysis, getDatalogPoints } from "@/db/repo/datalogs";
 import { DEMO_DATALOG_MAPPING, demoDatalogCsv } from "@/db/seed/datalogs";
-import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import { workTruckV6SmallerPulley } from "@/lib/combinations/demo-specs";
 import { compareBins } from "@/lib/datalogs/analysis";
 import { cleanLog } from "@/lib/datalogs/parse";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";
@@ -38,7 +38,7 @@ describe("datalogs as real files come", () => {
       .join("\n");
 
   it("leaves |bias| under 0.02 psi in every bin and as a mean", async () => {
-    const combo = await createCombination(t.db, member, { name: "recompare car", spec: smallBlockSmallerPulley });
+    const combo = await createCombination(t.db, member, { name: "recompare car", spec: workTruckV6SmallerPulley });
     const upload = () => createDatalog(t.db, member, { combinationId: combo.id, name: "pull", fileName: "pull.csv", text: warmerSensor(), mapping: { ...DEMO_DATALOG_MAPPING } });
     const first = await upload();
     const before = await getDatalogAnalysis(t.db, member, first.id);
@@ -60,7 +60,7 @@ describe("datalogs as real files come", () => {
   });
 
   it("keeps every readable row, lists each skipped line with its reason, and refuses without the choice", async () => {
-    const combo = await createCombination(t.db, member, { name: "messy car", spec: smallBlockSmallerPulley });
+    const combo = await createCombination(t.db, member, { name: "messy car", spec: workTruckV6SmallerPulley });
     const lines = demoDatalogCsv().split("\n");
     lines[10] = "1.00,n/a,99.0,8.10,90.1"; // line 11 of the file
     lines[20] = "2.00,3000,99.0,ERR,90.1"; // line 21

@@ -8,12 +8,12 @@ import type { Actor } from "@/db/policy";
 import { createCombination, getCombination, listRevisions, saveCombination } from "@/db/repo/combinations";
 import { calibrateFromDatalog, createDatalog } from "@/db/repo/datalogs";
 import { DEMO_DATALOG_MAPPING } from "@/db/seed/datalogs";
-import { smallBlockBaseline } from "@/lib/combinations/demo-specs";
+import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";
 
 // source: NIST SP 811, 1 psi = 6894.757 Pa
 const PSI = 6894.757;
-const base = combinationSchema.parse(smallBlockBaseline);
+const base = combinationSchema.parse(workTruckV6);
 const truth: Combination = { ...base, blower: { ...base.blower, volumetricEfficiencyRef: base.blower.volumetricEfficiencyRef - 0.08 } };
 const d0 = base.drive.blowerPulleyDiameter;
 const d1 = d0 - 0.00508;

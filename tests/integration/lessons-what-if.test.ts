@@ -1,25 +1,25 @@
 // The classroom's "what if" works on the step's snapshot in the browser: a smaller blower pulley
-// raises boost everywhere, better breathing (a higher VE scale) lowers it; nothing else moves.
+// raises boost at every speed, better breathing (a higher VE scale) lowers it; nothing else moves.
 import { describe, expect, it } from "vitest";
 import { combinationSchema } from "@/calc";
 import { applyWhatIf, deltaSpeeds, pointAt, rpmGrid, stepCurves } from "@/lib/lessons/curves";
 import type { StepItemSnapshot } from "@/lib/lessons/rules";
-import { smallBlockBaseline, smallBlockHeadsCam } from "@/lib/combinations/demo-specs";
+import { vintageV8Cam, vintageV8DrawThrough } from "@/lib/combinations/demo-specs";
 
-const item = (label: string, spec: typeof smallBlockBaseline): StepItemSnapshot => ({
+const item = (label: string, spec: typeof vintageV8DrawThrough): StepItemSnapshot => ({
   combinationId: "00000000-0000-4000-8000-000000000000",
   revision: 1,
   label,
   name: label,
   spec: combinationSchema.parse(spec),
 });
-const items = [item("Baseline", smallBlockBaseline), item("Heads and cam", smallBlockHeadsCam)];
+const items = [item("Original cam", vintageV8DrawThrough), item("New cam", vintageV8Cam)];
 
 describe("classroom what-if", () => {
   it("a smaller blower pulley for all items raises boost at every engine speed", () => {
     // Trade fact (common practice, no published source; listed in calc/README.md): a smaller blower pulley raises boost at every engine speed.
     const asBuilt = stepCurves(items, { kind: "none" });
-    const smaller = stepCurves(items, { kind: "pulley", diameter: smallBlockBaseline.drive.blowerPulleyDiameter * 0.9 });
+    const smaller = stepCurves(items, { kind: "pulley", diameter: vintageV8DrawThrough.drive.blowerPulleyDiameter * 0.9 });
     for (const [i, c] of smaller.entries()) {
       expect(c.error).toBeNull();
       c.points.forEach((p, k) => expect(p.boostGauge).toBeGreaterThan(asBuilt[i].points[k].boostGauge));
@@ -44,8 +44,8 @@ describe("classroom what-if", () => {
 
   it("runs each curve to its own redline and picks table speeds that every item reaches", () => {
     const curves = stepCurves(items, { kind: "none" });
-    expect(curves[0].points.at(-1)!.rpm).toBe(smallBlockBaseline.engine.redlineRpm);
-    expect(curves[1].points.at(-1)!.rpm).toBe(smallBlockHeadsCam.engine.redlineRpm);
+    expect(curves[0].points.at(-1)!.rpm).toBe(vintageV8DrawThrough.engine.redlineRpm);
+    expect(curves[1].points.at(-1)!.rpm).toBe(vintageV8Cam.engine.redlineRpm);
     const speeds = deltaSpeeds(curves.map((c) => c.spec));
     expect(speeds.length).toBeGreaterThan(0);
     for (const rpm of speeds) for (const c of curves) expect(pointAt(c.points, rpm)).not.toBeNull();

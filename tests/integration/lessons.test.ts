@@ -2,7 +2,7 @@
 // only while published), that a step keeps the spec it was built on, and copying an item.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
-import { boostCurve, combinationSchema } from "@/calc";
+import { boostCurve, combinationSchema, paToPsi, solvePoint, wToHp } from "@/calc";
 import { FieldError, ForbiddenError, NotFoundError } from "@/lib/errors";
 import { createCombination, getCombination, saveCombination } from "@/db/repo/combinations";
 import {
@@ -20,10 +20,10 @@ import {
   updateLesson,
   updateStep,
 } from "@/db/repo/lessons";
-import { seedCombinations, type DemoCombinations } from "@/db/seed/combinations";
-import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import { DEMO_COMBINATION_NAMES, seedCombinations, type DemoCombinations } from "@/db/seed/combinations";
+import { bigInchIntercooled, bigInchLargerInjectors, workTruckV6, workTruckV6SmallerPulley } from "@/lib/combinations/demo-specs";
 import type { DemoUsers } from "@/db/seed/index";
-import { DEMO_CLASS_CODE, DEMO_LESSON_TITLE, seedLessons } from "@/db/seed/lessons";
+import { DEMO_CLASS_CODE, DEMO_LESSON_SPEEDS, DEMO_LESSON_TITLE, seedLessons } from "@/db/seed/lessons";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";
 
 type Person = Awaited<ReturnType<typeof makeUser>>;
@@ -55,8 +55,8 @@ describe("lessons", () => {
   });
 
   const twoItems = () => [
-    { combinationId: combos.smallBlock, revision: 1 as const, label: "Baseline" },
-    { combinationId: combos.smallBlock, revision: 2 as const, label: "Heads and cam" },
+    { combinationId: combos.bigInch, revision: 1 as const, label: "Baseline" },
+    { combinationId: combos.bigInch, revision: 2 as const, label: "Intercooled" },
   ];
 
   async function publishedLesson(title = "Pulleys " + Math.random().toString(36).slice(2, 7)) {
@@ -84,55 +84,55 @@ describe("lessons", () => {
     });
 
     it("the step editor offers the instructor's own and the shop's demo combinations with their revisions", async () => {
-      const own = await createCombination(t.db, instructor, { name: "Instructor's own", spec: smallBlockBaseline });
+      const own = await createCombination(t.db, instructor, { name: "Instructor's own", spec: workTruckV6 });
       const sources = await listStepSources(t.db, instructor);
       const ids = sources.map((s) => s.id);
       expect(ids).toContain(own.id);
-      expect(ids).toContain(combos.smallBlock);
+      expect(ids).toContain(combos.bigInch);
       // The member's own car is neither the instructor's nor a demo.
       expect(ids).not.toContain(combos.memberCar);
-      expect(sources.find((s) => s.id === combos.smallBlock)!.revisions.map((r) => r.number)).toEqual([1, 2, 3]);
+      expect(sources.find((s) => s.id === combos.bigInch)!.revisions.map((r) => r.number)).toEqual([1, 2, 3]);
       await expect(listStepSources(t.db, member)).rejects.toBeInstanceOf(ForbiddenError);
     });
 
     it("a step stores a snapshot of each item: the chosen revision's spec, and the current one resolved to its number", async () => {
       const l = await createLesson(t.db, instructor, { title: "Snapshots" });
       const step = await addStep(t.db, instructor, l.id, {
-        title: "Heads and cam against the smaller pulley",
+        title: "Intercooler against larger injectors",
         items: [
-          { combinationId: combos.smallBlock, revision: 2, label: "Heads and cam" },
-          { combinationId: combos.smallBlock, revision: "current", label: "Now" },
+          { combinationId: combos.bigInch, revision: 2, label: "Intercooled" },
+          { combinationId: combos.bigInch, revision: "current", label: "Now" },
         ],
         series: ["boost", "blowerSpeed", "boost"],
       });
       expect(step.items.map((i) => i.revision)).toEqual([2, 3]);
-      expect(step.items[0].spec).toEqual(combinationSchema.parse(smallBlockHeadsCam));
-      expect(step.items[1].spec).toEqual(combinationSchema.parse(smallBlockSmallerPulley));
-      expect(step.items[0].name).toBe("Small-block 5.0 L street build");
+      expect(step.items[0].spec).toEqual(combinationSchema.parse(bigInchIntercooled));
+      expect(step.items[1].spec).toEqual(combinationSchema.parse(bigInchLargerInjectors));
+      expect(step.items[0].name).toBe(DEMO_COMBINATION_NAMES.bigInch);
       expect(step.series).toEqual(["boost", "blowerSpeed"]);
     });
 
     it("a step keeps showing the spec it was built on after its source changes", async () => {
-      const own = await createCombination(t.db, instructor, { name: "Changing", spec: smallBlockBaseline });
+      const own = await createCombination(t.db, instructor, { name: "Changing", spec: workTruckV6 });
       const l = await createLesson(t.db, instructor, { title: "Stable" });
       const step = await addStep(t.db, instructor, l.id, {
         title: "Before",
         items: [
           { combinationId: own.id, revision: "current", label: "Own" },
-          { combinationId: combos.smallBlock, revision: 3, label: "Demo" },
+          { combinationId: combos.bigInch, revision: 3, label: "Demo" },
         ],
         series: ["boost"],
       });
-      await saveCombination(t.db, instructor, own.id, { spec: smallBlockSmallerPulley, baseRevision: 1 });
+      await saveCombination(t.db, instructor, own.id, { spec: workTruckV6SmallerPulley, baseRevision: 1 });
       const again = (await getLesson(t.db, instructor, l.id)).steps[0];
       expect(again.items[0].revision).toBe(1);
-      expect(again.items[0].spec.drive.blowerPulleyDiameter).toBeCloseTo(smallBlockBaseline.drive.blowerPulleyDiameter, 12);
+      expect(again.items[0].spec.drive.blowerPulleyDiameter).toBeCloseTo(workTruckV6.drive.blowerPulleyDiameter, 12);
       // Editing only the label keeps the snapshot even though "current" has moved on.
       const edited = await updateStep(t.db, instructor, l.id, step.id, {
         title: "Before, relabelled",
         items: [
           { combinationId: own.id, revision: 1, label: "Own, as it was" },
-          { combinationId: combos.smallBlock, revision: 3, label: "Demo" },
+          { combinationId: combos.bigInch, revision: 3, label: "Demo" },
         ],
         series: ["boost"],
       });
@@ -225,9 +225,9 @@ describe("lessons", () => {
 
       const view = await getLesson(t.db, outsider, first.id);
       expect(view.canEdit).toBe(false);
-      expect(view.steps[0].items[1].spec).toEqual(combinationSchema.parse(smallBlockHeadsCam));
+      expect(view.steps[0].items[1].spec).toEqual(combinationSchema.parse(bigInchIntercooled));
       // The source combination itself stays closed to them.
-      await expect(getCombination(t.db, outsider, combos.smallBlock)).rejects.toBeInstanceOf(NotFoundError);
+      await expect(getCombination(t.db, outsider, combos.bigInch)).rejects.toBeInstanceOf(NotFoundError);
 
       await expect(getLesson(t.db, outsider, second.id)).rejects.toBeInstanceOf(NotFoundError);
       const list = await listLessons(t.db, outsider);
@@ -279,11 +279,12 @@ describe("lessons", () => {
       const copy = await copyStepItem(t.db, viewer, l.id, step.id, { item: 1 });
       expect(copy.ownerId).toBe(viewer.id);
       expect(copy.isDemo).toBe(false);
-      expect(copy.name).toBe("Heads and cam (from lesson Pulley night)");
+      expect(copy.name).toBe("Intercooled (from lesson Pulley night)");
       const mine = await getCombination(t.db, viewer, copy.id);
       expect(mine.spec).toEqual(step.items[1].spec);
-      // Not the source's current revision (3, the smaller pulley): the step's revision 2.
-      expect(mine.spec.drive.blowerPulleyDiameter).toBeCloseTo(smallBlockHeadsCam.drive.blowerPulleyDiameter, 12);
+      // Not the source's current revision (3, larger injectors): the step's revision 2.
+      expect(mine.spec.fuel.injectorFlow).toBeCloseTo(bigInchIntercooled.fuel.injectorFlow!, 12);
+      expect(mine.spec.fuel.injectorFlow).not.toBeCloseTo(bigInchLargerInjectors.fuel.injectorFlow!, 6);
 
       await expect(copyStepItem(t.db, viewer, l.id, step.id, { item: 3 })).rejects.toMatchObject({ field: "item" });
       const stranger = await makeUser(t.db, "member");
@@ -305,26 +306,43 @@ describe("lessons", () => {
       const { steps } = await getLesson(t.db, viewer, id);
       expect(steps).toHaveLength(3);
       for (const s of steps) expect(s.items.length).toBeGreaterThanOrEqual(2);
+      expect(steps.map((st) => st.items.map((i) => i.combinationId))).toEqual([
+        [combos.workTruck, combos.bigInch],
+        [combos.vintage, combos.vintage],
+        [combos.workTruck, combos.workTruck],
+      ]);
       expect(steps[1].items.map((i) => i.revision)).toEqual([1, 2]);
-      expect(steps[2].items.map((i) => i.revision)).toEqual([2, 3]);
+      expect(steps[2].items.map((i) => i.revision)).toEqual([1, 2]);
     });
 
-    it("the demo lesson's notes tell the truth about its own curves", async () => {
+    it("the demo lesson's notes quote the model's own figures for the specs each step shows", async () => {
       const { steps } = await getLesson(t.db, instructor, await seedLessons(t.db, people, combos));
-      const at = (spec: Parameters<typeof boostCurve>[0], rpms: number[]) => boostCurve(spec, rpms);
-      // Step 2: better heads and cam under the same pulley: boost falls, power rises at speed.
-      // Trade fact: common practice, no published source (listed in calc/README.md).
-      const mid = [3500, 4500, 5500];
-      const [base, heads] = steps[1].items.map((i) => at(i.spec, mid));
-      mid.forEach((_, k) => {
-        expect(heads[k].boostGauge).toBeLessThan(base[k].boostGauge);
-        expect(heads[k].netPower).toBeGreaterThan(base[k].netPower);
-      });
-      // Step 3: a smaller blower pulley raises boost at every engine speed.
-      // Trade fact: common practice, no published source (listed in calc/README.md).
-      const rpms = [2000, 3000, 4000, 5000, 6000];
-      const [before, after] = steps[2].items.map((i) => at(i.spec, rpms));
-      rpms.forEach((_, k) => expect(after[k].boostGauge).toBeGreaterThan(before[k].boostGauge));
+      const { low, high, cam } = DEMO_LESSON_SPEEDS;
+      const psi = (spec: Parameters<typeof solvePoint>[0], rpm: number) => `${paToPsi(solvePoint(spec, rpm).boostGauge).toFixed(1)} psi`;
+      const hp = (spec: Parameters<typeof solvePoint>[0], rpm: number) => `${Math.round(wToHp(solvePoint(spec, rpm).netPower))} hp`;
+      // Step 1: Roots and twin-screw, each at a low and a high speed.
+      const [roots, screw] = steps[0].items.map((i) => i.spec);
+      for (const f of [psi(roots, low), psi(roots, high), psi(screw, low), psi(screw, high)]) expect(steps[0].note).toContain(f);
+      // The Roots climbs more across the range than the twin-screw (trade fact, calc/README.md).
+      const climb = (spec: typeof roots) => solvePoint(spec, high).boostGauge - solvePoint(spec, low).boostGauge;
+      expect(climb(roots)).toBeGreaterThan(climb(screw));
+      // Step 2: the cam: boost and net power before and after, with the direction the model gives.
+      const [before, after] = steps[1].items.map((i) => i.spec);
+      for (const f of [psi(before, cam), psi(after, cam), hp(before, cam), hp(after, cam)]) expect(steps[1].note).toContain(f);
+      // source: calc/README.md, trade facts (common practice, no published source): better breathing,
+      // same blower and pulley: less boost, usually more power.
+      expect(solvePoint(after, cam).boostGauge).toBeLessThan(solvePoint(before, cam).boostGauge);
+      expect(solvePoint(after, cam).netPower).toBeGreaterThan(solvePoint(before, cam).netPower);
+      expect(steps[1].note).toContain("boost drops");
+      expect(steps[1].note).toContain("Net power goes up");
+      // Step 3: the smaller pulley, and the blower's speed at redline against its limit.
+      const [big, small] = steps[2].items.map((i) => i.spec);
+      for (const f of [psi(big, low), psi(small, low), psi(big, high), psi(small, high), hp(big, high), hp(small, high)]) expect(steps[2].note).toContain(f);
+      expect(steps[2].note).toContain(`${small.blower.maxRpm.toLocaleString("en-US")} rpm`);
+      // source: calc/README.md, trade facts: a smaller blower pulley raises boost at every engine speed.
+      const rpms = [2000, 3000, 4000, 5000];
+      const [b, a] = [boostCurve(big, rpms), boostCurve(small, rpms)];
+      rpms.forEach((_, k) => expect(a[k].boostGauge).toBeGreaterThan(b[k].boostGauge));
     });
   });
 });

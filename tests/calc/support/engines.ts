@@ -70,13 +70,14 @@ export function midSixRootsIntercooled(): Combination {
 /** The street case: a 5 L V8 under a 2 L/rev Roots making about 7 psi at 6000 rpm, no intercooler. */
 export function streetFiveLitreRoots(): Combination {
   const c = exampleCombination();
-  return { ...c, blower: { ...c.blower, displacementPerRev: 0.002 }, drive: { ...c.drive, blowerPulleyDiameter: 0.0945 } };
+  // Its own 5 L, not the demo's size: the case is stated for a 5 L engine.
+  return { ...c, engine: { ...c.engine, displacement: 0.005 }, blower: { ...c.blower, displacementPerRev: 0.002 }, drive: { ...c.drive, blowerPulleyDiameter: 0.0945 } };
 }
 
 /** Test engines without an intercooler, Roots and twin-screw. */
 export const withoutIntercooler: [string, () => Combination][] = [
-  ["demo 5 L V8, Roots", exampleCombination],
-  ["demo 5 L V8, twin-screw without its intercooler", () => noIntercooler(exampleTwinScrewCombination())],
+  ["demo 4.6 L V8, Roots", exampleCombination],
+  ["demo 4.6 L V8, twin-screw without its intercooler", () => noIntercooler(exampleTwinScrewCombination())],
   ["2.0 L four, Roots", smallFourRoots],
   ["7.0 L V8, twin-screw", bigEightScrew],
   ["street 5 L V8, 2 L Roots", streetFiveLitreRoots],
@@ -84,6 +85,6 @@ export const withoutIntercooler: [string, () => Combination][] = [
 
 /** Test engines with an intercooler. */
 export const withIntercooler: [string, () => Combination][] = [
-  ["demo 5 L V8, twin-screw, intercooled", exampleTwinScrewCombination],
+  ["demo 4.6 L V8, twin-screw, intercooled", exampleTwinScrewCombination],
   ["3.8 L V6, Roots, intercooled", midSixRootsIntercooled],
 ];

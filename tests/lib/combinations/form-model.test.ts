@@ -3,23 +3,23 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { combinationSchema, type Combination, type UnitSystem } from "@/calc";
 import { convertForm, localizeMessage, sameSpec, toForm, toSpec, unitOf, validateForm } from "@/lib/combinations/form-model";
-import { smallBlockBaseline } from "@/lib/combinations/demo-specs";
+import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import { combinationArb } from "@/tests/calc/support/arbitraries";
 
-const demo: Combination = combinationSchema.parse(smallBlockBaseline);
+const demo: Combination = combinationSchema.parse(workTruckV6);
 
 describe("form values and SI", () => {
   it("shows the demo's blower and crank pulleys in inches and millimetres", () => {
-    // source: the demo seed defines 3.4 in and 6.5 in; 1 in = 25.4 mm exactly (NIST SP 811)
+    // source: the demo seed defines 3.4 in and 6.0 in; 1 in = 25.4 mm exactly (NIST SP 811)
     const imperial = toForm(demo, "imperial");
     expect(imperial.drive.blowerPulleyDiameter).toBe(3.4);
-    expect(imperial.drive.crankPulleyDiameter).toBe(6.5);
+    expect(imperial.drive.crankPulleyDiameter).toBe(6);
     const metric = toForm(demo, "metric");
     expect(metric.drive.blowerPulleyDiameter).toBeCloseTo(86.36, 6);
-    expect(metric.drive.crankPulleyDiameter).toBeCloseTo(165.1, 6);
-    // source: 5.0 L = 5.0 / 0.016387064 in³ = 305.12 in³ (1 in³ = 16.387064 cm³, NIST SP 811)
-    expect(imperial.engine.displacement).toBeCloseTo(305.12, 1);
-    expect(metric.engine.displacement).toBeCloseTo(5.0, 9);
+    expect(metric.drive.crankPulleyDiameter).toBeCloseTo(152.4, 6);
+    // source: 4.3 L = 4.3 / 0.016387064 in³ = 262.40 in³ (1 in³ = 16.387064 cm³, NIST SP 811)
+    expect(imperial.engine.displacement).toBeCloseTo(262.4, 1);
+    expect(metric.engine.displacement).toBeCloseTo(4.3, 9);
   });
 
   it("round-trips a form in either system to the same SI combination", () => {

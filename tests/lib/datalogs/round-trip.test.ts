@@ -3,13 +3,13 @@
 import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
-import { combinationSchema, exampleCombination, veAt, type VePoint } from "@/calc";
+import { combinationSchema, exampleCombination, paToPsi, solvePoint, veAt, type VePoint } from "@/calc";
 import { cleanLog, guessLayout, guessMapping, parseLog } from "@/lib/datalogs/parse";
 import { compareBins, fitVe, pulleyComparison, smallerPulleys, specAsLogged, withFittedVe } from "@/lib/datalogs/analysis";
-import { DEMO_DATALOG_MAPPING, demoDatalogCsv, demoTrueVeCurve, synthesizeLogCsv } from "@/db/seed/datalogs";
-import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import { DEMO_DATALOG_MAPPING, DEMO_DATALOGS, demoDatalogCsv, demoTrueVeCurve, demoTruth, synthesizeLogCsv } from "@/db/seed/datalogs";
+import { bigInchTwinScrew } from "@/lib/combinations/demo-specs";
 
-const spec = combinationSchema.parse(smallBlockSmallerPulley);
+const spec = combinationSchema.parse(bigInchTwinScrew);
 const trueVe: VePoint[] = [
   { rpm: 1500, ve: 0.74 },
   { rpm: 3000, ve: 0.86 },
@@ -77,17 +77,27 @@ describe("calibration round trip", () => {
 });
 
 describe("the demo log", () => {
-  it("public/samples/demo-datalog.csv reads with the demo mapping and fits the invented true curve within 2 %", () => {
+  it("public/samples/demo-datalog.csv fitted alone: the VE takes up the blower's extra slip", () => {
     // Not compared byte for byte with demoDatalogCsv(): a refinement of calc/ may move its figures a
     // little. Regenerate it with `npx tsx scripts/write-demo-datalog.ts` after such a change.
     const file = fs.readFileSync(path.join(import.meta.dirname, "../../../public/samples/demo-datalog.csv"), "utf8");
     expect(file.split("\n")[0]).toBe(demoDatalogCsv().split("\n")[0]);
     const mapping = guessMapping(guessLayout(file));
     expect(mapping).toMatchObject(DEMO_DATALOG_MAPPING);
-    const { cleaned, fit } = fitFrom(file);
+    const truck = combinationSchema.parse(DEMO_DATALOGS[0].spec);
+    const parsed = parseLog(file, mapping, truck.ambient.pressure);
+    const cleaned = cleanLog(parsed.points, truck.ambient.pressure, { binWidth: 250, minThrottle: 90 });
     expect(cleaned.counts).toMatchObject({ partThrottle: 8 });
     expect(cleaned.counts.outliers).toBeGreaterThanOrEqual(2);
-    expect(worst(fit, demoTrueVeCurve())).toBeLessThan(0.02);
+    const fit = fitVe(specAsLogged(truck, null), cleaned.bins);
+    // One pulley cannot tell slip from breathing: the fitted VE reproduces the logged boost at this
+    // pulley (within 0.3 psi of the stated truth, an author's bound for σ 0.15 psi noise) ...
+    const fitted = withFittedVe(truck, fit.veCurve);
+    const truth = demoTruth(truck.drive.blowerPulleyDiameter);
+    for (const rpm of [2500, 3500, 4500]) expect(Math.abs(paToPsi(solvePoint(fitted, rpm).boostGauge - solvePoint(truth, rpm).boostGauge))).toBeLessThan(0.3);
+    // ... but lies well below the true VE, since it also carries the blower's extra slip; the
+    // second log at another pulley separates them (tests/lib/datalogs/demo-logs.test.ts).
+    expect(worst(fit, demoTrueVeCurve())).toBeGreaterThan(0.05);
   });
 });
 

@@ -4,13 +4,13 @@
 // next pulley. Tolerances from issue 14 (slip within 0.03, next pulley within 0.3 psi), the author's.
 import { describe, expect, it } from "vitest";
 import { combinationSchema, trySolvePoint, type Combination } from "@/calc";
-import { smallBlockBaseline } from "@/lib/combinations/demo-specs";
+import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import type { LogBin } from "@/lib/datalogs/parse";
 import { fitRuns, predictNextPulley, runsFromLogs, type LogRun } from "@/lib/datalogs/runs";
 
 // source: NIST SP 811, 1 psi = 6894.757 Pa
 const PSI = 6894.757;
-const current = combinationSchema.parse(smallBlockBaseline);
+const current = combinationSchema.parse(workTruckV6);
 const truth: Combination = {
   ...current,
   blower: { ...current.blower, volumetricEfficiencyRef: current.blower.volumetricEfficiencyRef - 0.08 },

@@ -11,9 +11,9 @@ import { matchesSearch } from "@/app/(app)/compare/compare-pickers";
 import { applyShape, scaleVe, VE_SHAPES } from "@/lib/planner/ve-shapes";
 import fc from "fast-check";
 import { deltaText, displayValue } from "@/lib/units/format";
-import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
+import { vintageV8Cam, vintageV8DrawThrough, workTruckV6 } from "@/lib/combinations/demo-specs";
 
-const base: Combination = combinationSchema.parse(smallBlockBaseline);
+const base: Combination = combinationSchema.parse(workTruckV6);
 const shelfPulley = (inches: number, stock: number): ShelfPulley => ({ id: `p${inches}`, partNumber: `BP-${inches}`, diameter: inToM(inches), price: "49.00", stock });
 
 describe("curves and the ladder", () => {
@@ -115,6 +115,14 @@ describe("curves and the ladder", () => {
 });
 
 describe("VE starting shapes", () => {
+  it("are named for where they peak: the label's share of redline is the curve's highest point", () => {
+    for (const shape of VE_SHAPES) {
+      const top = shape.points.reduce((a, b) => (b[1] > a[1] ? b : a));
+      expect(shape.label).toContain(`Peak at ${Math.round(top[0] * 100)} % of redline`);
+      expect(shape.id).toBe(`peak-${Math.round(top[0] * 100)}-${shape.id.split("-").at(-1)}`);
+    }
+  });
+
   it("fill the table's speeds with plausible VE that calc does not question", () => {
     for (const shape of VE_SHAPES) {
       const rows = applyShape(shape, base.engine.redlineRpm, base.engine.veCurve);
@@ -151,9 +159,10 @@ describe("VE starting shapes", () => {
 });
 
 describe("Side by side", () => {
-  it("reads heads and cam as less boost, and the smaller pulley as more, at 4500 rpm", () => {
+  it("reads a cam change as less boost, and then a smaller pulley as more, at 4500 rpm", () => {
     // common practice, no published source: better breathing lowers boost under the same blower and pulley
-    const specs = [smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley].map((s) => combinationSchema.parse(s));
+    const camAndPulley = { ...vintageV8Cam, drive: { ...vintageV8Cam.drive, blowerPulleyDiameter: vintageV8Cam.drive.blowerPulleyDiameter * 0.9 } };
+    const specs = [vintageV8DrawThrough, vintageV8Cam, camAndPulley].map((s) => combinationSchema.parse(s));
     const rows = deltaRows(specs, [3000, 4500]);
     const boost = rows.find((r) => r.quantity.key === "boostGauge" && r.rpm === 4500)!;
     expect(boost.cells[0].delta).toBe(0);
