@@ -50,3 +50,10 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   }
   return false;
 }
+
+/** Another service the request needed failed (502) or is not set up (503); nothing was changed. */
+export class UpstreamError extends Error {
+  constructor(message: string, readonly status: 502 | 503 = 502) {
+    super(message);
+  }
+}

@@ -13,6 +13,10 @@ const schema = z.object({
   MAIL_FAKE_URL: z.string().url().optional(),
   /** Secret for signed share links; defaults to the auth secret. */
   SHARE_SECRET: z.string().min(16).optional(),
+  /** The payment service: secret API key, webhook signing secret, and its address (the local fake by default). */
+  STRIPE_SECRET_KEY: z.string().min(1).optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).optional(),
+  STRIPE_API_URL: z.string().url().optional(),
 });
 
 let parsed: z.infer<typeof schema> | undefined;

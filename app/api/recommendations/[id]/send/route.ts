@@ -1,19 +1,21 @@
 import { NextResponse } from "next/server";
 import { route } from "@/app/_lib/http";
-import { appUrl, sendMail } from "@/app/_lib/mail";
+import { sendMail } from "@/app/_lib/mail";
 import { getCurrentUser, requireActor } from "@/app/_lib/session";
-import { makeShareToken } from "@/app/_lib/share-link";
+import { sentVersionLink } from "@/app/_lib/share-url";
 import { buildSheetEmail } from "@/components/recommendation/email";
 import { getDb } from "@/db/client";
 import { FieldError } from "@/db/errors";
 import { getRecommendation, markRecommendationSent, recordSendFailure } from "@/db/repo/recommendations";
-import { getShopDetails } from "@/db/repo/shop";
+import { discardSentVersion, recordSentVersion } from "@/db/repo/sheet-versions";
+import { getShopDetails, getShopTerms } from "@/db/repo/shop";
 
 type Ctx = { params: Promise<{ id: string }> };
 
 /**
- * E-mails the sheet to the customer with a signed read-only link (30 days). Success records the
- * time and status "sent"; a failure keeps the status and records the error to show.
+ * E-mails the sheet to the customer with a link (30 days) to a frozen copy of it as it is now:
+ * each send is a new version, and later edits never change what the link shows. Success records
+ * the time and status "sent"; a failure keeps the status, discards the version and records the error.
  */
 export const POST = route(async (_req, { params }: Ctx) => {
   const actor = await requireActor(["sales", "tuner", "admin"]);
@@ -22,16 +24,18 @@ export const POST = route(async (_req, { params }: Ctx) => {
   const rec = await getRecommendation(db, actor, id);
   if (!rec.customerEmail) throw new FieldError("customerEmail", "Add the customer's e-mail address to the sheet before sending it.");
   const unitSystem = (await getCurrentUser())?.unitSystem ?? "imperial";
-  const { token, expiresAt } = makeShareToken(rec.id);
-  const link = appUrl(`/share/${token}?units=${unitSystem}`);
-  const mail = buildSheetEmail({ sheet: rec, shop: await getShopDetails(db), unitSystem, link, expiresAt });
+  const [shop, terms] = await Promise.all([getShopDetails(db), getShopTerms(db)]);
+  const version = await recordSentVersion(db, actor, rec, terms.currency);
+  const link = sentVersionLink(version, unitSystem);
+  const mail = buildSheetEmail({ sheet: rec, shop, unitSystem, link: link.url, expiresAt: link.expiresAt });
   try {
     await sendMail({ to: rec.customerEmail, ...mail });
   } catch (err) {
+    await discardSentVersion(db, actor, version.id);
     const message = `The e-mail to ${rec.customerEmail} could not be sent (${err instanceof Error ? err.message : String(err)}). The sheet was not sent; check the mail settings and try again.`;
     await recordSendFailure(db, actor, id, message);
     return NextResponse.json({ error: message }, { status: 502 });
   }
-  const row = await markRecommendationSent(db, actor, id);
-  return { id, status: row.status, sentAt: row.sentAt };
+  const row = await markRecommendationSent(db, actor, id, version.sentAt);
+  return { id, status: row.status, sentAt: row.sentAt, version: version.version, shareUrl: link.url };
 });
