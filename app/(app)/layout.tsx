@@ -13,6 +13,7 @@ const NAV: (NavItem & { roles: Role[] })[] = [
   { href: "/datalogs", label: "Datalogs", roles: ALL },
   { href: "/shelf", label: "Parts shelf", roles: ALL },
   { href: "/recommendations", label: "Recommendations", roles: ["sales", "tuner", "admin"] },
+  { href: "/orders", label: "Orders", roles: ["sales", "tuner", "admin"] },
   { href: "/lessons", label: "Lessons", roles: ALL },
   { href: "/admin/users", label: "Accounts", roles: ["admin"] },
   { href: "/admin/mail", label: "Mailbox", roles: ["admin"] },

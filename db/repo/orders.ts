@@ -193,13 +193,17 @@ export async function listOrders(db: DbOrTx, actor: Actor, query: OrderListQuery
 export async function getOrder(db: DbOrTx, actor: Actor, id: string) {
   assert(canSeeOrders(actor), "Orders are for the shop's sales, tuners and admin.");
   if (!isUuid(id)) throw new NotFoundError(NOT_FOUND);
-  const [order] = await db.select().from(orders).where(eq(orders.id, id));
-  if (!order) throw new NotFoundError(NOT_FOUND);
+  const [row] = await db
+    .select({ order: orders, title: recommendations.title, combinationId: recommendations.combinationId })
+    .from(orders)
+    .innerJoin(recommendations, eq(recommendations.id, orders.recommendationId))
+    .where(eq(orders.id, id));
+  if (!row) throw new NotFoundError(NOT_FOUND);
   const [reservations, events] = await Promise.all([
     db.select().from(orderReservations).where(eq(orderReservations.orderId, id)).orderBy(orderReservations.partNumber),
     db.select().from(orderEvents).where(eq(orderEvents.orderId, id)).orderBy(orderEvents.id),
   ]);
-  return { ...order, reservations, events };
+  return { ...row.order, title: row.title, combinationId: row.combinationId, reservations, events };
 }
 
 /** The pulley is on the car; optionally the datalog that verified it on the dyno. */

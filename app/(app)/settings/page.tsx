@@ -1,5 +1,8 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/app/_lib/session";
+import { getDb } from "@/db/client";
+import { getShopTerms } from "@/db/repo/shop";
+import { ShopTermsForm } from "./shop-terms-form";
 import { UnitsForm } from "./units-form";
 
 export const metadata: Metadata = { title: "Settings" };
@@ -18,6 +21,12 @@ export default async function SettingsPage() {
         <dd>{user.role}</dd>
       </dl>
       <UnitsForm current={user.unitSystem} />
+      {user.role === "admin" ? <ShopTerms /> : null}
     </div>
   );
+}
+
+async function ShopTerms() {
+  const t = await getShopTerms(getDb());
+  return <ShopTermsForm initial={{ currency: t.currency, depositKind: t.deposit.kind, depositValue: t.deposit.value }} />;
 }
