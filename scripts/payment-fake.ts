@@ -146,6 +146,7 @@ ${s.status === "open" ? `<form method="post" action="/pay/${s.id}/pay" style="di
     for await (const c of req) chunks.push(c as Buffer);
     const body = Buffer.concat(chunks).toString("utf8");
     const parts = url.pathname.split("/").filter(Boolean);
+    if (url.pathname === "/favicon.ico") return res.writeHead(204).end();
 
     // The hosted checkout page, for the customer's browser.
     if (parts[0] === "pay") {

@@ -269,3 +269,12 @@ export async function cancelOrder(db: DbOrTx, actor: Actor, gateway: PaymentGate
     return row;
   });
 }
+
+/** What the customer's link shows of their order for one sent version (no trail, no other orders). */
+export async function getCustomerOrder(db: DbOrTx, grant: { versionId: string }) {
+  const [row] = await db
+    .select({ status: orders.status, deposit: orders.deposit, currency: orders.currency, paidAt: orders.paidAt })
+    .from(orders)
+    .where(eq(orders.sheetVersionId, grant.versionId));
+  return row ?? null;
+}
