@@ -6,19 +6,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser } from "playwright-core";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { signedIn, type Client } from "../support/http";
+import { inbox } from "../support/inbox";
 
-const MAIL = process.env.MAIL_FAKE_URL ?? "";
 const PAYMENTS = process.env.PW_PAYMENT_FAKE_URL ?? "";
-
-async function inbox(to: string, subject: RegExp, wait = 15_000) {
-  const until = Date.now() + wait;
-  for (;;) {
-    const list = (await (await fetch(`${MAIL}/messages?to=${encodeURIComponent(to)}`)).json()) as { subject: string; text: string }[];
-    const found = list.filter((m) => subject.test(m.subject));
-    if (found.length || Date.now() > until) return found;
-    await new Promise((r) => setTimeout(r, 300));
-  }
-}
 
 type Pulley = { partNumber: string; diameter: number; stock: number; price: string };
 const stockOf = async (c: Client, partNumber: string) => ((await c.json(`/api/shelf/pulleys?search=${partNumber}`)).data.rows as Pulley[]).find((p) => p.partNumber === partNumber)!.stock;
@@ -51,7 +41,7 @@ describe("orders: a customer pays the deposit through the hosted checkout", () =
     expect(sent.status).toBe(200);
     const stockBefore = await stockOf(sales, pulley.partNumber);
 
-    const [mail] = await inbox(email, /recommendation/i);
+    const [mail] = await inbox(email, { subject: /recommendation/i });
     const link = mail.text.match(/https?:\/\/\S+\/share\/\S+/)?.[0];
     expect(link).toBeDefined();
 
@@ -69,7 +59,7 @@ describe("orders: a customer pays the deposit through the hosted checkout", () =
     await customer.close();
 
     expect(await stockOf(sales, pulley.partNumber)).toBe(stockBefore - 1);
-    const [receipt] = await inbox(email, /Deposit received/);
+    const [receipt] = await inbox(email, { subject: /Deposit received/ });
     expect(receipt?.text).toContain(pulley.partNumber);
 
     const staff = await browser.newContext();

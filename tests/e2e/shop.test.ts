@@ -5,8 +5,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { signedIn } from "../support/http";
+import { inbox } from "../support/inbox";
 
-const MAIL = process.env.MAIL_FAKE_URL ?? "";
 
 /** Pages in a PDF: the page tree's /Count (ISO 32000-1 §7.7.3.2), cross-checked by the /Type /Page objects. */
 function pdfPages(pdf: Buffer) {
@@ -22,15 +22,6 @@ const cents = (s: string) => {
   return Number(w) * 100 + Number((f + "0").slice(0, 2));
 };
 const money = (c: number) => `${Math.floor(c / 100).toLocaleString("en-US")}.${String(c % 100).padStart(2, "0")}`;
-
-async function inbox(to: string, wait = 15_000) {
-  const until = Date.now() + wait;
-  for (;;) {
-    const list = (await (await fetch(`${MAIL}/messages?to=${encodeURIComponent(to)}`)).json()) as { subject: string; text: string; html: string }[];
-    if (list.length || Date.now() > until) return list;
-    await new Promise((r) => setTimeout(r, 300));
-  }
-}
 
 async function sheetReady(page: Page) {
   await page.getByTestId("recommendation-sheet").locator("canvas").waitFor({ timeout: 20_000 });
