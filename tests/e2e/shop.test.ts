@@ -7,7 +7,6 @@ import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser
 import { signedIn } from "../support/http";
 import { inbox } from "../support/inbox";
 
-
 /** Pages in a PDF: the page tree's /Count (ISO 32000-1 §7.7.3.2), cross-checked by the /Type /Page objects. */
 function pdfPages(pdf: Buffer) {
   const text = pdf.toString("latin1");
