@@ -1,7 +1,7 @@
 // A recommendation sheet's rules without the database: the zod schemas of what a person fills
 // in (shared by the form in the browser and the API) and the statuses.
 import { z } from "zod";
-import { pulleyDiameterSchema } from "@/calc";
+import { pulleyDiameterSchema, rpmSchema } from "@/calc";
 import { moneySchema, partNumberSchema } from "./shelf-rules";
 
 const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).trim().max(max, `${label} must be at most ${max} characters.`);
@@ -22,6 +22,10 @@ export const partLineSchema = z.object({
 /** What a person fills in; the server adds the spec snapshot, line totals and the total. */
 export const recommendationInputSchema = z.object({
   combinationId: z.uuid({ error: "Choose a combination." }),
+  /** Which saved revision of the combination the sheet is for; the newest when left out. */
+  revision: z.coerce.number({ error: "Revision must be a whole number." }).int("Revision must be a whole number.").min(1, "Revision must be 1 or more.").optional(),
+  /** What the customer reads at the top of the sheet, e-mail and link; the combination's own name stays internal. */
+  title: text("Title", 160).default(""),
   customerName: text("Customer name", 120).min(1, "Give the customer's name."),
   customerEmail: z
     .union([z.literal(""), z.null(), z.email({ error: "Customer e-mail must be an e-mail address like name@example.com." }).trim().toLowerCase().max(200)])
@@ -31,10 +35,15 @@ export const recommendationInputSchema = z.object({
   notes: text("Notes", 4000).default(""),
   /** The recommended blower pulley (m). */
   blowerPulleyDiameter: pulleyDiameterSchema,
+  /** The engine speed (rpm) the boost was sold at: the sheet's headline boost is read there; redline when left out. */
+  targetRpm: z.union([rpmSchema, z.literal(""), z.null()]).optional().transform((v) => (typeof v === "number" ? v : null)),
   parts: z.array(partLineSchema, { error: "Parts must be a list of lines." }).max(MAX_PART_LINES, `A sheet may have at most ${MAX_PART_LINES} part lines.`).default([]),
 });
 
-export const updateRecommendationSchema = recommendationInputSchema.omit({ combinationId: true });
+export const updateRecommendationSchema = recommendationInputSchema.omit({ combinationId: true, revision: true });
+
+/** The title a sheet shows when none was given: never the combination's internal name. */
+export const defaultSheetTitle = (customerName: string) => `Blower pulley recommendation for ${customerName}`;
 
 export const STATUSES = ["draft", "sent", "accepted", "declined"] as const;
 export type RecommendationStatus = (typeof STATUSES)[number];

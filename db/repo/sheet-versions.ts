@@ -8,7 +8,7 @@ import type { DbOrTx } from "../connect";
 import { ConflictError, NotFoundError } from "../errors";
 import { assert, canWriteRecommendations, type Actor } from "../policy";
 import { recommendations, sheetVersions, type SheetVersionRow } from "../schema";
-import type { PartLine } from "../recommendation-rules";
+import { defaultSheetTitle, type PartLine } from "../recommendation-rules";
 import { getRecommendation, type Recommendation } from "./recommendations";
 
 /** The sheet as sent: what the customer's link shows and what an order is made from. */
@@ -46,7 +46,7 @@ export async function recordSentVersion(db: DbOrTx, actor: Actor, rec: Recommend
   assert(canWriteRecommendations(actor), "Only the shop's sales, tuners and admin send sheets.");
   const snapshot: StoredSnapshot = {
     id: rec.id,
-    title: rec.title || `Blower pulley recommendation for ${rec.customerName}`,
+    title: rec.title || defaultSheetTitle(rec.customerName),
     customerName: rec.customerName,
     customerEmail: rec.customerEmail,
     vehicleNotes: rec.vehicleNotes,

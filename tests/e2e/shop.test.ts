@@ -76,7 +76,8 @@ describe("shop: recommendation sheet and parts shelf", () => {
 
     await sheetReady(page);
     await expect(page.getByTestId("recommended-pulley").textContent()).resolves.toBe("3.00 in");
-    await expect(page.getByTestId("sheet-total").textContent()).resolves.toBe(expectedTotal);
+    // The shop's currency (USD in the demo) is shown with its symbol.
+    await expect(page.getByTestId("sheet-total").textContent()).resolves.toBe(`$${expectedTotal}`);
     await expect(page.getByTestId("sheet-status").textContent()).resolves.toBe("Draft");
     await expect(page.getByTestId("cautions-panel").isVisible()).resolves.toBe(true);
     expect(await page.getByText("Street car <on pump fuel> & weekends").count()).toBe(1);
@@ -107,7 +108,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const [mail] = mails;
     expect(mail.subject).toMatch(/recommendation/i);
     expect(mail.text).toContain("Recommended blower pulley: 3.00 in");
-    expect(mail.text).toContain(`Total: ${expectedTotal}`);
+    expect(mail.text).toContain(`Total: $${expectedTotal}`);
     expect(mail.html).toContain("Open the recommendation sheet");
     const link = mail.text.match(/https?:\/\/\S+\/share\/\S+/)?.[0];
     expect(link).toBeDefined();
@@ -120,8 +121,8 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const sharedErrors = watchErrors(shared);
     await shared.goto(link!);
     await sheetReady(shared);
-    await expect(shared.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Jordan Example");
-    await expect(shared.getByTestId("sheet-total").textContent()).resolves.toBe(expectedTotal);
+    await expect(shared.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Blower pulley recommendation for Jordan Example");
+    await expect(shared.getByTestId("sheet-total").textContent()).resolves.toBe(`$${expectedTotal}`);
     expect(await shared.getByRole("button", { name: /send|edit|mark/i }).count()).toBe(0);
     expect(sharedErrors).toEqual([]);
     // Change one character of the signature: the page refuses, plainly.

@@ -8,18 +8,18 @@ export const metadata: Metadata = { title: "Recommendation sheet" };
 
 export default async function RecommendationPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const { sheet, shop, unitSystem } = await loadForStaff(id);
+  const { sheet, shop, currency, unitSystem } = await loadForStaff(id);
   return (
     <div className="flex flex-col gap-4">
       <nav aria-label="Breadcrumb" className="no-print text-sm">
         <Link href="/recommendations" className="underline">
           Recommendations
         </Link>{" "}
-        / {sheet.customerName}
+        / {sheet.customerName} <span className="text-muted">· {sheet.combinationName}, revision {sheet.revision} (internal)</span>
       </nav>
       <SheetActions id={sheet.id} status={sheet.status} customerEmail={sheet.customerEmail} sentAt={sheet.sentAt ? sheet.sentAt.toISOString() : null} lastError={sheet.lastError} />
       <div className="rounded-md border border-line bg-panel p-4">
-        <SheetView sheet={sheet} shop={shop} unitSystem={unitSystem} />
+        <SheetView sheet={sheet} shop={shop} currency={currency} unitSystem={unitSystem} />
       </div>
     </div>
   );

@@ -59,7 +59,7 @@ export default async function SharedSheetPage({ params, searchParams }: Props) {
         </span>
       </div>
       <AnswerState answer={loaded.answer} token={token} justPaid={sp.paid === "1"} cancelled={sp.checkout === "cancelled"} />
-      <SheetView sheet={loaded.sheet} shop={loaded.shop} unitSystem={loaded.unitSystem} />
+      <SheetView sheet={loaded.sheet} shop={loaded.shop} currency={loaded.currency} unitSystem={loaded.unitSystem} />
     </div>
   );
 }

@@ -36,7 +36,7 @@ export async function loadSentSheet(token: string, units: unknown): Promise<Sent
   if (!sent) {
     const legacy = await loadByToken(token, units);
     if (!legacy.ok) return legacy;
-    return { ...legacy, ok: true, title: legacy.sheet.customerName, currency: (await getShopTerms(db)).currency, expiresAt: v.expiresAt, version: null, answer: { kind: "none" } };
+    return { ...legacy, ok: true, title: legacy.sheet.title, expiresAt: v.expiresAt, version: null, answer: { kind: "none" } };
   }
   const [shop, terms, order] = await Promise.all([getShopDetails(db), getShopTerms(db), getCustomerOrder(db, grant)]);
   const s = sent.snapshot;

@@ -27,7 +27,7 @@ export const POST = route(async (_req, { params }: Ctx) => {
   const [shop, terms] = await Promise.all([getShopDetails(db), getShopTerms(db)]);
   const version = await recordSentVersion(db, actor, rec, terms.currency);
   const link = sentVersionLink(version, unitSystem);
-  const mail = buildSheetEmail({ sheet: rec, shop, unitSystem, link: link.url, expiresAt: link.expiresAt });
+  const mail = buildSheetEmail({ sheet: rec, shop, currency: terms.currency, unitSystem, link: link.url, expiresAt: link.expiresAt });
   try {
     await sendMail({ to: rec.customerEmail, ...mail });
   } catch (err) {
