@@ -5,7 +5,7 @@
 // and the deposit rule; the half-up rounding of a part-cent is common practice, no published source.
 import http from "node:http";
 import { eq } from "drizzle-orm";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { exampleCombination } from "@/calc";
 import { freePort } from "@/db/cluster";
 import type { Actor } from "@/db/policy";
@@ -18,6 +18,8 @@ import { freshDatabase, makeUser, type TestDb } from "../support/db";
 import { mockSession } from "../support/session-mock";
 
 const ctx = mockSession();
+// No app is served here for Chromium to print: the sheet's PDF is a stand-in of a few bytes.
+vi.doMock("@/app/_lib/pdf", () => ({ renderPdf: async () => Buffer.from("%PDF-1.7 stand-in") }));
 
 // The webhook bridge: the fake POSTs here, the handler answers.
 let webhookHandler: (req: Request) => Promise<Response> = async () => new Response("not ready", { status: 503 });
@@ -45,6 +47,7 @@ const one = await import("@/app/api/orders/[id]/route");
 const cancel = await import("@/app/api/orders/[id]/cancel/route");
 const fitted = await import("@/app/api/orders/[id]/fitted/route");
 const terms = await import("@/app/api/shop/terms/route");
+const preview = await import("@/app/api/recommendations/[id]/email-preview/route");
 
 const req = (method: string, path: string, body?: unknown) =>
   new Request(`http://test.local${path}`, { method, headers: body === undefined ? {} : { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
@@ -220,6 +223,24 @@ describe("two customers race for the last pulley", () => {
 });
 
 describe("the sheet as sent", () => {
+  it("the e-mail can be previewed before it goes, and goes with the sheet's PDF attached", async () => {
+    const part = await shelfPulley(5);
+    const rec = await createRecommendation(t.db, sales, { combinationId: comboId, title: "Pulley for the blue wagon", customerName: "Preview Example", customerEmail: "preview@example.com", blowerPulleyDiameter: 0.08, parts: [{ partNumber: part, description: "x", unitPrice: "0", quantity: 2 }] });
+    as(member);
+    expect((await preview.GET(req("GET", `/api/recommendations/${rec.id}/email-preview`), params({ id: rec.id }))).status).toBe(403);
+    as(sales);
+    const p = await (await preview.GET(req("GET", `/api/recommendations/${rec.id}/email-preview`), params({ id: rec.id }))).json();
+    expect(p.to).toBe("preview@example.com");
+    expect(p.subject).toContain("Pulley for the blue wagon");
+    expect(p.text).toContain("Total: $270.00");
+    expect(p.text).not.toContain("Internal: Smith");
+    ctx.mails.length = 0;
+    const r = await (await send.POST(req("POST", `/api/recommendations/${rec.id}/send`), params({ id: rec.id }))).json();
+    expect(r.pdfAttached).toBe(true);
+    expect(ctx.mails[0].subject).toBe(p.subject);
+    expect(ctx.mails[0].attachments).toEqual([{ filename: "recommendation-preview-example.pdf" }]);
+  });
+
   it("edits after sending never change the sent version; sending again makes a new one and the old link cannot be paid", async () => {
     const part = await shelfPulley(5);
     const s = await sentSheet(part, "Original Name");

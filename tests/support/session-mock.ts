@@ -4,7 +4,7 @@
 // in `session.userId`. Call it before importing the handlers, which the tests import dynamically.
 import { vi } from "vitest";
 
-export type SentMail = { to: string; subject: string; text: string };
+export type SentMail = { to: string; subject: string; text: string; attachments?: { filename: string }[] };
 export type MockSession = { db: unknown; userId: string | null; mails: SentMail[] };
 
 export function mockSession(): MockSession {
@@ -25,7 +25,7 @@ export function mockSession(): MockSession {
   }));
   vi.doMock("@/app/_lib/mail", () => ({
     sendMail: async (m: SentMail) => {
-      session.mails.push({ to: m.to, subject: m.subject, text: m.text });
+      session.mails.push({ to: m.to, subject: m.subject, text: m.text, attachments: m.attachments?.map((a) => ({ filename: a.filename })) });
       return {};
     },
     appUrl: (p: string) => `http://127.0.0.1:1${p}`,

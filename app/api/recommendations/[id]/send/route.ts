@@ -2,20 +2,21 @@ import { NextResponse } from "next/server";
 import { route } from "@/app/_lib/http";
 import { sendMail } from "@/app/_lib/mail";
 import { getCurrentUser, requireActor } from "@/app/_lib/session";
+import { composeSheetMail, sheetPdfAttachment } from "@/app/_lib/sheet-mail";
 import { sentVersionLink } from "@/app/_lib/share-url";
-import { buildSheetEmail } from "@/components/recommendation/email";
 import { getDb } from "@/db/client";
 import { FieldError } from "@/db/errors";
 import { getRecommendation, markRecommendationSent, recordSendFailure } from "@/db/repo/recommendations";
 import { discardSentVersion, recordSentVersion } from "@/db/repo/sheet-versions";
-import { getShopDetails, getShopTerms } from "@/db/repo/shop";
+import { getShopTerms } from "@/db/repo/shop";
 
 type Ctx = { params: Promise<{ id: string }> };
 
 /**
- * E-mails the sheet to the customer with a link (30 days) to a frozen copy of it as it is now:
- * each send is a new version, and later edits never change what the link shows. Success records
- * the time and status "sent"; a failure keeps the status, discards the version and records the error.
+ * E-mails the sheet to the customer, with its PDF attached and a link (30 days) to a frozen copy
+ * of it as it is now: each send is a new version, and later edits never change what the link
+ * shows. Success records the time and status "sent"; a failure keeps the status, discards the
+ * version and records the error.
  */
 export const POST = route(async (_req, { params }: Ctx) => {
   const actor = await requireActor(["sales", "tuner", "admin"]);
@@ -24,12 +25,11 @@ export const POST = route(async (_req, { params }: Ctx) => {
   const rec = await getRecommendation(db, actor, id);
   if (!rec.customerEmail) throw new FieldError("customerEmail", "Add the customer's e-mail address to the sheet before sending it.");
   const unitSystem = (await getCurrentUser())?.unitSystem ?? "imperial";
-  const [shop, terms] = await Promise.all([getShopDetails(db), getShopTerms(db)]);
-  const version = await recordSentVersion(db, actor, rec, terms.currency);
+  const version = await recordSentVersion(db, actor, rec, (await getShopTerms(db)).currency);
   const link = sentVersionLink(version, unitSystem);
-  const mail = buildSheetEmail({ sheet: rec, shop, currency: terms.currency, unitSystem, link: link.url, expiresAt: link.expiresAt });
+  const [{ mail }, pdf] = await Promise.all([composeSheetMail(db, rec, unitSystem, link), sheetPdfAttachment(rec, unitSystem)]);
   try {
-    await sendMail({ to: rec.customerEmail, ...mail });
+    await sendMail({ to: rec.customerEmail, ...mail, ...(pdf ? { attachments: [pdf] } : {}) });
   } catch (err) {
     await discardSentVersion(db, actor, version.id);
     const message = `The e-mail to ${rec.customerEmail} could not be sent (${err instanceof Error ? err.message : String(err)}). The sheet was not sent; check the mail settings and try again.`;
@@ -37,5 +37,5 @@ export const POST = route(async (_req, { params }: Ctx) => {
     return NextResponse.json({ error: message }, { status: 502 });
   }
   const row = await markRecommendationSent(db, actor, id, version.sentAt);
-  return { id, status: row.status, sentAt: row.sentAt, version: version.version, shareUrl: link.url };
+  return { id, status: row.status, sentAt: row.sentAt, version: version.version, shareUrl: link.url, pdfAttached: pdf !== null };
 });
