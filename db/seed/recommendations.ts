@@ -14,6 +14,8 @@ export async function seedRecommendations(db: Db, people: DemoUsers, combos: Dem
   if (existing) return;
   await createRecommendation(db, people.sales, {
     combinationId: combos.smallBlock,
+    title: "A smaller blower pulley for the street small-block",
+    targetRpm: 5500,
     customerName: "Jordan Example",
     customerEmail: "jordan@example.com",
     vehicleNotes: "Street car, pump fuel, weekend use. Heads and cam already done.",
