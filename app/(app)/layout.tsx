@@ -2,8 +2,11 @@ import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { Logo } from "@/components/logo";
 import { NavLinks, type NavItem } from "@/components/nav-links";
+import { CurrencyProvider } from "@/components/price";
 import { SignOutButton } from "@/components/sign-out-button";
 import { ThemeSwitch } from "@/components/theme-switch";
+import { getDb } from "@/db/client";
+import { getShopTerms } from "@/db/repo/shop";
 import type { Role } from "@/db/schema";
 
 const ALL: Role[] = ["member", "tuner", "sales", "instructor", "admin"];
@@ -22,7 +25,7 @@ const NAV: (NavItem & { roles: Role[] })[] = [
 const roleNames: Record<Role, string> = { member: "Member", tuner: "Tuner", sales: "Sales", instructor: "Instructor", admin: "Admin" };
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
-  const user = await requirePageUser();
+  const [user, terms] = await Promise.all([requirePageUser(), getShopTerms(getDb())]);
   const items = NAV.filter((n) => n.roles.includes(user.role)).map(({ href, label }) => ({ href, label }));
   return (
     <div className="flex min-h-screen flex-col">
@@ -42,7 +45,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
-        {children}
+        <CurrencyProvider currency={terms.currency}>{children}</CurrencyProvider>
       </main>
     </div>
   );

@@ -7,10 +7,11 @@ import { fromSI, unitLabel, type UnitSystem } from "@/calc";
 import { apiJson, queryString } from "@/components/shelf/api";
 import { Pager, SelectField } from "@/components/shelf/table-parts";
 import { Notice } from "@/components/ui/notice";
-import { formatMoney } from "@/db/shelf-rules";
+import { usePrice } from "@/components/price";
 
 type Row = {
   id: string;
+  title: string;
   customerName: string;
   customerEmail: string | null;
   status: string;
@@ -24,6 +25,7 @@ type Row = {
 };
 
 export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) {
+  const price = usePrice();
   const [search, setSearch] = useState("");
   const [status, setStatus] = useState("");
   const [page, setPage] = useState(1);
@@ -45,7 +47,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
             id="rec-search"
             type="search"
             value={search}
-            placeholder="Customer or combination"
+            placeholder="Customer, title or combination"
             onChange={(e) => {
               setSearch(e.target.value);
               setPage(1);
@@ -88,6 +90,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
                   <Link href={`/recommendations/${r.id}`} className="font-medium underline">
                     {r.customerName}
                   </Link>
+                  {r.title ? <span className="block text-xs">{r.title}</span> : null}
                   {r.customerEmail ? <span className="block text-xs text-muted">{r.customerEmail}</span> : null}
                 </td>
                 <td className="px-2 py-1.5">
@@ -95,7 +98,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
                 </td>
                 <td className="px-2 py-1.5 text-right">{fromSI("length-small", r.blowerPulleyDiameter, unitSystem).toFixed(unitSystem === "metric" ? 1 : 2)}</td>
                 <td className="px-2 py-1.5 capitalize">{r.status}</td>
-                <td className="px-2 py-1.5 text-right">{formatMoney(r.total)}</td>
+                <td className="px-2 py-1.5 text-right">{price(r.total)}</td>
                 <td className="px-2 py-1.5">{new Date(r.updatedAt).toLocaleDateString("en-GB", { dateStyle: "medium" })}</td>
                 <td className="px-2 py-1.5">{r.authorName}</td>
               </tr>

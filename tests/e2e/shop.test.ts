@@ -188,7 +188,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await page.getByText("Added PW-BL-E2E1.").waitFor();
     const row = page.locator('tr[data-part="PW-BL-E2E1"]');
     await row.waitFor();
-    await expect(row.getByTestId("price").textContent()).resolves.toBe("3,999.50");
+    await expect(row.getByTestId("price").textContent()).resolves.toBe("$3,999.50");
     page.once("dialog", (d) => void d.accept());
     await row.getByRole("button", { name: "Remove PW-BL-E2E1" }).click();
     await page.getByText("Removed PW-BL-E2E1.").waitFor();
@@ -210,7 +210,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await price.fill("123.4");
     await page.getByRole("button", { name: "Save pulley" }).click();
     await page.getByText("Saved PW-BP-0320-8.").waitFor();
-    await expect(row.getByTestId("price").textContent()).resolves.toBe("123.40");
+    await expect(row.getByTestId("price").textContent()).resolves.toBe("$123.40");
     // A bad price is refused in the form, naming the field.
     await row.getByRole("button", { name: "Edit PW-BP-0320-8" }).click();
     await price.fill("12.345");
