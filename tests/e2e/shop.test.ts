@@ -43,12 +43,14 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const email = `e2e-${Date.now()}@example.com`;
 
     await page.goto(`${BASE_URL}/recommendations/new`);
-    const select = page.getByLabel("Combination", { exact: true });
-    const label = (await select.locator("option").allTextContents()).find((t) => t.startsWith("Small-block 5.0 L street build"));
-    expect(label).toBeDefined();
-    await select.selectOption({ label: label! });
-    await page.getByRole("button", { name: "Continue" }).click();
+    // The searchable picker: find the combination by a word of its name, then open it.
+    await page.getByLabel("Find the combination").fill("street build");
+    await page.getByRole("button", { name: "Search" }).click();
+    await page.waitForURL(/search=street/);
+    await page.getByTestId("combination-choices").getByRole("link", { name: /^Small-block 5\.0 L street build/ }).click();
     await page.waitForURL(/\/recommendations\/new\?combination=/);
+    // It has three revisions; the newest is preselected.
+    await expect(page.getByLabel("Revision to use").inputValue()).resolves.toBe("3");
 
     // The ladder lists the shelf's blower pulleys; choose 3.00 in from it.
     await page.getByRole("button", { name: "Choose the 3.00 in pulley" }).click();
@@ -58,7 +60,9 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await page.getByRole("button", { name: "Find pulley" }).click();
     await expect(page.getByTestId("finder-result").textContent()).resolves.toMatch(/Exact size: [\d.]+ in gives 8\.0 psi/);
 
-    await expect(page.getByLabel("Customer name").inputValue()).resolves.toBe("Jordan Example");
+    // A new customer's fields start empty: nothing of the combination's own customer carries over.
+    await expect(page.getByLabel("Customer name").inputValue()).resolves.toBe("");
+    await page.getByLabel("Customer name").fill("Jordan Example");
     await page.getByLabel("Customer e-mail").fill(email);
     await page.getByLabel("Vehicle notes").fill("Street car <on pump fuel> & weekends");
     await page.getByRole("button", { name: "Add this pulley to the parts" }).click();
