@@ -105,8 +105,12 @@ describe("shop: recommendation sheet and parts shelf", () => {
     expect(pdfPages(await res.body())).toEqual({ count: 1, objects: 1 });
 
     // E-mail it.
+    // The e-mail is previewed before it goes; the PDF goes attached; the link then shows on the page.
+    await page.getByRole("button", { name: "Preview the e-mail" }).click();
+    await expect(page.getByTestId("email-preview").textContent()).resolves.toContain(`Total: $${expectedTotal}`);
     await page.getByRole("button", { name: "Send to customer" }).click();
-    await page.getByTestId("sheet-status").filter({ hasText: "Sent" }).waitFor({ timeout: 20_000 });
+    await page.getByTestId("sheet-status").filter({ hasText: "Sent" }).waitFor({ timeout: 60_000 });
+    await expect(page.getByLabel(/The customer's link/).inputValue()).resolves.toMatch(/\/share\//);
     const mails = await inbox(email);
     expect(mails).toHaveLength(1);
     const [mail] = mails;

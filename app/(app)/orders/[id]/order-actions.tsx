@@ -1,40 +1,21 @@
 "use client";
 // What staff do with an order: mark it fitted (with the datalog that verified it), or cancel it,
 // which refunds a paid deposit through the payment service and puts the parts back on the shelf.
-import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { apiJson } from "@/components/shelf/api";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { useAction } from "@/components/ui/use-action";
 
 type Props = { id: string; canFit: boolean; canCancel: boolean; refunds: boolean; deposit: string; datalogs: { id: string; name: string }[] };
 
-async function post(url: string, body: unknown) {
-  const r = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-  const out = await r.json().catch(() => ({}));
-  if (!r.ok) throw new Error(out.error ?? `The server answered ${r.status}.`);
-  return out;
-}
+const post = (url: string, json: unknown) => apiJson<{ status: string }>(url, { method: "POST", json });
 
 export function OrderActions({ id, canFit, canCancel, refunds, deposit, datalogs }: Props) {
-  const router = useRouter();
-  const [busy, setBusy] = useState(false);
+  const { busy, message, run } = useAction();
   const [datalogId, setDatalogId] = useState("");
   const [reason, setReason] = useState("");
-  const [message, setMessage] = useState<{ tone: "ok" | "danger"; text: string } | null>(null);
   if (!canFit && !canCancel) return null;
-
-  async function run(fn: () => Promise<string>) {
-    setBusy(true);
-    setMessage(null);
-    try {
-      setMessage({ tone: "ok", text: await fn() });
-    } catch (e) {
-      setMessage({ tone: "danger", text: e instanceof Error ? e.message : "That did not work." });
-    } finally {
-      setBusy(false);
-      router.refresh();
-    }
-  }
 
   return (
     <section aria-labelledby="order-actions-title" className="flex max-w-2xl flex-col gap-3 rounded-md border border-line bg-panel p-3">
@@ -56,7 +37,7 @@ export function OrderActions({ id, canFit, canCancel, refunds, deposit, datalogs
               ))}
             </select>
           </div>
-          <Button type="button" disabled={busy} onClick={() => run(async () => (await post(`/api/orders/${id}/fitted`, { datalogId }), "Marked fitted."))}>
+          <Button type="button" disabled={!!busy} onClick={() => run("fit", async () => (await post(`/api/orders/${id}/fitted`, { datalogId }), "Marked fitted."))}>
             Mark fitted
           </Button>
         </div>
@@ -72,10 +53,10 @@ export function OrderActions({ id, canFit, canCancel, refunds, deposit, datalogs
           <Button
             type="button"
             variant="danger"
-            disabled={busy}
+            disabled={!!busy}
             onClick={() => {
               if (refunds && !window.confirm(`Cancel the order and refund the deposit of ${deposit}?`)) return;
-              void run(async () => ((await post(`/api/orders/${id}/cancel`, { reason })).status === "refunded" ? `Cancelled; ${deposit} refunded and the parts put back on the shelf.` : "Cancelled."));
+              void run("cancel", async () => ((await post(`/api/orders/${id}/cancel`, { reason })).status === "refunded" ? `Cancelled; ${deposit} refunded and the parts put back on the shelf.` : "Cancelled."));
             }}
           >
             {refunds ? `Cancel and refund ${deposit}` : "Cancel the order"}

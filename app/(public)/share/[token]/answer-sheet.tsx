@@ -3,15 +3,11 @@
 // decline with an optional reason.
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { apiJson } from "@/components/shelf/api";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 
-async function post(url: string, body?: unknown) {
-  const r = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body ?? {}) });
-  const out = await r.json().catch(() => ({}));
-  if (!r.ok) throw new Error(out.error ?? `The server answered ${r.status}.`);
-  return out;
-}
+const post = <T,>(url: string, json: unknown = {}) => apiJson<T>(url, { method: "POST", json });
 
 export function AnswerSheet({ token, deposit }: { token: string; deposit: string }) {
   const router = useRouter();
@@ -25,7 +21,7 @@ export function AnswerSheet({ token, deposit }: { token: string; deposit: string
     setBusy(true);
     setError(null);
     try {
-      const { url } = await post(`${base}/checkout`);
+      const { url } = await post<{ url: string }>(`${base}/checkout`);
       window.location.assign(url);
     } catch (e) {
       setError(e instanceof Error ? e.message : "That did not work.");
