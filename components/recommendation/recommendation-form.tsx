@@ -13,7 +13,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { recommendationInputSchema } from "@/db/recommendation-rules";
-import { formatMoney, lineTotal, sumMoney } from "@/db/shelf-rules";
+import { usePrice } from "@/components/price";
+import { lineTotal, sumMoney } from "@/db/shelf-rules";
 import { PulleyHelp, type ShelfPulley } from "./pulley-help";
 
 export type ShelfPart = { partNumber: string; description: string; price: string; stock: number; diameter?: number; position?: string };
@@ -35,6 +36,7 @@ const same = (a: number, b: number) => Math.abs(a - b) < 1e-6;
 
 export function RecommendationForm({ mode, id, combination, pulleys, parts, unitSystem, initial }: RecommendationFormProps) {
   const router = useRouter();
+  const price = usePrice();
   const [pick, setPick] = useState("");
   const form = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(recommendationInputSchema),
@@ -128,11 +130,28 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
             Add this pulley to the parts
           </Button>
         </div>
+        <Field
+          label="Boost quoted at"
+          unit="rpm"
+          type="number"
+          inputMode="numeric"
+          className="max-w-xs"
+          {...form.register("targetRpm", { setValueAs: (v) => (v === "" || v === null || v === undefined ? null : Number(v)) })}
+          errors={errors.targetRpm?.message}
+          hint={`The engine speed the customer was sold the boost at; the sheet's headline is read there. Empty: redline (${Math.round(combination.spec.engine.redlineRpm)} rpm).`}
+        />
         <PulleyHelp spec={combination.spec} pulleys={pulleys} unitSystem={unitSystem} chosen={chosen} onChoose={choose} />
       </section>
 
       <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
         <h2 className="text-lg font-semibold">2. Customer and vehicle</h2>
+        <Field
+          label="Title on the sheet"
+          autoComplete="off"
+          {...form.register("title")}
+          errors={errors.title?.message}
+          hint="What the customer reads at the top of the sheet, the e-mail and the link (the combination's own name stays internal). Empty: “Blower pulley recommendation for” the customer's name."
+        />
         <div className="grid gap-3 sm:grid-cols-2">
           <Field label="Customer name" autoComplete="off" {...form.register("customerName")} errors={errors.customerName?.message} />
           <Field label="Customer e-mail" type="email" autoComplete="off" {...form.register("customerEmail")} errors={errors.customerEmail?.message} hint="Needed to send the sheet." />
@@ -161,7 +180,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
               <option value="">Choose a part…</option>
               {parts.map((p) => (
                 <option key={p.partNumber} value={p.partNumber}>
-                  {p.partNumber}: {p.description}, {formatMoney(p.price)}
+                  {p.partNumber}: {p.description}, {price(p.price)}
                   {p.stock === 0 ? " (out of stock)" : ""}
                 </option>
               ))}
@@ -267,7 +286,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
                         </p>
                       ) : null}
                     </td>
-                    <td className="py-1 text-right num">{amounts[i] == null ? "–" : formatMoney(amounts[i]!)}</td>
+                    <td className="py-1 text-right num">{amounts[i] == null ? "–" : price(amounts[i]!)}</td>
                     <td className="py-1 text-right">
                       <Button type="button" variant="ghost" onClick={() => lines.remove(i)} aria-label={`Remove line ${i + 1}`}>
                         Remove
@@ -283,7 +302,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
                   Total
                 </th>
                 <td className="py-1 text-right font-semibold" data-testid="form-total">
-                  {total === null ? "–" : formatMoney(total)}
+                  {total === null ? "–" : price(total)}
                 </td>
                 <td />
               </tr>

@@ -63,6 +63,8 @@ describe("shop: recommendation sheet and parts shelf", () => {
     // A new customer's fields start empty: nothing of the combination's own customer carries over.
     await expect(page.getByLabel("Customer name").inputValue()).resolves.toBe("");
     await page.getByLabel("Customer name").fill("Jordan Example");
+    await page.getByLabel("Title on the sheet").fill("A smaller pulley for your street small-block");
+    await page.getByLabel(/Boost quoted at/).fill("5000");
     await page.getByLabel("Customer e-mail").fill(email);
     await page.getByLabel("Vehicle notes").fill("Street car <on pump fuel> & weekends");
     await page.getByRole("button", { name: "Add this pulley to the parts" }).click();
@@ -73,7 +75,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const pulleyPrice = await page.getByLabel("Price each, line 1").inputValue();
     // source: integer-cents arithmetic, the reference for money.
     const expectedTotal = money(cents(pulleyPrice) + 3 * 1999);
-    await expect(page.getByTestId("form-total").textContent()).resolves.toBe(expectedTotal);
+    await expect(page.getByTestId("form-total").textContent()).resolves.toBe(`$${expectedTotal}`);
     await page.getByRole("button", { name: "Save draft sheet" }).click();
     await page.waitForURL(/\/recommendations\/[0-9a-f-]{36}$/, { timeout: 30_000 });
     const id = page.url().split("/").pop()!;
@@ -129,7 +131,10 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const sharedErrors = watchErrors(shared);
     await shared.goto(link!);
     await sheetReady(shared);
-    await expect(shared.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Blower pulley recommendation for Jordan Example");
+    await expect(shared.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("A smaller pulley for your street small-block");
+    await expect(shared.getByTestId("headline-boost").textContent()).resolves.toMatch(/psi boost at 5,000 rpm, predicted$/);
+    // The combination's internal name (and its customer's surname in it) never reaches the customer.
+    expect(await shared.getByText("Small-block 5.0 L street build").count()).toBe(0);
     await expect(shared.getByTestId("sheet-total").textContent()).resolves.toBe(`$${expectedTotal}`);
     expect(await shared.getByRole("button", { name: /send|edit|mark/i }).count()).toBe(0);
     expect(sharedErrors).toEqual([]);
