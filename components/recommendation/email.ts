@@ -69,5 +69,5 @@ ${sheet.notes ? `<p style="white-space:pre-line">${e(sheet.notes)}</p>` : ""}
 <p>${shopLines.map(e).join("<br>")}</p>
 </body></html>`;
 
-  return { subject: `${title}: from ${shop.name}`, text, html };
+  return { subject: `Your recommendation from ${shop.name}: ${title}`, text, html };
 }
