@@ -6,11 +6,11 @@ export default function PublicLayout({ children }: { children: React.ReactNode }
   return (
     <div className="flex min-h-screen flex-col">
       <header className="no-print border-b border-line bg-panel">
-        <div className="mx-auto flex max-w-5xl items-center justify-between px-4 py-3">
+        <div className="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-2 px-4 py-3">
           <Link href="/" aria-label="Pulleywright home">
             <Logo />
           </Link>
-          <nav aria-label="Account" className="flex items-center gap-4 text-sm">
+          <nav aria-label="Account" className="flex flex-wrap items-center gap-x-4 gap-y-2 text-sm">
             <ThemeSwitch />
             <Link href="/sign-in" className="hover:underline">
               Sign in

@@ -247,35 +247,38 @@ export function CurveChart({
           aria-describedby={tableId}
         />
       </div>
-      <table id={tableId} className="sr-only" data-testid="curve-chart-table">
-        <caption>{ariaLabel}</caption>
-        <thead>
-          <tr>
-            <th scope="col">Engine speed (rpm)</th>
-            {series.flatMap((s) =>
-              metrics.map((m) => (
-                <th scope="col" key={`${s.label}-${m}`}>
-                  {`${s.label}: ${METRICS[m].label} (${axisUnit(METRICS[m].kind, unitSystem)})`}
-                </th>
-              )),
-            )}
-          </tr>
-        </thead>
-        <tbody>
-          {rpms.map((rpm) => (
-            <tr key={rpm}>
-              <th scope="row">{fmt(rpm, 0)}</th>
+      {/* The wrapper is what is hidden: a table keeps its own width, and would widen a phone's page. */}
+      <div className="sr-only">
+        <table id={tableId} data-testid="curve-chart-table">
+          <caption>{ariaLabel}</caption>
+          <thead>
+            <tr>
+              <th scope="col">Engine speed (rpm)</th>
               {series.flatMap((s) =>
-                metrics.map((m) => {
-                  const p = s.points.find((q) => q.rpm === rpm);
-                  const v = p ? metricDisplay(m, p, unitSystem) : null;
-                  return <td key={`${s.label}-${m}`}>{v === null ? "–" : fmt(v, axisDigits(METRICS[m].kind, unitSystem))}</td>;
-                }),
+                metrics.map((m) => (
+                  <th scope="col" key={`${s.label}-${m}`}>
+                    {`${s.label}: ${METRICS[m].label} (${axisUnit(METRICS[m].kind, unitSystem)})`}
+                  </th>
+                )),
               )}
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {rpms.map((rpm) => (
+              <tr key={rpm}>
+                <th scope="row">{fmt(rpm, 0)}</th>
+                {series.flatMap((s) =>
+                  metrics.map((m) => {
+                    const p = s.points.find((q) => q.rpm === rpm);
+                    const v = p ? metricDisplay(m, p, unitSystem) : null;
+                    return <td key={`${s.label}-${m}`}>{v === null ? "–" : fmt(v, axisDigits(METRICS[m].kind, unitSystem))}</td>;
+                  }),
+                )}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </figure>
   );
 }

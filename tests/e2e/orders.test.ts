@@ -45,10 +45,32 @@ describe("orders: a customer pays the deposit through the hosted checkout", () =
     const link = mail.text.match(/https?:\/\/\S+\/share\/\S+/)?.[0];
     expect(link).toBeDefined();
 
-    const customer = await browser.newContext();
+    // On a phone (375 CSS px wide, the common small viewport; author's choice): nothing runs off
+    // the side, and the parts table keeps its quantity and its price apart.
+    const customer = await browser.newContext({ viewport: { width: 375, height: 812 }, isMobile: true, hasTouch: true });
     const page = await customer.newPage();
     const errors = watchErrors(page);
     await page.goto(link!);
+    await page.getByTestId("recommendation-sheet").locator("canvas").waitFor({ timeout: 20_000 });
+    const widths = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, client: document.documentElement.clientWidth }));
+    const wide = await page.evaluate(() => [...document.querySelectorAll("*")].filter((e) => e.getBoundingClientRect().right > 376).slice(0, 12).map((e) => `${e.tagName}.${e.className} ${Math.round(e.getBoundingClientRect().right)}`));
+    expect(widths.scroll, wide.join("\n")).toBeLessThanOrEqual(widths.client);
+    const row = page.getByTestId("parts-table").locator("tbody tr").first();
+    const qty = (await row.getByTestId("part-qty").boundingBox())!;
+    const each = (await row.locator("td").nth(2).boundingBox())!;
+    const qtyText = await row.getByTestId("part-qty").evaluate((td) => {
+      const r = document.createRange();
+      r.selectNodeContents(td);
+      return r.getBoundingClientRect().right;
+    });
+    const eachText = await row.locator("td").nth(2).evaluate((td) => {
+      const r = document.createRange();
+      r.selectNodeContents(td);
+      return r.getBoundingClientRect().left;
+    });
+    expect(qty.x + qty.width).toBeLessThanOrEqual(each.x + 0.5);
+    expect(eachText - qtyText).toBeGreaterThanOrEqual(8);
+    expect(await row.locator("td").nth(2).textContent()).toMatch(/^\$/);
     await page.getByRole("button", { name: /Accept and pay the deposit/ }).click();
     await page.waitForURL((u) => u.href.startsWith(`${PAYMENTS}/pay/`), { timeout: 20_000 });
     await page.getByRole("button", { name: "Pay" }).click();
