@@ -1,5 +1,5 @@
 // The blower's side: slip through the clearances, compression work of the ideal cycle with a
-// built-in volume ratio, and the discharge temperature from the energy balance (model.md §3.4–7).
+// built-in volume ratio, and the discharge temperature from the energy balance (calc/README.md).
 import {
   KAPPA,
   GAMMA,

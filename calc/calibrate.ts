@@ -1,4 +1,4 @@
-// Calibrate the engine's VE curve from measured boost (model.md §4): at a measured pressure
+// Calibrate the engine's VE curve from measured boost (calc/README.md): at a measured pressure
 // ratio the blower's delivery is known, so VE follows in closed form, point by point.
 import { GAS_CONSTANT } from "./constants";
 import { CalcConvergenceError, CalcInputError } from "./errors";
@@ -10,7 +10,7 @@ import {
   type MeasuredPoint,
   type VePoint,
 } from "./schema";
-import { blowerState, prepare, solvePrepared, type TrialState } from "./solve";
+import { blowerStateAtManifold, effectiveVe, newState, prepare, solvePrepared, type PreparedCombination, type TrialState } from "./solve";
 
 /** How well the calibrated curve reproduces one measured point. */
 export interface CalibrationResidual {
@@ -38,37 +38,42 @@ export interface CalibrationResult {
   readonly residuals: CalibrationResidual[];
 }
 
+/**
+ * The VE (fraction) at which the model meets one measured point, in closed form: at the
+ * measured boost the blower's delivery is known, and the engine must swallow it. Returns a
+ * message instead when the boost is impossible for this blower (state holds the model's state).
+ */
+export function impliedVe(p: PreparedCombination, m: { rpm: number; boostGauge: number; manifoldTemperature?: number | null }, state: TrialState): number | string {
+  const pm = p.p0 + m.boostGauge;
+  if (!(pm > 0) || !((pm + p.dpic) / p.p1 > 0)) return `The boost measured at ${m.rpm} rpm gives a manifold pressure at or below zero`;
+  blowerStateAtManifold(p, m.rpm, pm, state);
+  if (!(state.deliveredFlow > 0) || !(state.tm > 0)) {
+    return `The boost measured at ${m.rpm} rpm is beyond what this blower can hold at that speed (dead-head). Check the blower data and pulleys.`;
+  }
+  const tm = m.manifoldTemperature ?? state.tm;
+  // ṁ = Pm/(R·Tm)·Vd·(N/120)·VE·(refinements at Pm, Tm): solve for VE.
+  return (state.massFlow * GAS_CONSTANT * tm) / (pm * ((p.combination.engine.displacement * m.rpm) / 120) * effectiveVe(p, 1, pm, tm));
+}
+
 /** VE curve that reproduces measured boost (Pa gauge) at each measured speed (rev/min), using measured manifold temperature (K) when given. */
 export function calibrateVe(combination: CombinationInput, measured: readonly MeasuredPoint[]): CalibrationResult {
   const c = parseOrThrow(combinationSchema, combination);
   const list = parseOrThrow(measuredListSchema, measured, "measured");
   const p = prepare(c);
   const order = list.map((m, index) => ({ m, index })).sort((x, y) => x.m.rpm - y.m.rpm);
-  const state: TrialState = { sweptFlow: 0, deliveredFlow: 0, massFlow: 0, workRatio: 0, airPower: 0, t2: 0, tm: 0, p2: 0, pm: 0 };
+  const state = newState();
   const veCurve: VePoint[] = [];
   const modelTm: number[] = [];
   for (const { m, index } of order) {
     const field = `measured.${index}.boostGauge`;
-    const pm = p.p0 + m.boostGauge;
-    const pr = (pm + p.dpic) / p.p1;
-    const sweptFlow = (p.vb * m.rpm * p.speedFactor) / 60;
-    if (!(pm > 0) || !(pr > 0)) {
-      throw new CalcInputError([{ field, message: `The boost measured at ${m.rpm} rpm gives a manifold pressure at or below zero` }]);
-    }
-    blowerState(p, sweptFlow, pr, state);
-    if (!(state.deliveredFlow > 0) || !(state.tm > 0)) {
+    const implied = impliedVe(p, m, state);
+    if (typeof implied === "string") throw new CalcInputError([{ field, message: implied }]);
+    if (!(implied >= 0.2 && implied <= 2)) {
       throw new CalcInputError([
-        { field, message: `The boost measured at ${m.rpm} rpm is beyond what this blower can hold at that speed (dead-head). Check the blower data and pulleys.` },
+        { field, message: `The boost measured at ${m.rpm} rpm implies a VE of ${implied.toFixed(2)}, outside 0.2–2. Check the blower data, the pulleys and the measurement.` },
       ]);
     }
-    const tm = m.manifoldTemperature ?? state.tm;
-    const ve = (state.massFlow * GAS_CONSTANT * tm) / (pm * ((c.engine.displacement * m.rpm) / 120));
-    if (!(ve >= 0.2 && ve <= 2)) {
-      throw new CalcInputError([
-        { field, message: `The boost measured at ${m.rpm} rpm implies a VE of ${ve.toFixed(2)}, outside 0.2–2. Check the blower data, the pulleys and the measurement.` },
-      ]);
-    }
-    veCurve.push({ rpm: m.rpm, ve });
+    veCurve.push({ rpm: m.rpm, ve: implied });
     modelTm.push(state.tm);
   }
   const calibrated = prepare({ ...c, engine: { ...c.engine, veCurve } });

@@ -2,6 +2,7 @@
 // conservative rules of thumb or demo defaults, named as such; the UI may override them.
 import { z } from "zod";
 import { blowerSpeedUnchecked } from "./drive";
+import { MODEL_MAX_PRESSURE_RATIO } from "./range";
 import { cautionOptionsSchema, combinationSchema, parseOrThrow, type CautionOptions, type Combination, type CombinationInput } from "./schema";
 
 /** Machine-readable code of a caution. */
@@ -43,8 +44,8 @@ export const SAFETY_NOTICE: readonly string[] = [
 export const DEFAULT_BELT_MINIMUM_DIAMETER = 0.076;
 /** Manifold temperature above which to warn, 60 °C: a conservative rule of thumb for knock risk on pump gasoline (common practice, no published source) (K). */
 export const DEFAULT_CHARGE_TEMPERATURE_LIMIT = 333.15;
-/** Highest pressure ratio the model is meant for (dimensionless). */
-export const DEFAULT_MAX_MODEL_PRESSURE_RATIO = 2.5;
+/** Highest pressure ratio the model is meant for (dimensionless): the model's own range bound. */
+export const DEFAULT_MAX_MODEL_PRESSURE_RATIO = MODEL_MAX_PRESSURE_RATIO;
 /** Lowest plausible wide-open-throttle VE (fraction). */
 export const VE_PLAUSIBLE_MIN = 0.5;
 /** Highest plausible wide-open-throttle VE (fraction). */

@@ -1,4 +1,4 @@
-// Physical constants and solver settings of the boost model (model.md §3). SI throughout.
+// Physical constants and solver settings of the boost model (calc/README.md). SI throughout.
 
 /** Ratio of specific heats of dry air, γ (dimensionless). */
 export const GAMMA = 1.4;
@@ -19,7 +19,7 @@ export const GASOLINE_LATENT_HEAT = 350e3;
 /** Density of gasoline used for cc/min conversions, about 0.74 kg/L from memory (kg/L). */
 export const GASOLINE_DENSITY_KG_PER_L = 0.74;
 
-/** Relative tolerance on the pressure ratio (and on pulley diameters) of every solve, tighter than the 1e-10 model.md asks (dimensionless). */
+/** Relative tolerance on the pressure ratio (and on pulley diameters) of every solve, tighter than the 1e-10 the contract asks (dimensionless). */
 export const SOLVER_RELATIVE_TOLERANCE = 1e-12;
 /** Iteration limit of the bracketed root finder before it reports non-convergence (count). */
 export const SOLVER_MAX_ITERATIONS = 200;
@@ -29,3 +29,5 @@ export const PRESSURE_RATIO_CEILING = 50;
 export const PRESSURE_RATIO_FLOOR_MARGIN = 0.05;
 /** Growth factor of the upward scan that brackets the lowest stable balance (dimensionless). */
 export const BRACKET_SCAN_FACTOR = 1.15;
+/** Passes of the fixed point on the blower inlet pressure behind a flow-dependent restriction (count). */
+export const RESTRICTION_MAX_PASSES = 60;

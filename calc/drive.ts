@@ -1,4 +1,4 @@
-// The belt drive: drive ratio, overdrive and blower speed (model.md §3.1).
+// The belt drive: drive ratio, overdrive and blower speed (calc/README.md).
 import { combinationSchema, parseOrThrow, positiveSchema, rpmSchema, type Combination, type CombinationInput } from "./schema";
 
 /** Drive ratio r = crank pulley diameter / blower pulley diameter (dimensionless). */

@@ -4,6 +4,10 @@ export * from "./errors";
 export {
   altitudeSchema,
   ambientSchema,
+  calibrationRunSchema,
+  calibrationRunsSchema,
+  inletRestrictionSchema,
+  REFINEMENT_DEFAULTS,
   blowerKindSchema,
   blowerSchema,
   cautionOptionsSchema,
@@ -23,6 +27,7 @@ export {
   veCurveSchema,
   vePointSchema,
   type BlowerKind,
+  type CalibrationRun,
   type CautionOptions,
   type Combination,
   type CombinationInput,
@@ -46,7 +51,17 @@ export {
   slipCoefficient,
   slipFlow,
 } from "./blower";
-export { solvePoint, boostCurve, idealRatioRuleManifoldPressure, type OperatingPoint } from "./solve";
+export { solvePoint, boostCurve, idealRatioRuleManifoldPressure, evaporativeCooling, type OperatingPoint } from "./solve";
+export { explainChange, type ChangeDriver, type ChangeDriverCode, type ChangeExplanation } from "./explain";
+export {
+  RANGE_REASONS,
+  MODEL_MAX_PRESSURE_RATIO,
+  CHARGE_TEMPERATURE_BOUND,
+  BLOWER_OVERSPEED_MARGIN,
+  rangeReasonsOf,
+  type RangeReason,
+} from "./range";
+export { trySolvePoint, trySolveCurve } from "./try-solve";
 export {
   pulleySweep,
   pulleyForBoost,
@@ -57,6 +72,14 @@ export {
   type StockedPulley,
 } from "./pulleys";
 export { calibrateVe, type CalibrationResidual, type CalibrationResult } from "./calibrate";
+export {
+  calibrate,
+  CALIBRATION_SLIP_PRIOR_SIGMA,
+  CALIBRATION_VE_SIGMA,
+  type FittedParameter,
+  type RunResidual,
+  type RunsCalibrationResult,
+} from "./calibrate-runs";
 export {
   cautions,
   SAFETY_NOTICE,

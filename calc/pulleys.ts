@@ -17,6 +17,7 @@ import {
   type CombinationInput,
 } from "./schema";
 import { prepare, solvePrepared, type OperatingPoint } from "./solve";
+import type { RangeReason } from "./range";
 
 /** Smallest blower pulley the finder considers (m): the schema's lower bound. */
 export const PULLEY_FINDER_MIN_DIAMETER = 0.03;
@@ -49,6 +50,10 @@ export interface PulleySweepRow {
   readonly injectorDutyHigh: boolean;
   /** Pressure ratio above what the model is meant for, or below 1. */
   readonly pressureRatioOutOfRange: boolean;
+  /** False when the row is outside the model's range: its point's reasons, or no balance at all. */
+  readonly withinRange: boolean;
+  /** Why the row is outside the model's range (`no-balance` when point is null). */
+  readonly rangeReasons: RangeReason[];
 }
 
 /** Boost and limits per candidate blower pulley diameter (m) at one engine speed (rev/min). */
@@ -87,6 +92,8 @@ export function pulleySweep(
       chargeTemperatureHigh: point !== null && point.manifoldTemperature > t.chargeTemperatureLimit,
       injectorDutyHigh: point !== null && point.injectorDuty !== null && point.injectorDuty > c.fuel.maxDuty,
       pressureRatioOutOfRange: point !== null && (point.pressureRatio > t.maxModelPressureRatio || point.pressureRatio < 1),
+      withinRange: point !== null && point.withinRange,
+      rangeReasons: point === null ? ["no-balance"] : point.rangeReasons,
     };
   });
 }

@@ -1,4 +1,4 @@
-// Zod schemas of every input of the computational core (model.md §2, §4), shared by forms,
+// Zod schemas of every input of the computational core (calc/README.md), shared by forms,
 // the REST API and the entry points. All values SI; messages name the field and its range.
 import { z } from "zod";
 import { CalcInputError, type FieldIssue } from "./errors";
@@ -52,6 +52,21 @@ export const engineSchema = z.object({
   veCurve: veCurveSchema,
   /** Highest engine speed used (rev/min). */
   redlineRpm: bounded("Redline", 1000, 20_000, "rpm"),
+  /**
+   * Exponent n of the charge temperature in the mass the engine traps, ṁ ∝ Pm·Tm^−n at a
+   * given VE curve (dimensionless), default 0.5: heat picked up in the port and cylinder makes
+   * VE rise with a hotter charge (Heywood 1988, ch. 6; the square root of SAE J1349's
+   * temperature correction). 1 is the plain ideal-gas density, as before this refinement.
+   */
+  chargeTemperatureExponent: bounded("Charge temperature exponent", 0, 1, "").optional(),
+  /**
+   * Geometric compression ratio (dimensionless), or null to leave residual gas out (default).
+   * With it, VE follows Heywood's ideal-cycle relation 1 − (Pe/Pm − 1)/(γ·(rc − 1)) relative to
+   * its value unboosted at ambient pressure.
+   */
+  compressionRatio: bounded("Compression ratio", 4, 20, "").nullable().optional(),
+  /** Exhaust back pressure above ambient at the speeds of the curve (Pa, gauge), default 0. */
+  exhaustBackPressure: bounded("Exhaust back pressure", 0, 100_000, "Pa", "gauge").optional(),
 });
 
 /** Kind of positive-displacement blower. */
@@ -99,6 +114,32 @@ export const driveSchema = z.object({
   beltSlip: bounded("Belt slip", 0, 0.2, "", "as a fraction").default(0.02),
 });
 
+/**
+ * Defaults of the model's optional refinements (SI). They are optional in the schema, not
+ * defaulted there, so that every combination written before them keeps its type and parses.
+ */
+export const REFINEMENT_DEFAULTS = {
+  /** Charge temperature exponent n (dimensionless): 0.5, see engineSchema. */
+  chargeTemperatureExponent: 0.5,
+  /** Compression ratio: null, residual gas left out. */
+  compressionRatio: null,
+  /** Exhaust back pressure (Pa, gauge): 0. */
+  exhaustBackPressure: 0,
+  /** Rating depression of an inlet restriction (Pa): 5079, 1.5 inHg, the usual four-barrel carburettor rating (common practice, no published source). */
+  ratingDepression: 5079,
+  /** Fractions of the fuel evaporated in the blower and in the port: 0. */
+  evaporatedInBlower: 0,
+  evaporatedInPort: 0,
+} as const;
+
+/** A throttle body or carburettor as the trade rates it: a flow at a rating depression. */
+export const inletRestrictionSchema = z.object({
+  /** Rated volume flow at the rating depression, at ambient density (m³/s). */
+  ratedFlow: bounded("Rated inlet flow", 0.01, 2, "m³/s", "about 21–4200 cfm"),
+  /** Depression at which the flow is rated (Pa), default 5079 (1.5 inHg, the usual four-barrel rating). */
+  ratingDepression: bounded("Rating depression", 500, 30_000, "Pa").optional(),
+});
+
 /** The air the engine breathes. */
 export const ambientSchema = z
   .object({
@@ -108,6 +149,8 @@ export const ambientSchema = z
     temperature: bounded("Ambient temperature", 220, 330, "K"),
     /** Pressure lost ahead of the blower: filter, throttle body, carburettor (Pa), default 0. */
     inletLoss: bounded("Inlet pressure loss", 0, 20_000, "Pa").default(0),
+    /** A throttle body or carburettor ahead of the blower whose loss grows with flow, or null (default). */
+    inletRestriction: inletRestrictionSchema.nullable().optional(),
   })
   .superRefine((a, ctx) => {
     if (a.inletLoss >= 0.5 * a.pressure) {
@@ -140,8 +183,19 @@ export const fuelSchema = z
     maxDuty: bounded("Maximum injector duty", 0.1, 1, "", "as a fraction").default(0.85),
     /** Fraction of the fuel evaporated ahead of the blower (draw-through), cooling its inlet (fraction), default 0. */
     evaporatedBeforeBlower: bounded("Fuel evaporated before the blower", 0, 1, "", "as a fraction").default(0),
+    /** Fraction of the fuel evaporated inside the blower while the charge is compressed (draw-through) (fraction), default 0. */
+    evaporatedInBlower: bounded("Fuel evaporated in the blower", 0, 1, "", "as a fraction").optional(),
+    /** Fraction of the fuel evaporated in the port after the manifold (port injection), cooling the trapped charge (fraction), default 0. */
+    evaporatedInPort: bounded("Fuel evaporated in the port", 0, 1, "", "as a fraction").optional(),
   })
   .superRefine((f, ctx) => {
+    if (f.evaporatedBeforeBlower + (f.evaporatedInBlower ?? 0) + (f.evaporatedInPort ?? 0) > 1 + 1e-12) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["evaporatedInPort"],
+        message: "The fractions of fuel evaporated before the blower, in the blower and in the port add up to more than 1",
+      });
+    }
     const hasCount = f.injectorCount != null;
     const hasFlow = f.injectorFlow != null;
     if (hasCount !== hasFlow) {
@@ -253,3 +307,18 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, pre
   }));
   throw new CalcInputError(issues);
 }
+
+/** The logs of one blower pulley size: its diameter and the points measured with it. */
+export const calibrationRunSchema = z.object({
+  /** Blower pulley diameter the run was logged with (m). */
+  blowerPulleyDiameter: pulleyDiameterSchema,
+  /** Points measured with it. */
+  measured: measuredListSchema,
+});
+/** Runs for calibration: one per pulley size logged (1–10). */
+export const calibrationRunsSchema = z
+  .array(calibrationRunSchema, { error: "Runs must be a list of {blowerPulleyDiameter, measured} entries" })
+  .min(1, { error: "Give at least one run" })
+  .max(10, { error: "Give at most 10 runs" });
+/** One run as given. */
+export type CalibrationRun = z.input<typeof calibrationRunSchema>;

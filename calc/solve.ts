@@ -1,12 +1,14 @@
-// The balance of blower delivery and engine demand at one engine speed (model.md §3.8–11),
+// The balance of blower delivery and engine demand at one engine speed (calc/README.md, steps 7–8),
 // and the boost curve over many. Entry points validate once, then call the unchecked core.
 import {
   BRACKET_SCAN_FACTOR,
+  GAMMA,
   GAS_CONSTANT,
   GASOLINE_LATENT_HEAT,
   KAPPA,
   PRESSURE_RATIO_CEILING,
   PRESSURE_RATIO_FLOOR_MARGIN,
+  RESTRICTION_MAX_PASSES,
   SOLVER_MAX_ITERATIONS,
   SOLVER_RELATIVE_TOLERANCE,
   SPECIFIC_HEAT_CP,
@@ -15,8 +17,9 @@ import { builtInPressureRatio, slipCoefficient } from "./blower";
 import { driveRatioUnchecked } from "./drive";
 import { veAt } from "./engine";
 import { CalcConvergenceError } from "./errors";
+import { NO_REASONS, rangeReasonsOf, type RangeReason } from "./range";
 import { brent } from "./root-finding";
-import { combinationSchema, parseOrThrow, rpmListSchema, rpmSchema, type Combination, type CombinationInput } from "./schema";
+import { REFINEMENT_DEFAULTS, combinationSchema, parseOrThrow, rpmListSchema, rpmSchema, type Combination, type CombinationInput } from "./schema";
 
 /** Everything the model predicts at one engine speed (SI). */
 export interface OperatingPoint {
@@ -56,10 +59,22 @@ export interface OperatingPoint {
   readonly injectorDuty: number | null;
   /** Engine volumetric efficiency used at this speed (fraction). */
   readonly engineVolumetricEfficiency: number;
+  /**
+   * VE the engine shows referenced to manifold pressure and temperature, with the charge
+   * temperature, residual gas and port cooling refinements applied (fraction): the mass
+   * balance is ṁ = Pm/(R·Tm)·Vd·(N/120)·this.
+   */
+  readonly effectiveVolumetricEfficiency: number;
   /** Blower discharge absolute pressure, before any intercooler (Pa). */
   readonly dischargePressure: number;
+  /** Blower inlet absolute pressure after the fixed and the flow-dependent inlet loss (Pa). */
+  readonly blowerInletPressure: number;
   /** Engine airflow expressed at blower inlet pressure and ambient temperature (m³/s; shown as cfm). */
   readonly inletAirflow: number;
+  /** False when the point lies outside the model's range (see rangeReasons); show no figures then. */
+  readonly withinRange: boolean;
+  /** Why the point is outside the model's range (empty when within it). */
+  readonly rangeReasons: RangeReason[];
 }
 
 /** Constants of one validated combination, computed once per entry-point call. */
@@ -70,7 +85,7 @@ export interface PreparedCombination {
   readonly p0: number;
   /** Ambient temperature (K). */
   readonly t0: number;
-  /** Blower inlet pressure (Pa). */
+  /** Blower inlet pressure before any flow-dependent restriction (Pa). */
   readonly p1: number;
   /** Blower inlet temperature, after any fuel evaporated ahead of it (K). */
   readonly t1: number;
@@ -96,6 +111,29 @@ export interface PreparedCombination {
   readonly dpic: number;
   /** Intercooler coolant temperature (K). */
   readonly tcool: number;
+  /** Cooling of the charge by fuel evaporated inside the blower (K). */
+  readonly blowerCooling: number;
+  /** Cooling of the trapped charge by fuel evaporated in the port (K). */
+  readonly portCooling: number;
+  /** Exponent n of the charge temperature in the trapped mass (dimensionless). */
+  readonly tempExponent: number;
+  /** Temperature the VE curve refers to: ambient (K). */
+  readonly tref: number;
+  /** 1/(γ·(rc − 1)), 0 without residual gas (dimensionless). */
+  readonly residualK: number;
+  /** Exhaust absolute pressure (Pa). */
+  readonly pe: number;
+  /** 1/(ideal-cycle VE factor unboosted at ambient pressure) (dimensionless). */
+  readonly residualRefInv: number;
+  /** Flow-dependent inlet loss ΔP = this·Q0², 0 without a rated restriction (Pa·s²/m⁶). */
+  readonly restrictionK: number;
+  /** Ambient density, at which the restriction's flow is counted (kg/m³). */
+  readonly rho0: number;
+}
+
+/** Temperature drop of a charge by fuel evaporating, L·x/(afr·cp) (fraction, – → K). */
+export function evaporativeCooling(fraction: number, afr: number): number {
+  return (GASOLINE_LATENT_HEAT * fraction) / (afr * SPECIFIC_HEAT_CP);
 }
 
 /** Prepare a validated combination, optionally with another blower pulley diameter (m). */
@@ -103,12 +141,16 @@ export function prepare(c: Combination, blowerPulleyDiameter = c.drive.blowerPul
   const p0 = c.ambient.pressure;
   const t0 = c.ambient.temperature;
   const p1 = p0 - c.ambient.inletLoss;
-  const evaporativeDrop = (GASOLINE_LATENT_HEAT * c.fuel.evaporatedBeforeBlower) / (c.fuel.afr * SPECIFIC_HEAT_CP);
-  const t1 = t0 - evaporativeDrop;
+  const t1 = t0 - evaporativeCooling(c.fuel.evaporatedBeforeBlower, c.fuel.afr);
   const vi = c.blower.builtInVolumeRatio;
   const pri = builtInPressureRatio(vi);
   const ratio = driveRatioUnchecked(c.drive.crankPulleyDiameter, blowerPulleyDiameter);
   const ic = c.intercooler;
+  const e = c.engine;
+  const rc = e.compressionRatio ?? REFINEMENT_DEFAULTS.compressionRatio;
+  const residualK = rc == null ? 0 : 1 / (GAMMA * (rc - 1));
+  const pe = p0 + (e.exhaustBackPressure ?? REFINEMENT_DEFAULTS.exhaustBackPressure);
+  const restriction = c.ambient.inletRestriction;
   return {
     combination: c,
     p0,
@@ -126,7 +168,46 @@ export function prepare(c: Combination, blowerPulleyDiameter = c.drive.blowerPul
     eps: ic ? ic.effectiveness : 0,
     dpic: ic ? ic.pressureDrop : 0,
     tcool: ic ? ic.coolantTemperature : t0,
+    blowerCooling: evaporativeCooling(c.fuel.evaporatedInBlower ?? REFINEMENT_DEFAULTS.evaporatedInBlower, c.fuel.afr),
+    portCooling: evaporativeCooling(c.fuel.evaporatedInPort ?? REFINEMENT_DEFAULTS.evaporatedInPort, c.fuel.afr),
+    tempExponent: e.chargeTemperatureExponent ?? REFINEMENT_DEFAULTS.chargeTemperatureExponent,
+    tref: t0,
+    residualK,
+    pe,
+    residualRefInv: 1 / (1 - (pe / p0 - 1) * residualK),
+    restrictionK: restriction ? (restriction.ratingDepression ?? REFINEMENT_DEFAULTS.ratingDepression) / restriction.ratedFlow ** 2 : 0,
+    rho0: p0 / (GAS_CONSTANT * t0),
   };
+}
+
+/**
+ * Temperature at which the engine's demand counts the charge's density (K): Tref·(Tc/Tref)^n
+ * with Tc the trapped charge's temperature. n = 1 is the plain density; n < 1 lets VE rise
+ * with a hotter charge, as heat picked up in port and cylinder matters less (Heywood ch. 6).
+ */
+function demandTemperature(n: number, tref: number, tc: number): number {
+  if (n === 1) return tc;
+  if (n === 0.5) return Math.sqrt(tc * tref);
+  return tref * (tc / tref) ** n;
+}
+
+/**
+ * Ideal-cycle residual-gas factor on VE at a manifold pressure, relative to unboosted at
+ * ambient (Heywood ch. 6: ηv = 1 − (Pe/Pi − 1)/(γ·(rc − 1))) (dimensionless; 1 when off).
+ */
+function residualFactor(residualK: number, pe: number, refInv: number, pm: number): number {
+  return residualK === 0 ? 1 : (1 - (pe / pm - 1) * residualK) * refInv;
+}
+
+/** VE the engine shows referenced to manifold pressure and temperature, all refinements included (fraction). */
+export function effectiveVe(p: PreparedCombination, ve: number, pm: number, tm: number): number {
+  const tc = tm - p.portCooling;
+  return (ve * residualFactor(p.residualK, p.pe, p.residualRefInv, pm) * tm) / demandTemperature(p.tempExponent, p.tref, tc);
+}
+
+/** The same prepared combination with another blower inlet pressure (Pa), for a flow-dependent restriction. */
+function withInletPressure(p: PreparedCombination, p1: number): PreparedCombination {
+  return { ...p, p1, rho1: p1 / (GAS_CONSTANT * p.t1) };
 }
 
 /** State of blower and engine at one engine speed and one trial pressure ratio (SI). */
@@ -160,7 +241,7 @@ export function blowerState(p: PreparedCombination, sweptFlow: number, pr: numbe
   const massFlow = p.rho1 * delivered;
   const workRatio = p.workOffset + pr * p.invVi;
   const airPower = (workRatio * p.p1 * sweptFlow) / p.combination.blower.internalEfficiency;
-  const t2 = p.t1 + airPower / (massFlow * SPECIFIC_HEAT_CP);
+  const t2 = p.t1 + airPower / (massFlow * SPECIFIC_HEAT_CP) - p.blowerCooling;
   out.sweptFlow = sweptFlow;
   out.deliveredFlow = delivered;
   out.massFlow = massFlow;
@@ -173,7 +254,29 @@ export function blowerState(p: PreparedCombination, sweptFlow: number, pr: numbe
   return out;
 }
 
-function newState(): TrialState {
+/**
+ * Blower state that yields a given manifold pressure (Pa) at an engine speed (rev/min), with
+ * the inlet pressure behind any flow-dependent restriction settled; returns the prepared
+ * combination at that inlet pressure (its state is in `out`). Used where boost is measured.
+ */
+export function blowerStateAtManifold(p: PreparedCombination, rpm: number, pm: number, out: TrialState): PreparedCombination {
+  const sweptFlow = (p.vb * rpm * p.speedFactor) / 60;
+  let q = p;
+  blowerState(q, sweptFlow, (pm + q.dpic) / q.p1, out);
+  for (let i = 0; p.restrictionK > 0 && i < RESTRICTION_MAX_PASSES; i++) {
+    const q0 = Math.max(out.massFlow, 0) / p.rho0;
+    const p1 = p.p1 - p.restrictionK * q0 * q0;
+    if (!(p1 > 0.5 * p.p0)) break;
+    const settled = Math.abs(p1 - q.p1) <= SOLVER_RELATIVE_TOLERANCE * 100 * p1;
+    q = withInletPressure(p, p1);
+    blowerState(q, sweptFlow, (pm + q.dpic) / q.p1, out);
+    if (settled) break;
+  }
+  return q;
+}
+
+/** A zeroed trial state to fill. */
+export function newState(): TrialState {
   return { sweptFlow: 0, deliveredFlow: 0, massFlow: 0, workRatio: 0, airPower: 0, t2: 0, tm: 0, p2: 0, pm: 0 };
 }
 
@@ -184,6 +287,7 @@ export function pointFromState(p: PreparedCombination, rpm: number, blowerRpm: n
   const flowRatio = s.sweptFlow / s.deliveredFlow;
   // ηad = T1(PR^κ − 1)/(T2 − T1) with T2 − T1 = κ·T1·(w/P1)·(Qs/Q1)/ηint, written so a
   // Roots blower at PR → 1 (0/0) takes its limit (PR^κ − 1)/(κ(PR − 1)) → 1 + (κ − 1)(PR − 1)/2.
+  // Fuel evaporating in the blower cools the charge but is no part of the blower's efficiency.
   let idealOverActual: number;
   if (p.vi === 1 && Math.abs(pr - 1) < 1e-6) idealOverActual = 1 + ((KAPPA - 1) * (pr - 1)) / 2;
   else idealOverActual = (pr ** KAPPA - 1) / KAPPA / s.workRatio;
@@ -196,7 +300,7 @@ export function pointFromState(p: PreparedCombination, rpm: number, blowerRpm: n
     c.fuel.injectorCount != null && c.fuel.injectorFlow != null
       ? fuelMassFlow / (c.fuel.injectorCount * c.fuel.injectorFlow)
       : null;
-  return {
+  const point: OperatingPoint = {
     rpm,
     driveRatio: p.ratio,
     blowerRpm,
@@ -215,9 +319,16 @@ export function pointFromState(p: PreparedCombination, rpm: number, blowerRpm: n
     torque: netPower / ((2 * Math.PI * rpm) / 60),
     injectorDuty,
     engineVolumetricEfficiency: ve,
+    effectiveVolumetricEfficiency: effectiveVe(p, ve, s.pm, s.tm),
     dischargePressure: s.p2,
+    blowerInletPressure: p.p1,
     inletAirflow: (s.massFlow * GAS_CONSTANT * p.t0) / p.p1,
+    withinRange: true,
+    rangeReasons: NO_REASONS,
   };
+  const reasons = rangeReasonsOf(pr, s.tm, blowerRpm, c.blower.maxRpm);
+  if (reasons.length > 0) return { ...point, withinRange: false, rangeReasons: reasons };
+  return point;
 }
 
 const kpa = (pa: number): string => (pa / 1000).toFixed(1);
@@ -234,21 +345,30 @@ interface SurplusContext {
   eps: number;
   tcool: number;
   dpic: number;
+  blowerCooling: number;
+  portCooling: number;
+  tempExponent: number;
+  tref: number;
+  residualK: number;
+  pe: number;
+  residualRefInv: number;
   sweptFlow: number;
   /** P1·Qs/ηint, so that Pair = (w/P1)·this (W). */
   airPowerPerWorkRatio: number;
-  /** Vd·(N/120)·VE/R, so that ṁe = (Pm/Tm)·this (kg·K/(s·Pa)). */
+  /** Vd·(N/120)·VE/R, so that ṁe = (Pm/Td)·residual factor·this (kg·K/(s·Pa)). */
   demandFactor: number;
 }
 
-/** Surplus ṁ − ṁe at a pressure ratio (kg/s): blowerState's arithmetic, inlined for the hot loop. */
+/** Surplus ṁ − ṁe at a pressure ratio (kg/s): blowerState's and effectiveVe's arithmetic, inlined for the hot loop. */
 function surplusAt(k: SurplusContext, pr: number): number {
   const dp = pr * k.p1 - k.p1;
   const slip = dp >= 0 ? k.ks * Math.sqrt(dp) : -k.ks * Math.sqrt(-dp);
   const massFlow = k.rho1 * (k.sweptFlow - slip);
-  const t2 = k.t1 + ((k.workOffset + pr * k.invVi) * k.airPowerPerWorkRatio) / (massFlow * SPECIFIC_HEAT_CP);
+  const t2 = k.t1 + ((k.workOffset + pr * k.invVi) * k.airPowerPerWorkRatio) / (massFlow * SPECIFIC_HEAT_CP) - k.blowerCooling;
   const tm = t2 - k.eps * (t2 - k.tcool);
-  return massFlow - ((pr * k.p1 - k.dpic) / tm) * k.demandFactor;
+  const pm = pr * k.p1 - k.dpic;
+  const td = demandTemperature(k.tempExponent, k.tref, tm - k.portCooling);
+  return massFlow - (pm / td) * residualFactor(k.residualK, k.pe, k.residualRefInv, pm) * k.demandFactor;
 }
 
 /** Surplus as a function of u = sign(PR − 1)·√|PR − 1| (kg/s). */
@@ -277,6 +397,32 @@ function tooSlowError(rpm: number, blowerRpm: number, floorPressure: number): Ca
  * the charge grows very hot, and is not the answer.
  */
 export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoint {
+  if (p.restrictionK === 0) return solveAtInletPressure(p, rpm);
+  // A restriction whose loss grows with flow: fixed-point on the inlet pressure. The loss is a
+  // few kPa against ~100, so each pass shrinks the error by far more than tenfold.
+  let q = p;
+  let point = solveAtInletPressure(q, rpm);
+  for (let i = 0; i < RESTRICTION_MAX_PASSES; i++) {
+    const q0 = point.airMassFlow / p.rho0;
+    const p1 = p.p1 - p.restrictionK * q0 * q0;
+    if (!(p1 > 0.5 * p.p0)) {
+      throw new CalcConvergenceError(
+        `At ${Math.round(rpm)} rpm the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.`,
+        "no-balance",
+        rpm,
+        "ambient.inletRestriction.ratedFlow",
+      );
+    }
+    const converged = Math.abs(p1 - q.p1) <= SOLVER_RELATIVE_TOLERANCE * 100 * p1;
+    q = withInletPressure(p, p1);
+    point = solveAtInletPressure(q, rpm);
+    if (converged) return point;
+  }
+  throw new CalcConvergenceError(`At ${Math.round(rpm)} rpm the inlet restriction's loss did not settle.`, "not-converged", rpm, "ambient.inletRestriction");
+}
+
+/** Solve one engine speed at the prepared combination's blower inlet pressure (unchecked). */
+function solveAtInletPressure(p: PreparedCombination, rpm: number): OperatingPoint {
   const c = p.combination;
   const blowerRpm = rpm * p.speedFactor;
   const sweptFlow = (p.vb * blowerRpm) / 60;
@@ -291,6 +437,13 @@ export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoi
     eps: p.eps,
     tcool: p.tcool,
     dpic: p.dpic,
+    blowerCooling: p.blowerCooling,
+    portCooling: p.portCooling,
+    tempExponent: p.tempExponent,
+    tref: p.tref,
+    residualK: p.residualK,
+    pe: p.pe,
+    residualRefInv: p.residualRefInv,
     sweptFlow,
     airPowerPerWorkRatio: (p.p1 * sweptFlow) / c.blower.internalEfficiency,
     demandFactor: (c.engine.displacement * rpm * ve) / 120 / GAS_CONSTANT,

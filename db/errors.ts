@@ -1,41 +1,4 @@
-// Errors the data layer raises; route handlers and actions map them to status codes and messages.
-
-export class NotFoundError extends Error {
-  readonly status = 404;
-  constructor(what = "Not found") {
-    super(what);
-  }
-}
-
-export class ForbiddenError extends Error {
-  readonly status = 403;
-  constructor(message = "You do not have permission to do that.") {
-    super(message);
-  }
-}
-
-export class UnauthorizedError extends Error {
-  readonly status = 401;
-  constructor(message = "Please sign in.") {
-    super(message);
-  }
-}
-
-/** A save based on an out-of-date revision, or a duplicate key. */
-export class ConflictError extends Error {
-  readonly status = 409;
-  constructor(message: string, readonly details?: Record<string, unknown>) {
-    super(message);
-  }
-}
-
-/** Input that passed the schema but breaks a rule of the data (names the field). */
-export class FieldError extends Error {
-  readonly status = 400;
-  constructor(readonly field: string, message: string) {
-    super(message);
-  }
-}
+// What the database layer adds to lib/errors.ts: telling an outage from a bad request.
 
 const UNAVAILABLE_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDOUT", "57P01", "57P02", "57P03", "08006", "08001", "08003"]);
 
@@ -49,11 +12,4 @@ export function isDatabaseUnavailable(err: unknown): boolean {
     e = anyE.cause;
   }
   return false;
-}
-
-/** Another service the request needed failed (502) or is not set up (503); nothing was changed. */
-export class UpstreamError extends Error {
-  constructor(message: string, readonly status: 502 | 503 = 502) {
-    super(message);
-  }
 }

@@ -1,7 +1,7 @@
 // Who may do what: the one place for the role rules. Every server action and route handler
 // resolves the signed-in actor on the server and asks these functions before touching a row.
 import type { Role } from "./schema";
-import { ForbiddenError } from "./errors";
+import { ForbiddenError } from "@/lib/errors";
 
 export type Actor = { id: string; role: Role; email: string; name: string };
 
@@ -24,6 +24,8 @@ export function canWriteOwned(actor: Actor, ownerId: string): boolean {
 }
 
 export const canCreateForCustomer = isShopStaff;
+/** Customer names and contacts on a combination: for the shop's staff and the row's owner only (not instructors). */
+export const canSeeCustomer = (a: Actor, ownerId: string) => a.id === ownerId || isShopStaff(a);
 export const canEditShelf = (a: Actor) => a.role === "admin";
 export const canSeeShelf = (_a: Actor) => true;
 export const canWriteRecommendations = (a: Actor) => a.role === "sales" || a.role === "tuner" || a.role === "admin";

@@ -53,6 +53,8 @@ export const users = pgTable("users", {
   unitSystem: unitSystemEnum("unit_system").notNull().default("imperial"),
   disabled: boolean("disabled").notNull().default(false),
   emailVerifiedAt: timestamp("email_verified_at", { withTimezone: true }),
+  /** Carried in every session cookie; bumping it ends every session of the account at once. */
+  sessionVersion: integer("session_version").notNull().default(0),
   createdAt: created(),
 });
 
@@ -80,6 +82,46 @@ export const signInAttempts = pgTable(
     createdAt: created(),
   },
   (t) => [index("sign_in_attempts_email_idx").on(t.email, t.createdAt), index("sign_in_attempts_ip_idx").on(t.ip, t.createdAt)],
+);
+
+/**
+ * Requests counted against a limit (mail per recipient, sign-ups per address, …). A row is
+ * reserved under an advisory lock before the work is done, so parallel requests cannot all pass.
+ */
+export const rateLimitHits = pgTable(
+  "rate_limit_hits",
+  {
+    id: bigserial("id", { mode: "number" }).primaryKey(),
+    bucket: text("bucket").notNull(),
+    createdAt: created(),
+  },
+  (t) => [index("rate_limit_hits_bucket_idx").on(t.bucket, t.createdAt)],
+);
+
+export const mailStatusEnum = pgEnum("mail_status", ["queued", "sending", "sent", "failed"]);
+
+/** Mail waiting to be sent, being sent, sent or given up on; the app's sender works through it. */
+export const mailOutbox = pgTable(
+  "mail_outbox",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    toAddress: text("to_address").notNull(),
+    subject: text("subject").notNull(),
+    textBody: text("text_body").notNull(),
+    htmlBody: text("html_body"),
+    /** Attachments as JSON ({ filename, contentType, base64 }[]); small (one PDF at most). */
+    attachments: jsonb("attachments"),
+    /** What to mark when the mail finally goes or fails, e.g. "recommendation:<id>". */
+    purpose: text("purpose"),
+    status: mailStatusEnum("status").notNull().default("queued"),
+    attempts: integer("attempts").notNull().default(0),
+    nextAttemptAt: timestamp("next_attempt_at", { withTimezone: true }).notNull().defaultNow(),
+    lockedUntil: timestamp("locked_until", { withTimezone: true }),
+    lastError: text("last_error"),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+    createdAt: created(),
+  },
+  (t) => [index("mail_outbox_due_idx").on(t.status, t.nextAttemptAt)],
 );
 
 /** A saved engine + blower + drive combination. `spec` is a calc Combination (validated by calc's schema). */
@@ -232,6 +274,8 @@ export const recommendations = pgTable(
     status: recommendationStatusEnum("status").notNull().default("draft"),
     sentAt: timestamp("sent_at", { withTimezone: true }),
     lastError: text("last_error"),
+    /** Part of every share link; bumping it revokes the links already sent. */
+    shareVersion: integer("share_version").notNull().default(0),
     createdAt: created(),
     updatedAt: updated(),
   },

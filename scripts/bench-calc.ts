@@ -12,7 +12,7 @@ import {
 import { idealRatioRulePrepared, prepare } from "../calc/solve";
 import { quantile } from "./stats";
 
-const TARGET_MS = 2;
+const TARGET_MS = 0.5;
 const WARMUP_RUNS = 300;
 const MEASURED_RUNS = 2000;
 

@@ -4,7 +4,7 @@ import crypto from "node:crypto";
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import { destroyCluster, freePort, startCluster } from "../db/cluster";
+import { destroyCluster, freePort, startCluster } from "./cluster";
 import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { seedDemo } from "../db/seed";

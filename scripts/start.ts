@@ -3,7 +3,7 @@
 import crypto from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
-import { startCluster, type Cluster } from "../db/cluster";
+import { startCluster, type Cluster } from "./cluster";
 import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from "../db/seed";
@@ -37,9 +37,10 @@ async function shutdown(code = 0) {
 process.on("SIGINT", () => void shutdown(0));
 process.on("SIGTERM", () => void shutdown(0));
 
-function authSecret(): string {
-  if (process.env.AUTH_SECRET) return process.env.AUTH_SECRET;
-  const file = path.join(dataDir, "auth-secret");
+/** A secret from the environment, else one made once and kept in the data folder. */
+function keptSecret(envName: "AUTH_SECRET" | "SHARE_SECRET", fileName: string): string {
+  if (process.env[envName]) return process.env[envName];
+  const file = path.join(dataDir, fileName);
   if (!fs.existsSync(file)) {
     fs.mkdirSync(dataDir, { recursive: true });
     fs.writeFileSync(file, crypto.randomBytes(32).toString("base64url"), { mode: 0o600 });
@@ -101,8 +102,10 @@ async function main() {
   const env = nextEnv({
     DATABASE_URL: databaseUrl,
     NEXTAUTH_URL: publicUrl,
-    AUTH_SECRET: authSecret(),
-    NEXTAUTH_SECRET: authSecret(),
+    AUTH_SECRET: keptSecret("AUTH_SECRET", "auth-secret"),
+    NEXTAUTH_SECRET: keptSecret("AUTH_SECRET", "auth-secret"),
+    // Share links have their own secret: rotating the auth secret signs people out but keeps links.
+    SHARE_SECRET: keptSecret("SHARE_SECRET", "share-secret"),
     SMTP_URL: smtpUrl,
     ...(mailFakeUrl ? { MAIL_FAKE_URL: mailFakeUrl } : {}),
     ...paymentEnv,

@@ -12,7 +12,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import pg from "pg";
-import { destroyCluster, freePort, startCluster, type Cluster } from "../db/cluster";
+import { destroyCluster, freePort, startCluster, type Cluster } from "./cluster";
 import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { seedDemo } from "../db/seed";

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
-import { Logo } from "@/components/logo";
+import { HeaderBar } from "@/components/ui/header-bar";
 import { NavLinks, type NavItem } from "@/components/nav-links";
 import { CurrencyProvider } from "@/components/price";
 import { SignOutButton } from "@/components/sign-out-button";
@@ -29,21 +29,16 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   const items = NAV.filter((n) => n.roles.includes(user.role)).map(({ href, label }) => ({ href, label }));
   return (
     <div className="flex min-h-screen flex-col">
-      <header className="no-print border-b border-line bg-panel">
-        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-2">
-          <Link href="/combinations" aria-label="Pulleywright: your combinations">
-            <Logo />
+      <HeaderBar className="no-print border-b border-line bg-panel" innerClassName="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-2" logoHref="/combinations" logoLabel="Pulleywright: your combinations">
+        <NavLinks items={items} />
+        <div className="ml-auto flex items-center gap-3 text-sm">
+          <ThemeSwitch />
+          <Link href="/settings" prefetch={false} className="hover:underline" title="Your settings">
+            {user.name || user.email} <span className="text-muted">· {roleNames[user.role]}</span>
           </Link>
-          <NavLinks items={items} />
-          <div className="ml-auto flex items-center gap-3 text-sm">
-            <ThemeSwitch />
-            <Link href="/settings" prefetch={false} className="hover:underline" title="Your settings">
-              {user.name || user.email} <span className="text-muted">· {roleNames[user.role]}</span>
-            </Link>
-            <SignOutButton />
-          </div>
+          <SignOutButton />
         </div>
-      </header>
+      </HeaderBar>
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
         <CurrencyProvider currency={terms.currency}>{children}</CurrencyProvider>
       </main>

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
-import { Logo } from "@/components/logo";
+import { HeaderBar } from "@/components/ui/header-bar";
 import { FullscreenButton } from "@/components/lessons/fullscreen-button";
 import { ThemeSwitch } from "@/components/theme-switch";
 
@@ -9,20 +9,15 @@ export default async function ClassroomLayout({ children }: { children: React.Re
   await requirePageUser();
   return (
     <div className="flex min-h-screen flex-col text-lg">
-      <header className="border-b border-line bg-panel">
-        <div className="flex flex-wrap items-center gap-4 px-6 py-2 text-sm">
-          <Link href="/lessons" aria-label="Back to lessons">
-            <Logo />
-          </Link>
-          <Link href="/lessons" className="hover:underline">
-            ← Lessons
-          </Link>
-          <div className="ml-auto flex items-center gap-3">
-            <ThemeSwitch />
-            <FullscreenButton />
-          </div>
+      <HeaderBar className="border-b border-line bg-panel" innerClassName="flex flex-wrap items-center gap-4 px-6 py-2 text-sm" logoHref="/lessons" logoLabel="Back to lessons">
+        <Link href="/lessons" className="hover:underline">
+          ← Lessons
+        </Link>
+        <div className="ml-auto flex items-center gap-3">
+          <ThemeSwitch />
+          <FullscreenButton />
         </div>
-      </header>
+      </HeaderBar>
       <main id="main" className="w-full flex-1 px-6 py-6">
         {children}
       </main>

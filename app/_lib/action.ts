@@ -1,11 +1,8 @@
 import "server-only";
-import { FieldError } from "@/db/errors";
+import type { ActionState } from "@/lib/action-state";
+import { FieldError } from "@/lib/errors";
 import { toFailure } from "./errors";
 
-/** What every server action returns to its form (for useActionState): ok, or a message with per-field errors. */
-export type ActionState<T = unknown> =
-  | { ok: true; data?: T; message?: string }
-  | { ok: false; message: string; fieldErrors?: Record<string, string[]>; status: number };
 
 /** Runs an action body and turns any error into a state the form can show; never throws to the client. */
 export async function act<T>(fn: () => Promise<T>): Promise<ActionState<T>> {

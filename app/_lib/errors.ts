@@ -1,5 +1,6 @@
 import { ZodError } from "zod";
-import { ConflictError, FieldError, ForbiddenError, NotFoundError, UnauthorizedError, UpstreamError, isDatabaseUnavailable } from "@/db/errors";
+import { isDatabaseUnavailable } from "@/db/errors";
+import { ConflictError, FieldError, ForbiddenError, NotFoundError, UnauthorizedError, UpstreamError } from "@/lib/errors";
 
 /** What a client sees of a failure: a status, a message safe to show, and per-field messages (dotted paths). */
 export type Failure = { status: number; message: string; fieldErrors?: Record<string, string[]>; details?: Record<string, unknown> };

@@ -1,7 +1,7 @@
 import "server-only";
 import Stripe from "stripe";
 import type { PaidCheckout, PaymentGateway } from "@/lib/orders/payments";
-import { UpstreamError } from "@/db/errors";
+import { UpstreamError } from "@/lib/errors";
 import { env } from "./env";
 
 // The payment service through its SDK. STRIPE_API_URL points it elsewhere than the hosted

@@ -3,12 +3,12 @@ import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
 import { cache } from "react";
 import { getDb } from "@/db/client";
-import { UnauthorizedError, ForbiddenError } from "@/db/errors";
+import { UnauthorizedError, ForbiddenError } from "@/lib/errors";
 import type { Actor } from "@/db/policy";
-import { getUserById, toActor } from "@/db/repo/users";
+import { getUserById, sessionIsAlive, toActor } from "@/db/repo/users";
 import type { Role, User } from "@/db/schema";
 import { authSecret } from "./env";
-import { tokenSubject } from "./session-token";
+import { tokenClaims, type SessionClaims } from "./session-token";
 
 // next-auth's own names for the session cookie, over https and over plain http.
 const SESSION_COOKIES = ["__Secure-next-auth.session-token", "next-auth.session-token"];
@@ -18,26 +18,27 @@ const SESSION_COOKIES = ["__Secure-next-auth.session-token", "next-auth.session-
  * and nothing more: getServerSession would also re-encrypt and re-send the cookie on every call,
  * which costs more than the rest of a typical API request.
  */
-async function sessionUserId(): Promise<string | null> {
+async function sessionClaims(): Promise<SessionClaims | null> {
   const jar = await cookies();
   for (const name of SESSION_COOKIES) {
     const token = jar.get(name)?.value;
     if (!token) continue;
-    const sub = await tokenSubject(token, authSecret());
-    if (sub) return sub;
+    const claims = await tokenClaims(token, authSecret());
+    if (claims) return claims;
   }
   return null;
 }
 
+
 /**
- * The signed-in user, read fresh from the database on every request so that a role change or a
- * disabled account takes effect at once. Null when signed out.
+ * The signed-in user, read fresh from the database on every request so that a role change, a
+ * disabled account or a "sign out everywhere" takes effect at once. Null when signed out.
  */
 export const getCurrentUser = cache(async (): Promise<User | null> => {
-  const id = await sessionUserId();
-  if (!id) return null;
-  const u = await getUserById(getDb(), id);
-  return u && !u.disabled ? u : null;
+  const claims = await sessionClaims();
+  if (!claims) return null;
+  const u = await getUserById(getDb(), claims.sub);
+  return sessionIsAlive(u, claims.sv) ? u : null;
 });
 
 /** The one check every server action and route handler starts with: signed in, and one of `roles` if given. */

@@ -1,16 +1,21 @@
 "use client";
 import { useActionState, useState, useTransition } from "react";
-import { setUserDisabledAction, setUserRoleAction } from "@/app/(app)/admin/users/actions";
 import { Button } from "@/components/ui/button";
 import type { Role } from "@/db/schema";
+import type { ActionState } from "@/lib/action-state";
 
 const ROLE_NAMES: Record<Role, string> = { member: "Member", tuner: "Tuner", sales: "Sales", instructor: "Instructor", admin: "Admin" };
 
-type UserAccessControlsProps = { id: string; email: string; role: Role; disabled: boolean; self: boolean };
+/** The server actions behind the controls, passed in by the page. */
+export type UserAccessActions = {
+  setRole: (id: string, prev: ActionState | undefined, form: FormData) => Promise<ActionState<{ role: string }>>;
+  setDisabled: (id: string, disabled: boolean) => Promise<ActionState<{ disabled: boolean }>>;
+};
+type UserAccessControlsProps = { id: string; email: string; role: Role; disabled: boolean; self: boolean; actions: UserAccessActions };
 
 /** One account's role select and disable/enable switch. Your own row is read-only. */
-export function UserAccessControls({ id, email, role, disabled, self }: UserAccessControlsProps) {
-  const [state, action, pending] = useActionState(setUserRoleAction.bind(null, id), undefined);
+export function UserAccessControls({ id, email, role, disabled, self, actions }: UserAccessControlsProps) {
+  const [state, action, pending] = useActionState(actions.setRole.bind(null, id), undefined);
   const [toggling, startToggle] = useTransition();
   const [toggleMsg, setToggleMsg] = useState<{ ok: boolean; text: string } | null>(null);
   const [selected, setSelected] = useState<Role>(role);
@@ -47,7 +52,7 @@ export function UserAccessControls({ id, email, role, disabled, self }: UserAcce
           aria-label={`${disabled ? "Enable" : "Disable"} ${email}`}
           onClick={() =>
             startToggle(async () => {
-              const r = await setUserDisabledAction(id, !disabled);
+              const r = await actions.setDisabled(id, !disabled);
               setToggleMsg(r.ok ? { ok: true, text: r.data?.disabled ? "Disabled: they are signed out on their next request." : "Enabled." } : { ok: false, text: r.message });
             })
           }

@@ -1,123 +1,18 @@
 "use client";
-// The combinations list: read through GET /api/combinations with react-query (paginated,
-// searchable, sortable), changed through the server actions, which call the same repository.
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+// The combinations list: filters, notices, the table and its pages (state in use-combinations-list).
 import Link from "next/link";
-import { useEffect, useId, useState } from "react";
-import { formatQuantity, type UnitSystem } from "@/calc";
-import {
-  deleteCombinationAction,
-  duplicateCombinationAction,
-  renameCombinationAction,
-  undoDeleteAction,
-} from "@/app/(app)/combinations/actions";
+import type { UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { Pager } from "@/components/ui/pager";
 import type { Role } from "@/db/schema";
+import { CombinationRow as Row } from "./combination-row";
 import { ImportCombinations } from "./import-combinations";
+import { useCombinationsList, type CombinationListActions, type Scope, type Sort } from "./use-combinations-list";
 
-export type ListedCombination = {
-  id: string;
-  name: string;
-  ownerId: string;
-  ownerName: string;
-  ownerEmail: string;
-  customerName: string | null;
-  customerContact: string | null;
-  displacement: number;
-  blowerKind: "roots" | "twin-screw";
-  blowerPulleyDiameter: number;
-  revision: number;
-  isDemo: boolean;
-  updatedAt: string;
-};
-type ListAnswer = { items: ListedCombination[]; total: number; page: number; pageSize: number };
-type Sort = "updatedAt" | "name" | "displacement" | "blowerPulleyDiameter";
-type Scope = "" | "mine" | "shop" | "demo";
-
-type ActionResult<T> = { ok: true; data?: T } | { ok: false; message: string };
-
-const PAGE_SIZE = 20;
-const STAFF: Role[] = ["tuner", "sales", "admin"];
-
-async function fetchList(params: URLSearchParams): Promise<ListAnswer> {
-  const res = await fetch(`/api/combinations?${params}`, { headers: { accept: "application/json" } });
-  const body = await res.json().catch(() => null);
-  if (!res.ok) throw new Error(body?.error ?? `The list could not be loaded (HTTP ${res.status}).`);
-  return body as ListAnswer;
-}
-
-/** Server actions answer { ok:false, message } instead of throwing; react-query wants a throw. */
-async function must<T>(p: Promise<ActionResult<T>>): Promise<T | undefined> {
-  const r = await p;
-  if (!r.ok) throw new Error(r.message);
-  return r.data;
-}
-
-export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem: UnitSystem }) {
-  const staff = STAFF.includes(role);
-  const qc = useQueryClient();
-  const [searchText, setSearchText] = useState("");
-  const [search, setSearch] = useState("");
-  const [sort, setSort] = useState<Sort>("updatedAt");
-  const [dir, setDir] = useState<"asc" | "desc">("desc");
-  const [scope, setScope] = useState<Scope>("");
-  const [page, setPage] = useState(1);
-  const [notice, setNotice] = useState<{ tone: "ok" | "danger"; text: string; undoId?: string } | null>(null);
-
-  // Search as you type, without a request per keystroke.
-  useEffect(() => {
-    const t = setTimeout(() => {
-      setSearch(searchText.trim());
-      setPage(1);
-    }, 300);
-    return () => clearTimeout(t);
-  }, [searchText]);
-
-  const params = new URLSearchParams({ sort, dir, page: String(page), pageSize: String(PAGE_SIZE) });
-  if (search) params.set("search", search);
-  if (scope) params.set("scope", scope);
-  const list = useQuery({ queryKey: ["combinations", params.toString()], queryFn: () => fetchList(params), placeholderData: keepPreviousData });
-  const refresh = () => qc.invalidateQueries({ queryKey: ["combinations"] });
-  const fail = (e: Error) => setNotice({ tone: "danger", text: e.message });
-
-  const duplicate = useMutation({
-    mutationFn: (c: ListedCombination) => must(duplicateCombinationAction(c.id)),
-    onSuccess: (r) => {
-      setNotice({ tone: "ok", text: r ? `Made a copy: “${r.name}”.` : "Made a copy." });
-      void refresh();
-    },
-    onError: fail,
-  });
-  const remove = useMutation({
-    mutationFn: (c: ListedCombination) => must(deleteCombinationAction(c.id)).then(() => c),
-    onSuccess: (c) => {
-      setNotice({ tone: "ok", text: `Deleted “${c.name}”.`, undoId: c.id });
-      void refresh();
-    },
-    onError: fail,
-  });
-  const undo = useMutation({
-    mutationFn: (id: string) => must(undoDeleteAction(id)),
-    onSuccess: () => {
-      setNotice({ tone: "ok", text: "Brought it back." });
-      void refresh();
-    },
-    onError: fail,
-  });
-
-  const data = list.data;
-  const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
-  const scopes: { value: Scope; label: string }[] =
-    role === "member"
-      ? []
-      : [
-          { value: "", label: "Everything I can see" },
-          { value: "mine", label: "Mine" },
-          ...(staff ? [{ value: "shop" as Scope, label: "The shop's (customers)" }] : []),
-          { value: "demo", label: "Demo examples" },
-        ];
-
+export function CombinationsList({ role, unitSystem, actions }: { role: Role; unitSystem: UnitSystem; actions: CombinationListActions }) {
+  const { staff, searchText, setSearchText, search, sort, setSort, dir, setDir, scope, setScope, page, setPage, notice, setNotice, list, refresh, duplicate, remove, undo, data, pages, scopes } =
+    useCombinationsList(role, actions);
   return (
     <section aria-labelledby="combinations-title" className="flex flex-col gap-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
@@ -137,6 +32,7 @@ export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem:
             Export all of mine (JSON)
           </a>
           <ImportCombinations
+            importAction={actions.importFile}
             onImported={(n) => {
               setNotice({ tone: "ok", text: `Imported ${n} combination${n === 1 ? "" : "s"}.` });
               void refresh();
@@ -250,6 +146,7 @@ export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem:
                     role={role}
                     staff={staff}
                     unitSystem={unitSystem}
+                    rename={actions.rename}
                     onRenamed={() => void refresh()}
                     onDuplicate={() => duplicate.mutate(c)}
                     onDelete={() => remove.mutate(c)}
@@ -259,157 +156,11 @@ export function CombinationsList({ role, unitSystem }: { role: Role; unitSystem:
               </tbody>
             </table>
           </div>
-          <nav aria-label="Pages" className="flex items-center gap-3 text-sm">
-            <Button variant="secondary" disabled={page <= 1} onClick={() => setPage((p) => p - 1)}>
-              Previous
-            </Button>
-            <span>
-              Page {data.page} of {pages} · {data.total} combination{data.total === 1 ? "" : "s"}
-              {list.isFetching ? <span className="ml-2 text-muted">updating…</span> : null}
-            </span>
-            <Button variant="secondary" disabled={page >= pages} onClick={() => setPage((p) => p + 1)}>
-              Next
-            </Button>
-          </nav>
+          <Pager label="Combinations" ariaLabel="Pages" page={page} pageSize={data.pageSize} total={data.total} onPage={setPage} noun={["combination", "combinations"]}>
+            {list.isFetching ? <span className="ml-2 text-muted">updating…</span> : null}
+          </Pager>
         </>
       ) : null}
     </section>
-  );
-}
-
-function Row(props: {
-  c: ListedCombination;
-  role: Role;
-  staff: boolean;
-  unitSystem: UnitSystem;
-  busy: boolean;
-  onRenamed: () => void;
-  onDuplicate: () => void;
-  onDelete: () => void;
-}) {
-  const { c, role, staff, unitSystem } = props;
-  const [renaming, setRenaming] = useState(false);
-  const [confirmDelete, setConfirmDelete] = useState(false);
-  const [name, setName] = useState(c.name);
-  const inputId = useId();
-  const rename = useMutation({
-    mutationFn: () => must(renameCombinationAction(c.id, name, c.revision)),
-    onSuccess: () => {
-      setRenaming(false);
-      props.onRenamed();
-    },
-  });
-  const eng = formatQuantity("displacement", c.displacement, unitSystem);
-  const pulley = formatQuantity("length-small", c.blowerPulleyDiameter, unitSystem);
-  // Instructors see the demo examples but may not change them: only duplicate.
-  const writable = !(role === "instructor" && c.isDemo);
-
-  return (
-    <tr className="border-b border-line last:border-0 align-top">
-      <td className="px-3 py-2">
-        {renaming ? (
-          <form
-            className="flex flex-col gap-1"
-            onSubmit={(e) => {
-              e.preventDefault();
-              rename.mutate();
-            }}
-          >
-            <label htmlFor={inputId} className="sr-only">
-              New name for {c.name}
-            </label>
-            <div className="flex gap-1">
-              <input
-                id={inputId}
-                value={name}
-                onChange={(e) => setName(e.target.value)}
-                maxLength={120}
-                required
-                autoFocus
-                aria-invalid={rename.isError || undefined}
-                aria-describedby={rename.isError ? `${inputId}-error` : undefined}
-                className="w-56 rounded-md border border-line bg-bg px-2 py-1"
-                onKeyDown={(e) => e.key === "Escape" && setRenaming(false)}
-              />
-              <Button type="submit" disabled={rename.isPending}>
-                Save name
-              </Button>
-              <Button type="button" variant="ghost" onClick={() => setRenaming(false)}>
-                Cancel
-              </Button>
-            </div>
-            {rename.isError ? (
-              <p id={`${inputId}-error`} role="alert" className="text-xs text-danger">
-                {rename.error.message}
-              </p>
-            ) : null}
-          </form>
-        ) : (
-          <Link href={`/combinations/${c.id}`} className="font-medium text-accent underline underline-offset-2">
-            {c.name}
-          </Link>
-        )}
-        {c.isDemo ? <span className="ml-2 rounded border border-line px-1 text-xs text-muted">demo</span> : null}
-      </td>
-      {staff ? (
-        <td className="px-3 py-2">
-          {c.customerName ?? <span className="text-muted">—</span>}
-          {c.customerContact ? <div className="text-xs text-muted">{c.customerContact}</div> : null}
-        </td>
-      ) : null}
-      {role !== "member" ? <td className="px-3 py-2">{c.ownerName || c.ownerEmail}</td> : null}
-      <td className="px-3 py-2 text-right">
-        {eng.value.toFixed(unitSystem === "metric" ? 1 : 0)} {eng.unit}
-      </td>
-      <td className="px-3 py-2">{c.blowerKind === "roots" ? "Roots" : "Twin-screw"}</td>
-      <td className="px-3 py-2 text-right">
-        {pulley.value.toFixed(unitSystem === "metric" ? 0 : 2)} {pulley.unit}
-      </td>
-      <td className="px-3 py-2 text-right">
-        <Link href={`/combinations/${c.id}/revisions`} className="hover:underline" title="History">
-          {c.revision}
-        </Link>
-      </td>
-      <td className="px-3 py-2 whitespace-nowrap">
-        <time dateTime={c.updatedAt}>{new Date(c.updatedAt).toLocaleString()}</time>
-      </td>
-      <td className="px-3 py-2">
-        <div className="flex flex-wrap justify-end gap-1">
-          <Link href={`/combinations/${c.id}`} className="rounded-md px-2 py-1 hover:bg-bg" aria-label={`Open ${c.name}`}>
-            Open
-          </Link>
-          <Link href={`/combinations/${c.id}/revisions`} className="rounded-md px-2 py-1 hover:bg-bg" aria-label={`History of ${c.name}`}>
-            History
-          </Link>
-          {writable ? (
-            <Button variant="ghost" onClick={() => (setName(c.name), setRenaming(true))} aria-label={`Rename ${c.name}`}>
-              Rename
-            </Button>
-          ) : null}
-          <Button variant="ghost" disabled={props.busy} onClick={props.onDuplicate} aria-label={`Duplicate ${c.name}`}>
-            Duplicate
-          </Button>
-          <a href={`/api/combinations/export?ids=${c.id}`} download className="rounded-md px-2 py-1 hover:bg-bg" aria-label={`Export ${c.name} as JSON`}>
-            Export
-          </a>
-          {writable ? (
-            confirmDelete ? (
-              <span className="flex items-center gap-1">
-                <Button variant="danger" disabled={props.busy} onClick={() => (setConfirmDelete(false), props.onDelete())} aria-label={`Yes, delete ${c.name}`}>
-                  Yes, delete
-                </Button>
-                <Button variant="ghost" onClick={() => setConfirmDelete(false)}>
-                  Keep
-                </Button>
-              </span>
-            ) : (
-              <Button variant="ghost" className="text-danger" onClick={() => setConfirmDelete(true)} aria-label={`Delete ${c.name}`}>
-                Delete
-              </Button>
-            )
-          ) : null}
-        </div>
-      </td>
-    </tr>
   );
 }

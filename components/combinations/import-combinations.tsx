@@ -1,8 +1,8 @@
 "use client";
 // Import an exported JSON file: pick it, see what it holds, then import all of it or nothing.
 import { useId, useRef, useState } from "react";
-import { importCombinationsAction } from "@/app/(app)/combinations/actions";
 import { Button } from "@/components/ui/button";
+import type { ActionState } from "@/lib/action-state";
 
 type Preview = { text: string; fileName: string; count: number; names: string[] } | { error: string };
 
@@ -22,7 +22,13 @@ export function previewImport(text: string, fileName: string): Preview {
   return { text, fileName, count: list.length, names };
 }
 
-export function ImportCombinations({ onImported }: { onImported: (count: number) => void }) {
+type ImportCombinationsProps = {
+  /** The server action that imports the file (passed in by the page). */
+  importAction: (fileText: string) => Promise<ActionState<{ imported: number }>>;
+  onImported: (count: number) => void;
+};
+
+export function ImportCombinations({ importAction, onImported }: ImportCombinationsProps) {
   const [open, setOpen] = useState(false);
   const [preview, setPreview] = useState<Preview | null>(null);
   const [pending, setPending] = useState(false);
@@ -46,7 +52,7 @@ export function ImportCombinations({ onImported }: { onImported: (count: number)
   async function doImport() {
     if (!preview || "error" in preview) return;
     setPending(true);
-    const r = await importCombinationsAction(preview.text);
+    const r = await importAction(preview.text);
     setPending(false);
     if (r.ok) {
       onImported(r.data?.imported ?? 0);

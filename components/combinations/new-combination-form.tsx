@@ -1,18 +1,20 @@
 "use client";
 import { useActionState, useState } from "react";
-import { createCombinationAction } from "@/app/(app)/combinations/actions";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import type { TemplateKey } from "./templates";
+import type { ActionState } from "@/lib/action-state";
+import type { TemplateKey } from "@/lib/combinations/templates";
 
 type NewCombinationFormProps = {
   templates: { key: TemplateKey; label: string; summary: string }[];
   /** Tuners, sales and admins may keep it for a customer. */
   staff: boolean;
+  /** The server action that creates it (passed in by the page). */
+  createAction: (prev: ActionState | undefined, form: FormData) => Promise<ActionState>;
 };
 
-export function NewCombinationForm({ templates, staff }: NewCombinationFormProps) {
-  const [state, action, pending] = useActionState(createCombinationAction, undefined);
+export function NewCombinationForm({ templates, staff, createAction }: NewCombinationFormProps) {
+  const [state, action, pending] = useActionState(createAction, undefined);
   // Controlled, so what was typed survives the form reset React does after an action answers.
   const [v, setV] = useState({ name: "", template: templates[0]?.key ?? "", customerName: "", customerContact: "", note: "" });
   const bind = (k: keyof typeof v) => ({ value: v[k], onChange: (e: React.ChangeEvent<HTMLInputElement>) => setV({ ...v, [k]: e.target.value }) });

@@ -1,13 +1,19 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { restoreRevisionAction } from "@/app/(app)/combinations/[id]/revisions/actions";
 import { Button } from "@/components/ui/button";
+import type { ActionState } from "@/lib/action-state";
 
-type RestoreRevisionProps = { combinationId: string; number: number; currentRevision: number };
+type RestoreRevisionProps = {
+  combinationId: string;
+  number: number;
+  currentRevision: number;
+  /** The server action that restores (passed in by the page). */
+  restoreAction: (id: string, number: number, baseRevision: number) => Promise<ActionState<{ revision: number }>>;
+};
 
 /** "Restore revision N", with a confirmation step; a 409 (someone saved since) is said plainly. */
-export function RestoreRevision({ combinationId, number, currentRevision }: RestoreRevisionProps) {
+export function RestoreRevision({ combinationId, number, currentRevision, restoreAction }: RestoreRevisionProps) {
   const router = useRouter();
   const [confirming, setConfirming] = useState(false);
   const [pending, start] = useTransition();
@@ -15,7 +21,7 @@ export function RestoreRevision({ combinationId, number, currentRevision }: Rest
 
   function restore() {
     start(async () => {
-      const r = await restoreRevisionAction(combinationId, number, currentRevision);
+      const r = await restoreAction(combinationId, number, currentRevision);
       setConfirming(false);
       if (r.ok) {
         setResult({ ok: true, text: `Restored revision ${number} as revision ${r.data?.revision}.` });

@@ -4,13 +4,14 @@
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { unitLabel, veAt, type Combination, type UnitSystem } from "@/calc";
-import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "@/app/_lib/datalog-parse";
+import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "@/lib/datalogs/parse";
+import { ApiError, apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { fitVe, pulleyComparison, smallerPulleys, withFittedVe, type VeFit } from "./analysis";
+import { fitVe, pulleyComparison, smallerPulleys, withFittedVe, type VeFit } from "@/lib/datalogs/analysis";
 import { CleaningControls } from "./cleaning-controls";
-import { fig, PALETTE, rpmText } from "./format";
+import { fig, PALETTE, rpmText } from "@/lib/datalogs/format";
 import { XyChart } from "./xy-chart";
 
 export type CalibrateViewProps = {
@@ -63,16 +64,12 @@ export function CalibrateView(props: CalibrateViewProps) {
     setBusy(true);
     setSave(null);
     try {
-      const res = await fetch(`/api/datalogs/${logId}/calibrate`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ ...options, baseRevision: current.revision }),
-      });
-      const data = (await res.json().catch(() => ({}))) as { revision?: number; error?: string };
-      if (res.ok && data.revision) setSave({ kind: "saved", revision: data.revision });
-      else setSave({ kind: res.status === 409 ? "conflict" : "error", message: data.error ?? `The save failed (status ${res.status}).` });
-    } catch {
-      setSave({ kind: "error", message: "The save did not reach the server. Check the connection and try again." });
+      const data = await apiJson<{ revision?: number } | null>(`/api/datalogs/${logId}/calibrate`, { method: "POST", json: { ...options, baseRevision: current.revision } });
+      if (data?.revision) setSave({ kind: "saved", revision: data.revision });
+      else setSave({ kind: "error", message: "The save failed (status 200)." });
+    } catch (e) {
+      if (e instanceof ApiError) setSave({ kind: e.status === 409 ? "conflict" : "error", message: e.serverMessage ?? `The save failed (status ${e.status}).` });
+      else setSave({ kind: "error", message: "The save did not reach the server. Check the connection and try again." });
     } finally {
       setBusy(false);
     }

@@ -3,8 +3,8 @@
 // kept in the address so the compare and calibrate pages use the same ones.
 import { useEffect, useState } from "react";
 import { fromSI, toSI, unitLabel, type UnitSystem } from "@/calc";
-import { cleaningSchema, type CleaningOptions } from "@/app/_lib/datalog-parse";
-import { cleaningToQuery } from "./cleaning-query";
+import { cleaningSchema, type CleaningOptions } from "@/lib/datalogs/parse";
+import { cleaningToQuery } from "@/lib/datalogs/cleaning-query";
 import { Field } from "@/components/ui/field";
 
 type Draft = Record<keyof CleaningOptions, string>;

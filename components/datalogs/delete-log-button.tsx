@@ -1,6 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { ApiError, apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 
 export function DeleteLogButton({ id, name }: { id: string; name: string }) {
@@ -15,13 +16,13 @@ export function DeleteLogButton({ id, name }: { id: string; name: string }) {
         onClick={async () => {
           if (!window.confirm(`Delete the log “${name}” and its samples? This cannot be undone.`)) return;
           setBusy(true);
-          const res = await fetch(`/api/datalogs/${id}`, { method: "DELETE" });
-          if (res.status === 204) {
+          try {
+            await apiJson(`/api/datalogs/${id}`, { method: "DELETE" });
             router.push("/datalogs");
             router.refresh();
-          } else {
+          } catch (e) {
             setBusy(false);
-            setError(((await res.json().catch(() => ({}))) as { error?: string }).error ?? "The log could not be deleted.");
+            setError((e instanceof ApiError && e.serverMessage) || "The log could not be deleted.");
           }
         }}
       >

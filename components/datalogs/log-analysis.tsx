@@ -4,11 +4,11 @@
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { unitLabel, fromSI, type Combination, type UnitSystem } from "@/calc";
-import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "@/app/_lib/datalog-parse";
+import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "@/lib/datalogs/parse";
 import { CleaningControls } from "./cleaning-controls";
-import { cleaningToQuery } from "./cleaning-query";
-import { compareBins, predictedCurve } from "./analysis";
-import { fig, PALETTE, rpmText } from "./format";
+import { cleaningToQuery } from "@/lib/datalogs/cleaning-query";
+import { compareBins, predictedCurve } from "@/lib/datalogs/analysis";
+import { fig, PALETTE, rpmText } from "@/lib/datalogs/format";
 import { XyChart, type XySeries } from "./xy-chart";
 
 const MAX_DOTS = 4000;

@@ -1,7 +1,8 @@
 import Link from "next/link";
 import type { UnitSystem } from "@/calc";
-import type { LogAmbient } from "@/app/_lib/datalog-parse";
-import { withUnit } from "./format";
+import type { LogAmbient } from "@/lib/datalogs/parse";
+import { withUnit } from "@/lib/datalogs/format";
+import { BackLink } from "@/components/ui/back-link";
 
 export type LogHeaderProps = {
   title: string;
@@ -15,11 +16,7 @@ export type LogHeaderProps = {
 export function LogHeader({ title, log, combination, ambient, unitSystem }: LogHeaderProps) {
   return (
     <header className="flex flex-col gap-2">
-      <p className="text-sm">
-        <Link href="/datalogs" className="text-muted hover:underline">
-          ← Datalogs
-        </Link>
-      </p>
+      <BackLink href="/datalogs" label="Datalogs" />
       <h1 className="text-2xl font-semibold">{title}</h1>
       <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="text-muted">File</dt>

@@ -7,8 +7,6 @@ import { fromSI, toSI, unitLabel, type UnitSystem } from "@/calc";
 import {
   DATALOG_LIMITS,
   decodeLogBytes,
-  delimiterNames,
-  DELIMITERS,
   guessLayout,
   guessMapping,
   logLines,
@@ -16,49 +14,18 @@ import {
   splitLine,
   type DatalogMappingInput,
   type Delimiter,
-} from "@/app/_lib/datalog-parse";
+} from "@/lib/datalogs/parse";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { fig, rpmText, withUnit } from "./format";
+import { withUnit } from "@/lib/datalogs/format";
+import { ColumnMapping } from "./column-mapping";
+import { LogPreview } from "./log-preview";
+import { postLog } from "./post-log";
+import { ProgressBar, selectClass, type Progress } from "./upload-parts";
 
 export type UploadCombination = { id: string; name: string; revision: number; ambient: { pressure: number; temperature: number } };
 export type UploadFormProps = { combinations: UploadCombination[]; initialCombinationId: string | null; unitSystem: UnitSystem };
-
-type Progress = { label: string; fraction: number } | null;
-
-const selectClass = "rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm";
-
-function ProgressBar({ progress }: { progress: Progress }) {
-  if (!progress) return null;
-  const pct = Math.round(progress.fraction * 100);
-  return (
-    <div className="flex flex-col gap-1">
-      <span className="text-sm" id="upload-progress-label">
-        {progress.label} {pct} %
-      </span>
-      <progress aria-labelledby="upload-progress-label" className="h-2 w-full" max={100} value={pct} />
-    </div>
-  );
-}
-
-function ColumnSelect({ id, label, value, columns, optional, onChange }: { id: string; label: string; value: number | null; columns: string[]; optional?: boolean; onChange: (v: number | null) => void }) {
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-sm font-medium">
-        {label}
-      </label>
-      <select id={id} className={selectClass} value={value === null ? "" : String(value)} onChange={(e) => onChange(e.target.value === "" ? null : Number(e.target.value))}>
-        {optional ? <option value="">(none)</option> : null}
-        {columns.map((c, i) => (
-          <option key={i} value={i}>
-            {i + 1}: {c}
-          </option>
-        ))}
-      </select>
-    </div>
-  );
-}
 
 export function UploadForm({ combinations, initialCombinationId, unitSystem }: UploadFormProps) {
   const router = useRouter();
@@ -161,39 +128,21 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
     setBusy(true);
     setServerError(null);
     const body = JSON.stringify({ combinationId: combo.id, name: name.trim(), fileName: file.name, text: file.text, mapping, ambient: { pressure: ambientPa, temperature: ambientK } });
-    const xhr = new XMLHttpRequest();
-    xhr.open("POST", "/api/datalogs");
-    xhr.setRequestHeader("content-type", "application/json");
-    xhr.upload.onprogress = (e) => setProgress({ label: "Uploading…", fraction: e.lengthComputable ? e.loaded / e.total : 0 });
-    xhr.onerror = () => {
-      setBusy(false);
+    void postLog(body, (fraction) => setProgress({ label: "Uploading…", fraction })).then((outcome) => {
       setProgress(null);
-      setServerError({ message: "The upload did not reach the server. Check the connection and try again.", lines: [] });
-    };
-    xhr.onload = () => {
-      setProgress(null);
-      let data: { id?: string; error?: string; fieldErrors?: Record<string, string[]> } = {};
-      try {
-        data = JSON.parse(xhr.responseText);
-      } catch {
-        /* not JSON: handled below */
-      }
-      if (xhr.status === 201 && data.id) {
-        router.push(`/datalogs/${data.id}`);
+      if (outcome.ok) {
+        router.push(`/datalogs/${outcome.id}`);
         return;
       }
       setBusy(false);
-      const lines = Object.entries(data.fieldErrors ?? {}).flatMap(([k, v]) => (k === "text" ? v : v.map((m) => `${k}: ${m}`)));
-      setServerError({ message: data.error ?? `The upload failed (status ${xhr.status}).`, lines });
-    };
-    xhr.send(body);
+      setServerError({ message: outcome.message, lines: outcome.lines });
+    });
   }
 
   if (combinations.length === 0) {
     return <Notice tone="warning">You have no combination you may upload a log for. Save a combination first.</Notice>;
   }
 
-  const r = parsed?.result;
   return (
     <form
       className="flex flex-col gap-6"
@@ -259,121 +208,11 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
       </section>
 
       {file && mapping ? (
-        <section aria-labelledby="step-3" className="flex flex-col gap-3">
-          <h2 id="step-3" className="text-lg font-semibold">
-            3. Columns
-          </h2>
-          <div className="grid gap-3 sm:grid-cols-3">
-            <div className="flex flex-col gap-1">
-              <label htmlFor="delimiter" className="text-sm font-medium">
-                Delimiter
-              </label>
-              <select id="delimiter" className={selectClass} value={mapping.delimiter} onChange={(e) => set({ delimiter: e.target.value as Delimiter, decimalComma: e.target.value === "," ? false : mapping.decimalComma })}>
-                {DELIMITERS.map((d) => (
-                  <option key={d} value={d}>
-                    {delimiterNames[d]}
-                  </option>
-                ))}
-              </select>
-            </div>
-            <label className="flex items-center gap-2 self-end text-sm">
-              <input type="checkbox" checked={!!mapping.decimalComma} disabled={mapping.delimiter === ","} onChange={(e) => set({ decimalComma: e.target.checked })} /> Decimal commas (5,25)
-            </label>
-            <label className="flex items-center gap-2 self-end text-sm">
-              <input type="checkbox" checked={mapping.hasHeader !== false} onChange={(e) => set({ hasHeader: e.target.checked })} /> First line is a header
-            </label>
-            <ColumnSelect id="col-rpm" label="Engine speed (rpm)" value={mapping.rpm} columns={columns} onChange={(v) => set({ rpm: v ?? 0 })} />
-            <ColumnSelect id="col-pressure" label="Manifold pressure" value={mapping.pressure} columns={columns} onChange={(v) => set({ pressure: v ?? 0 })} />
-            <div className="grid grid-cols-2 gap-2">
-              <div className="flex flex-col gap-1">
-                <label htmlFor="pressure-kind" className="text-sm font-medium">
-                  Pressure is
-                </label>
-                <select id="pressure-kind" className={selectClass} value={mapping.pressureKind} onChange={(e) => set({ pressureKind: e.target.value as "gauge" | "absolute" })}>
-                  <option value="gauge">boost (gauge)</option>
-                  <option value="absolute">absolute</option>
-                </select>
-              </div>
-              <div className="flex flex-col gap-1">
-                <label htmlFor="pressure-unit" className="text-sm font-medium">
-                  Pressure unit
-                </label>
-                <select id="pressure-unit" className={selectClass} value={mapping.pressureUnit} onChange={(e) => set({ pressureUnit: e.target.value as "psi" | "kPa" | "bar" })}>
-                  <option value="psi">psi</option>
-                  <option value="kPa">kPa</option>
-                  <option value="bar">bar</option>
-                </select>
-              </div>
-            </div>
-            <ColumnSelect id="col-iat" label="Intake air temperature (optional)" value={mapping.intakeTemperature ?? null} columns={columns} optional onChange={(v) => set({ intakeTemperature: v })} />
-            <div className="flex flex-col gap-1">
-              <label htmlFor="temperature-unit" className="text-sm font-medium">
-                Temperature unit
-              </label>
-              <select id="temperature-unit" className={selectClass} value={mapping.temperatureUnit ?? "F"} onChange={(e) => set({ temperatureUnit: e.target.value as "F" | "C" })}>
-                <option value="F">°F</option>
-                <option value="C">°C</option>
-              </select>
-            </div>
-            <ColumnSelect id="col-throttle" label="Throttle % (optional)" value={mapping.throttle ?? null} columns={columns} optional onChange={(v) => set({ throttle: v })} />
-            <ColumnSelect id="col-time" label="Time, s (optional)" value={mapping.time ?? null} columns={columns} optional onChange={(v) => set({ time: v })} />
-          </div>
-        </section>
+        <ColumnMapping mapping={mapping} columns={columns} set={set} />
       ) : null}
 
       {file && mapping && parsed ? (
-        <section aria-labelledby="step-4" className="flex flex-col gap-3">
-          <h2 id="step-4" className="text-lg font-semibold">
-            4. Preview
-          </h2>
-          {parsed.mappingError ? <Notice tone="danger">{parsed.mappingError}</Notice> : null}
-          {r?.fatal ? <Notice tone="danger">{r.fatal}</Notice> : null}
-          {r && !r.fatal ? (
-            <p className="text-sm" role="status">
-              {r.dataLines.toLocaleString("en-US")} data rows; {r.points.length.toLocaleString("en-US")} read; {r.errors.length + r.moreErrors} with errors.
-            </p>
-          ) : null}
-          {r && r.errors.length ? (
-            <Notice tone="danger" title="These lines cannot be read; nothing is stored until they are fixed (or the mapping is):">
-              <ul className="list-disc pl-5" aria-label="Line errors">
-                {r.errors.map((e) => (
-                  <li key={e.line}>{e.message}</li>
-                ))}
-              </ul>
-              {r.moreErrors ? <p>…and {r.moreErrors} more lines.</p> : null}
-            </Notice>
-          ) : null}
-          {r && r.points.length ? (
-            <div className="overflow-x-auto">
-              <table className="text-sm" aria-label="First rows as they will be stored">
-                <thead>
-                  <tr className="text-left text-muted">
-                    <th className="pr-4 font-medium">Line</th>
-                    <th className="pr-4 font-medium">Engine speed (rpm)</th>
-                    <th className="pr-4 font-medium">Boost ({pressureUnit})</th>
-                    <th className="pr-4 font-medium">Manifold absolute ({pressureUnit})</th>
-                    <th className="pr-4 font-medium">Intake air ({temperatureUnit})</th>
-                    <th className="pr-4 font-medium">Throttle (%)</th>
-                    <th className="pr-4 font-medium">Time (s)</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {r.points.slice(0, 8).map((p) => (
-                    <tr key={p.line}>
-                      <td className="pr-4">{p.line}</td>
-                      <td className="pr-4">{rpmText(p.rpm)}</td>
-                      <td className="pr-4">{fig("pressure", p.manifoldPressure - ambientPa, unitSystem)}</td>
-                      <td className="pr-4">{fig("pressure", p.manifoldPressure, unitSystem)}</td>
-                      <td className="pr-4">{fig("temperature", p.intakeTemperature, unitSystem)}</td>
-                      <td className="pr-4">{p.throttle ?? "—"}</td>
-                      <td className="pr-4">{p.time ?? "—"}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
-          ) : null}
-        </section>
+        <LogPreview parsed={parsed} ambientPa={ambientPa} unitSystem={unitSystem} pressureUnit={pressureUnit} temperatureUnit={temperatureUnit} />
       ) : null}
 
       {serverError ? (

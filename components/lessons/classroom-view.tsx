@@ -8,7 +8,7 @@ import { CautionsPanel } from "@/components/cautions-panel";
 import { CurveChart } from "@/components/charts/curve-chart";
 import type { LessonStep } from "@/db/repo/lessons";
 import { CopyItemButton, type CopyItemAction } from "./copy-item-button";
-import { SERIES_METRIC, stepCurves, type WhatIf } from "./curves";
+import { SERIES_METRIC, stepCurves, type WhatIf } from "@/lib/lessons/curves";
 import { DeltasTable } from "./deltas-table";
 import { LessonNote } from "./lesson-note";
 import { WhatIfControl } from "./what-if-control";

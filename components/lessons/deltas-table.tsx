@@ -1,8 +1,8 @@
 // Boost and net power of each item at a couple of engine speeds, with the change against the
 // first item (the step's reference), in the viewer's units.
 import type { UnitSystem } from "@/calc";
-import { deltaText, quantityText } from "@/components/units/format";
-import { deltaSpeeds, pointAt, type ItemCurve } from "./curves";
+import { deltaText, quantityText } from "@/lib/units/format";
+import { deltaSpeeds, pointAt, type ItemCurve } from "@/lib/lessons/curves";
 
 type DeltasTableProps = { curves: ItemCurve[]; unitSystem: UnitSystem };
 

@@ -5,8 +5,9 @@ import { useId, useState, useTransition, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import type { LessonSeries, LessonStep, StepInput, StepSource } from "@/db/repo/lessons";
-import { SERIES_LABEL } from "./curves";
+import type { LessonStep, StepSource } from "@/db/repo/lessons";
+import type { LessonSeries, StepInput } from "@/lib/lessons/rules";
+import { SERIES_LABEL } from "@/lib/lessons/curves";
 import { LessonNote } from "./lesson-note";
 
 type SaveResult = { ok: true } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };

@@ -3,9 +3,9 @@
 // changes what the chart and table show; nothing is saved.
 import { useId } from "react";
 import { fromSI, toSI, unitLabel, type UnitSystem } from "@/calc";
-import { figure } from "@/components/units/format";
-import type { StepItemSnapshot } from "@/db/repo/lessons";
-import { VE_SCALE_MAX, VE_SCALE_MIN, type WhatIf } from "./curves";
+import { figure } from "@/lib/units/format";
+import type { StepItemSnapshot } from "@/lib/lessons/rules";
+import { VE_SCALE_MAX, VE_SCALE_MIN, type WhatIf } from "@/lib/lessons/curves";
 
 type WhatIfControlProps = { items: StepItemSnapshot[]; unitSystem: UnitSystem; value: WhatIf; onChange: (w: WhatIf) => void };
 

@@ -3,7 +3,7 @@
 import type { UseFormRegister } from "react-hook-form";
 import type { UnitSystem } from "@/calc";
 import { Field } from "@/components/ui/field";
-import { unitOf, type PlannerForm } from "./form-model";
+import { unitOf, type PlannerForm } from "@/lib/combinations/form-model";
 
 export type NumFieldProps = {
   path: string;

@@ -1,12 +1,12 @@
-import type { ShareVerdict } from "@/app/_lib/share-link";
-
-type Reason = Extract<ShareVerdict, { ok: false }>["reason"] | "gone" | "revoked";
+/** Why a link opened no sheet: the share-link verdicts (app/_lib/share-link.ts), a stopped link or a removed sheet. */
+export type LinkRefusalReason = "expired" | "forged" | "malformed" | "gone" | "revoked";
+type Reason = LinkRefusalReason;
 
 const TEXT: Record<Reason, { title: string; body: string }> = {
   expired: { title: "This link has expired", body: "Links to a recommendation sheet work for a limited time. Ask the shop to send you a new one." },
   forged: { title: "This link is not valid", body: "The link may have been changed or cut short. Open it again from the e-mail, copying the whole address, or ask the shop for a new one." },
   malformed: { title: "This link is not valid", body: "The link may have been changed or cut short. Open it again from the e-mail, copying the whole address, or ask the shop for a new one." },
-  revoked: { title: "This link was withdrawn", body: "The shop withdrew this copy of the sheet. Ask the shop for the current one." },
+  revoked: { title: "This link was withdrawn", body: "The shop has stopped the links to this sheet. Ask the shop for a new one." },
   gone: { title: "This sheet is no longer available", body: "The shop has removed it. Ask the shop for a new recommendation." },
 };
 

@@ -5,17 +5,19 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useFieldArray, useForm, useWatch } from "react-hook-form";
+import { useFieldArray, useForm, useWatch, type UseFormRegisterReturn } from "react-hook-form";
 import type { z } from "zod";
 import { fromSI, unitLabel, type Combination, type UnitSystem } from "@/calc";
-import { ApiError, apiJson } from "@/components/shelf/api";
+import { ApiError, apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { recommendationInputSchema } from "@/db/recommendation-rules";
+import { recommendationInputSchema } from "@/lib/recommendations/rules";
 import { usePrice } from "@/components/price";
-import { lineTotal, sumMoney } from "@/db/shelf-rules";
-import { PulleyHelp, type ShelfPulley } from "./pulley-help";
+import { lineTotal, sumMoney } from "@/lib/shelf/rules";
+import { PulleyHelp } from "@/components/pulleys/pulley-help";
+import { PartsTable } from "./parts-table";
+import type { ShelfPulley } from "@/lib/planner/compute";
 
 export type ShelfPart = { partNumber: string; description: string; price: string; stock: number; diameter?: number; position?: string };
 type FormIn = z.input<typeof recommendationInputSchema>;
@@ -50,9 +52,9 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
   const size = (m: number) => `${fromSI("length-small", m, unitSystem).toFixed(unitSystem === "metric" ? 1 : 2)} ${unit}`;
 
   const amounts = watched.map((l) => {
-    const price = String(l?.unitPrice ?? "").trim();
+    const unit = String(l?.unitPrice ?? "").trim();
     const qty = Number(l?.quantity);
-    return MONEY.test(price) && Number.isInteger(qty) && qty >= 1 && qty <= 999 ? lineTotal(price, qty) : null;
+    return MONEY.test(unit) && Number.isInteger(qty) && qty >= 1 && qty <= 999 ? lineTotal(unit, qty) : null;
   });
   const total = amounts.every((a) => a !== null) ? sumMoney(amounts as string[]) : null;
 
@@ -140,7 +142,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
           errors={errors.targetRpm?.message}
           hint={`The engine speed the customer was sold the boost at; the sheet's headline is read there. Empty: redline (${Math.round(combination.spec.engine.redlineRpm)} rpm).`}
         />
-        <PulleyHelp spec={combination.spec} pulleys={pulleys} unitSystem={unitSystem} chosen={chosen} onChoose={choose} />
+        <PulleyHelp spec={combination.spec} shelf={pulleys} system={unitSystem} onChoose={choose} />
       </section>
 
       <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
@@ -157,15 +159,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
           <Field label="Customer e-mail" type="email" autoComplete="off" {...form.register("customerEmail")} errors={errors.customerEmail?.message} hint="Needed to send the sheet." />
         </div>
         <div className="flex flex-col gap-1">
-          <label htmlFor="f-vehicleNotes" className="text-sm font-medium">
-            Vehicle notes
-          </label>
-          <textarea id="f-vehicleNotes" rows={2} {...form.register("vehicleNotes")} aria-describedby={errors.vehicleNotes ? "f-vehicleNotes-error" : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
-          {errors.vehicleNotes ? (
-            <p id="f-vehicleNotes-error" role="alert" className="text-xs text-danger">
-              {errors.vehicleNotes.message}
-            </p>
-          ) : null}
+          <NotesField id="f-vehicleNotes" label="Vehicle notes" rows={2} registration={form.register("vehicleNotes")} error={errors.vehicleNotes?.message} />
         </div>
       </section>
 
@@ -202,127 +196,13 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
           </Button>
         </div>
         {lines.fields.length === 0 ? <p className="text-sm text-muted">No parts yet.</p> : null}
-        {lines.fields.length ? (
-          <table className="w-full text-sm">
-            <caption className="sr-only">Parts list</caption>
-            <thead>
-              <tr className="border-b border-line text-left">
-                <th scope="col" className="py-1 font-medium">
-                  Description
-                </th>
-                <th scope="col" className="w-32 py-1 text-right font-medium">
-                  Each
-                </th>
-                <th scope="col" className="w-24 py-1 text-right font-medium">
-                  Qty
-                </th>
-                <th scope="col" className="w-28 py-1 text-right font-medium">
-                  Amount
-                </th>
-                <th scope="col" className="w-20 py-1">
-                  <span className="sr-only">Remove</span>
-                </th>
-              </tr>
-            </thead>
-            <tbody>
-              {lines.fields.map((f, i) => {
-                const fromShelf = !!watched[i]?.partNumber;
-                return (
-                  <tr key={f.id} className="border-b border-line align-top">
-                    <td className="py-1 pr-2">
-                      <label htmlFor={`line-${i}-description`} className="sr-only">
-                        Description of line {i + 1}
-                      </label>
-                      <input
-                        id={`line-${i}-description`}
-                        readOnly={fromShelf}
-                        {...form.register(`parts.${i}.description`)}
-                        aria-invalid={lineError(i, "description") ? true : undefined}
-                        aria-describedby={lineError(i, "description") ? `line-${i}-description-error` : undefined}
-                        placeholder="e.g. Belt, 8-rib"
-                        className="w-full rounded-md border border-line bg-panel px-2 py-1 read-only:border-transparent read-only:bg-transparent"
-                      />
-                      {fromShelf ? <span className="text-xs text-muted">{watched[i]?.partNumber} · shelf price</span> : null}
-                      {lineError(i, "description") || lineError(i, "partNumber") ? (
-                        <p id={`line-${i}-description-error`} role="alert" className="text-xs text-danger">
-                          {lineError(i, "description") ?? lineError(i, "partNumber")}
-                        </p>
-                      ) : null}
-                    </td>
-                    <td className="py-1 pr-2 text-right">
-                      <label htmlFor={`line-${i}-price`} className="sr-only">
-                        Price each, line {i + 1}
-                      </label>
-                      <input
-                        id={`line-${i}-price`}
-                        readOnly={fromShelf}
-                        inputMode="decimal"
-                        {...form.register(`parts.${i}.unitPrice`)}
-                        aria-invalid={lineError(i, "unitPrice") ? true : undefined}
-                        aria-describedby={lineError(i, "unitPrice") ? `line-${i}-price-error` : undefined}
-                        className="w-full rounded-md border border-line bg-panel px-2 py-1 text-right read-only:border-transparent read-only:bg-transparent"
-                      />
-                      {lineError(i, "unitPrice") ? (
-                        <p id={`line-${i}-price-error`} role="alert" className="text-xs text-danger">
-                          {lineError(i, "unitPrice")}
-                        </p>
-                      ) : null}
-                    </td>
-                    <td className="py-1 pr-2 text-right">
-                      <label htmlFor={`line-${i}-quantity`} className="sr-only">
-                        Quantity, line {i + 1}
-                      </label>
-                      <input
-                        id={`line-${i}-quantity`}
-                        inputMode="numeric"
-                        {...form.register(`parts.${i}.quantity`)}
-                        aria-invalid={lineError(i, "quantity") ? true : undefined}
-                        aria-describedby={lineError(i, "quantity") ? `line-${i}-quantity-error` : undefined}
-                        className="w-full rounded-md border border-line bg-panel px-2 py-1 text-right"
-                      />
-                      {lineError(i, "quantity") ? (
-                        <p id={`line-${i}-quantity-error`} role="alert" className="text-xs text-danger">
-                          {lineError(i, "quantity")}
-                        </p>
-                      ) : null}
-                    </td>
-                    <td className="py-1 text-right num">{amounts[i] == null ? "–" : price(amounts[i]!)}</td>
-                    <td className="py-1 text-right">
-                      <Button type="button" variant="ghost" onClick={() => lines.remove(i)} aria-label={`Remove line ${i + 1}`}>
-                        Remove
-                      </Button>
-                    </td>
-                  </tr>
-                );
-              })}
-            </tbody>
-            <tfoot>
-              <tr>
-                <th scope="row" colSpan={3} className="py-1 text-right">
-                  Total
-                </th>
-                <td className="py-1 text-right font-semibold" data-testid="form-total">
-                  {total === null ? "–" : price(total)}
-                </td>
-                <td />
-              </tr>
-            </tfoot>
-          </table>
-        ) : null}
+        {lines.fields.length ? <PartsTable form={form} lines={lines} watched={watched} amounts={amounts} total={total} lineError={lineError} /> : null}
       </section>
 
       <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
         <h2 className="text-lg font-semibold">4. Notes</h2>
         <div className="flex flex-col gap-1">
-          <label htmlFor="f-notes" className="text-sm font-medium">
-            Notes for the customer
-          </label>
-          <textarea id="f-notes" rows={3} {...form.register("notes")} aria-describedby={errors.notes ? "f-notes-error" : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
-          {errors.notes ? (
-            <p id="f-notes-error" role="alert" className="text-xs text-danger">
-              {errors.notes.message}
-            </p>
-          ) : null}
+          <NotesField id="f-notes" label="Notes for the customer" rows={3} registration={form.register("notes")} error={errors.notes?.message} />
         </div>
       </section>
 
@@ -336,5 +216,22 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
         </Button>
       </div>
     </form>
+  );
+}
+
+/** A labelled text area with its error tied to it. */
+function NotesField({ id, label, rows, registration, error }: { id: string; label: string; rows: number; registration: UseFormRegisterReturn; error?: string }) {
+  return (
+    <>
+      <label htmlFor={id} className="text-sm font-medium">
+        {label}
+      </label>
+      <textarea id={id} rows={rows} {...registration} aria-describedby={error ? `${id}-error` : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
+      {error ? (
+        <p id={`${id}-error`} role="alert" className="text-xs text-danger">
+          {error}
+        </p>
+      ) : null}
+    </>
   );
 }

@@ -4,8 +4,10 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useState } from "react";
 import { fromSI, unitLabel, type UnitSystem } from "@/calc";
-import { apiJson, queryString } from "@/components/shelf/api";
-import { Pager, SelectField } from "@/components/shelf/table-parts";
+import { apiJson, queryString } from "@/components/client-json";
+import { EmptyRow } from "@/components/ui/data-table";
+import { Pager } from "@/components/ui/pager";
+import { SelectField } from "@/components/ui/select-field";
 import { Notice } from "@/components/ui/notice";
 import { usePrice } from "@/components/price";
 
@@ -104,11 +106,9 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
               </tr>
             ))}
             {q.data && q.data.rows.length === 0 ? (
-              <tr>
-                <td colSpan={7} className="px-2 py-4 text-center text-muted">
-                  No sheets match.
-                </td>
-              </tr>
+              <EmptyRow colSpan={7} className="px-2 py-4 text-center text-muted">
+                No sheets match.
+              </EmptyRow>
             ) : null}
           </tbody>
         </table>

@@ -2,7 +2,7 @@
 // What staff do with a sheet: print it, download the PDF, edit a draft, record the answer by hand.
 // Sending (with its preview) and the customer's link are in the sheet page's link panel.
 import Link from "next/link";
-import { apiJson } from "@/components/shelf/api";
+import { apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { useAction } from "@/components/ui/use-action";

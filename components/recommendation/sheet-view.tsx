@@ -3,11 +3,12 @@
 import type { Combination, UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { CurveChart } from "@/components/charts/curve-chart";
-import { quantityText } from "@/components/units/format";
-import { defaultSheetTitle, type PartLine } from "@/db/recommendation-rules";
+import { quantityText } from "@/lib/units/format";
+import { defaultSheetTitle, type PartLine } from "@/lib/recommendations/rules";
 import type { ShopDetails } from "@/db/repo/shop";
 import { formatPrice } from "@/lib/orders/money";
-import { computeSheet } from "./sheet-data";
+import { computeSheet } from "@/lib/recommendations/sheet-data";
+import { TotalFoot } from "@/components/ui/data-table";
 
 export type SheetRecord = {
   id: string;
@@ -159,16 +160,9 @@ export function SheetView({ sheet, shop, currency, unitSystem, print = false }: 
                   </tr>
                 ))}
               </tbody>
-              <tfoot>
-                <tr>
-                  <th scope="row" colSpan={3} className="py-1 text-right">
-                    Total
-                  </th>
-                  <td className="whitespace-nowrap py-1 pl-3 text-right font-semibold tabular-nums" data-testid="sheet-total">
-                    {price(sheet.total)}
-                  </td>
-                </tr>
-              </tfoot>
+              <TotalFoot labelSpan={3} testId="sheet-total">
+                {price(sheet.total)}
+              </TotalFoot>
             </table>
           )}
         </section>

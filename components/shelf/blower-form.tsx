@@ -6,7 +6,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { fromSI, type UnitSystem } from "@/calc";
 import { Field } from "@/components/ui/field";
-import { blowerFormSchema } from "@/db/shelf-rules";
+import { blowerFormSchema } from "@/lib/shelf/rules";
 import type { BlowerRow } from "@/db/schema";
 import { FormSelect, ShelfFormFrame, useShelfSave } from "./shelf-form";
 

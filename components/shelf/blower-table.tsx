@@ -5,8 +5,8 @@ import { fromSI, type UnitSystem } from "@/calc";
 import { usePrice } from "@/components/price";
 import { BlowerForm, type BlowerJson } from "./blower-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
-import { stockCell, stockClass } from "./stock";
-import { SelectField } from "./table-parts";
+import { stockCell, stockClass } from "@/lib/shelf/stock";
+import { SelectField } from "@/components/ui/select-field";
 
 type Sort = "partNumber" | "name" | "displacementPerRev" | "maxRpm" | "price" | "stock";
 

@@ -5,16 +5,19 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { BLOWER_CSV_COLUMNS, MAX_CSV_BYTES, PULLEY_CSV_COLUMNS, type CsvRowError, type ShelfKind } from "@/db/shelf-rules";
-import { ApiError } from "./api";
+import { BLOWER_CSV_COLUMNS, MAX_CSV_BYTES, PULLEY_CSV_COLUMNS, type CsvRowError, type ShelfKind } from "@/lib/shelf/rules";
+import { ApiError, apiJson } from "@/components/client-json";
 
 type Preview = { rowCount: number; errors: CsvRowError[]; committed: boolean; inserted: number; updated: number; rows: { line: number; record: { partNumber: string } }[] };
 
 async function post(kind: ShelfKind, commit: boolean, file: File): Promise<Preview> {
-  const res = await fetch(`/api/shelf/import?kind=${kind}&commit=${commit ? 1 : 0}`, { method: "POST", headers: { "content-type": "text/csv" }, body: file });
-  const data = await res.json().catch(() => ({}));
-  if (!res.ok && !(commit && Array.isArray(data.errors))) throw new ApiError(data.error ?? `The server answered ${res.status}.`, res.status, data.fieldErrors ?? {});
-  return data as Preview;
+  try {
+    return await apiJson<Preview>(`/api/shelf/import?kind=${kind}&commit=${commit ? 1 : 0}`, { method: "POST", headers: { "content-type": "text/csv" }, body: file });
+  } catch (e) {
+    // A refused commit still answers with the per-line errors to show.
+    if (commit && e instanceof ApiError && Array.isArray((e.body as { errors?: unknown } | null)?.errors)) return e.body as Preview;
+    throw e;
+  }
 }
 
 export function CsvImport({ kind }: { kind: ShelfKind }) {

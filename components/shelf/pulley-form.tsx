@@ -6,7 +6,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { fromSI, type UnitSystem } from "@/calc";
 import { Field } from "@/components/ui/field";
-import { pulleyFormSchema } from "@/db/shelf-rules";
+import { pulleyFormSchema } from "@/lib/shelf/rules";
 import type { PulleyRow } from "@/db/schema";
 import { FormSelect, ShelfFormFrame, useShelfSave } from "./shelf-form";
 

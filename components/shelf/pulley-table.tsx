@@ -5,8 +5,8 @@ import { fromSI, type UnitSystem } from "@/calc";
 import { usePrice } from "@/components/price";
 import { PulleyForm, type PulleyJson } from "./pulley-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
-import { stockCell, stockClass } from "./stock";
-import { SelectField } from "./table-parts";
+import { stockCell, stockClass } from "@/lib/shelf/stock";
+import { SelectField } from "@/components/ui/select-field";
 
 type Sort = "partNumber" | "diameter" | "ribCount" | "price" | "stock";
 

@@ -7,7 +7,7 @@ import type { ReactNode } from "react";
 import type { FieldValues, Path, UseFormRegisterReturn, UseFormReturn } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { ApiError, apiJson } from "./api";
+import { ApiError, apiJson } from "@/components/client-json";
 import type { ShelfKind } from "./shelf-list";
 
 /** The submit handler: POST a new part or PUT an edited one, then refresh every shelf list. */

@@ -6,8 +6,9 @@ import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-quer
 import { useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { apiJson, queryString } from "./api";
-import { Pager, SortHeader, type SortState } from "./table-parts";
+import { apiJson, queryString } from "@/components/client-json";
+import { SortHeader, type SortState } from "@/components/ui/data-table";
+import { Pager } from "@/components/ui/pager";
 
 export type ShelfKind = "blowers" | "pulleys";
 

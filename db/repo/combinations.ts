@@ -3,39 +3,29 @@
 // based on an out-of-date revision is refused (409) instead of overwriting someone else's edit.
 import { and, asc, count, desc, eq, ilike, isNull, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
+import { plainText } from "@/lib/validation/text";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
 import { preparedFor } from "../prepared";
-import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "../errors";
-import { assert, canCreateForCustomer, canReadOwned, canWriteOwned, isShopStaff, type Actor } from "../policy";
+import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "@/lib/errors";
+import { assert, canCreateForCustomer, canReadOwned, canSeeCustomer, canWriteOwned, isShopStaff, type Actor } from "../policy";
 import { combinationRevisions, combinations, users, type CombinationRow } from "../schema";
-
-// PostgreSQL text cannot hold NUL, and control characters in a name only cause trouble later
-// (files, e-mails, terminals): refuse them here with a message instead of a database error.
-const CONTROL = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F]/;
-const CONTROL_OR_NEWLINE = /[\u0000-\u001F\u007F]/;
-const text = (label: string, max: number, opts: { multiline?: boolean } = {}) =>
-  z
-    .string({ error: `${label} must be text.` })
-    .trim()
-    .max(max, `${label} must be at most ${max} characters.`)
-    .refine((v) => !(opts.multiline ? CONTROL : CONTROL_OR_NEWLINE).test(v), `${label} must not contain control characters.`);
 
 /** Fields a person edits besides the spec. */
 export const combinationMetaSchema = z.object({
-  name: text("Name", 120).min(1, "Give the combination a name."),
-  customerName: text("Customer name", 120).nullish().transform((v) => v || null),
-  customerContact: text("Customer contact", 200).nullish().transform((v) => v || null),
+  name: plainText("Name", 120).min(1, "Give the combination a name."),
+  customerName: plainText("Customer name", 120).nullish().transform((v) => v || null),
+  customerContact: plainText("Customer contact", 200).nullish().transform((v) => v || null),
 });
 
 export const createCombinationSchema = combinationMetaSchema.extend({
   spec: combinationSchema,
-  note: text("Note", 500, { multiline: true }).nullish(),
+  note: plainText("Note", 500, { multiline: true }).nullish(),
 });
 
 export const saveCombinationSchema = combinationMetaSchema.partial().extend({
   spec: combinationSchema.optional(),
-  note: text("Note", 500, { multiline: true }).nullish(),
+  note: plainText("Note", 500, { multiline: true }).nullish(),
   /** The revision the edit started from; the save is refused if someone saved since. */
   baseRevision: z
     .number({ error: "baseRevision (the revision you started from) is required." })
@@ -51,7 +41,7 @@ export const restoreRevisionSchema = z.object({
 });
 
 export const listQuerySchema = z.object({
-  search: text("Search", 100).optional(),
+  search: plainText("Search", 100).optional(),
   sort: z.enum(["name", "updatedAt", "createdAt", "displacement", "blowerPulleyDiameter"]).default("updatedAt"),
   dir: z.enum(["asc", "desc"]).default("desc"),
   page: z.coerce.number().int().min(1, "page must be 1 or more").default(1),
@@ -91,7 +81,9 @@ function buildListQuery(db: DbOrTx, shape: ListShape, key: string) {
   if (shape.scope === "demo") conds.push(eq(combinations.isDemo, true));
   if (shape.search) {
     const like = sql.placeholder("like");
-    conds.push(or(ilike(combinations.name, like), ilike(combinations.customerName, like), ilike(combinations.customerContact, like)));
+    // Customer fields are searched only where the searcher may see them (else a match would tell).
+    const customerMatch = or(ilike(combinations.customerName, like), ilike(combinations.customerContact, like));
+    conds.push(or(ilike(combinations.name, like), shape.visibility === "all" ? customerMatch : and(eq(combinations.ownerId, actorId), customerMatch)));
   }
   const where = and(...conds);
   const col = combinations[shape.sort];
@@ -140,7 +132,12 @@ export async function listCombinations(db: DbOrTx, actor: Actor, query: ListQuer
   };
   const rows = await prepared.page.execute(params);
   const total = rows.length ? rows[0].total : (await prepared.total.execute(params))[0].n;
-  return { items: rows.map(({ total: _t, ...r }) => r), total, page: q.page, pageSize: q.pageSize };
+  return { items: rows.map(({ total: _t, ...r }) => maskCustomer(actor, r)), total, page: q.page, pageSize: q.pageSize };
+}
+
+/** Hides the customer fields of a row the actor may read but whose customer is not theirs to know. */
+function maskCustomer<T extends { ownerId: string; customerName: string | null; customerContact: string | null }>(actor: Actor, row: T): T {
+  return canSeeCustomer(actor, row.ownerId) ? row : { ...row, customerName: null, customerContact: null };
 }
 
 async function findRow(db: DbOrTx, id: string, opts: { includeDeleted?: boolean } = {}) {
@@ -156,7 +153,7 @@ async function findRow(db: DbOrTx, id: string, opts: { includeDeleted?: boolean 
 export async function getCombination(db: DbOrTx, actor: Actor, id: string): Promise<CombinationRow & { spec: Combination }> {
   const row = await findRow(db, id);
   if (!row || !canReadOwned(actor, row.ownerId, { isDemo: row.isDemo })) throw new NotFoundError("No such combination.");
-  return row as CombinationRow & { spec: Combination };
+  return maskCustomer(actor, row) as CombinationRow & { spec: Combination };
 }
 
 async function getWritable(db: DbOrTx, actor: Actor, id: string, opts: { includeDeleted?: boolean } = {}) {
@@ -295,7 +292,7 @@ export const importDocumentSchema = z.object({
       combinationMetaSchema.extend({
         spec: combinationSchema,
         revisions: z
-          .array(z.object({ number: z.number().int().min(1), name: text("Revision name", 120).min(1, "Each revision needs a name."), note: text("Revision note", 500, { multiline: true }).nullish(), spec: combinationSchema }))
+          .array(z.object({ number: z.number().int().min(1), name: plainText("Revision name", 120).min(1, "Each revision needs a name."), note: plainText("Revision note", 500, { multiline: true }).nullish(), spec: combinationSchema }))
           .max(500, "At most 500 revisions per combination.")
           .optional(),
       }),

@@ -14,14 +14,14 @@ import {
   type CleaningInput,
   type LogAmbient,
   type LogPoint,
-} from "@/app/_lib/datalog-parse";
-import { fitVe, NoUsableBinsError, specAsLogged, TooManyBinsError, withFittedVe } from "@/components/datalogs/analysis";
+} from "@/lib/datalogs/parse";
+import { fitVe, NoUsableBinsError, specAsLogged, TooManyBinsError, withFittedVe } from "@/lib/datalogs/analysis";
 import type { Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
-import { FieldError, NotFoundError } from "../errors";
+import { FieldError, NotFoundError } from "@/lib/errors";
 import { assert, canReadOwned, canWriteOwned, isShopStaff, type Actor } from "../policy";
 import { combinations, datalogPoints, datalogs, users, type DatalogRow } from "../schema";
-import { getCombination, getRevision, saveCombination } from "./combinations";
+import { getCombination, getRevision, saveCombination } from "@/db/repo/combinations";
 
 export const createDatalogSchema = z.object({
   combinationId: z.uuid("Pick a combination."),

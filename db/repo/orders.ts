@@ -20,11 +20,11 @@ import {
   type OrderListQuery,
 } from "@/lib/orders/status";
 import type { DbOrTx } from "../connect";
-import { ConflictError, FieldError, NotFoundError } from "../errors";
+import { ConflictError, FieldError, NotFoundError } from "@/lib/errors";
 import { assert, canRefundOrders, canSeeOrders, type Actor } from "../policy";
-import { blowers, datalogs, orderEvents, orderReservations, orders, paymentEvents, pulleys, recommendations, type OrderReservationRow, type OrderRow } from "../schema";
+import { blowers, datalogs, orderEvents, orderReservations, orders, paymentEvents, pulleys, recommendations, sheetVersions, type OrderReservationRow, type OrderRow } from "../schema";
 import { getShopTerms } from "./shop";
-import { getSentVersion, type SheetSnapshot } from "./sheet-versions";
+import { getSentVersion, getSentVersionById, type SentGrant, type SheetSnapshot } from "./sheet-versions";
 
 const NOT_FOUND = "No such order.";
 const isUuid = (id: string) => z.uuid().safeParse(id).success;
@@ -41,7 +41,7 @@ async function trail(db: DbOrTx, orderId: string, e: Trail) {
  * Opens (or re-opens) the order for one sent version and a checkout session for its deposit.
  * Refused for a withdrawn, superseded, declined or already paid sheet.
  */
-export async function startCheckout(db: DbOrTx, gateway: PaymentGateway, grant: { versionId: string }, urls: { successUrl: string; cancelUrl: string }) {
+export async function startCheckout(db: DbOrTx, gateway: PaymentGateway, grant: SentGrant, urls: { successUrl: string; cancelUrl: string }) {
   const v = await getSentVersion(db, grant);
   if (!v) throw new NotFoundError("No such sheet.");
   if (!v.latest) throw new ConflictError("A newer version of this sheet was sent; accept it from the newest e-mail.", { field: "version" });
@@ -123,7 +123,7 @@ export async function recordPaidCheckout(db: DbOrTx, paid: PaidCheckout): Promis
       await trail(tx, order.id, { kind: "mismatch", message: `The payment service reported ${paid.amountMinor} ${paid.currency} (minor units) instead of ${expected} ${order.currency}; the order was left unpaid for staff to check.`, reference: paid.eventId });
       return { kind: "ignored", reason: "amount or currency differs from the deposit" } as const;
     }
-    const v = await getSentVersion(tx, { versionId: order.sheetVersionId }).catch(() => undefined);
+    const v = await getSentVersionById(tx, order.sheetVersionId);
     if (!v) return { kind: "ignored", reason: "the sheet version is gone" } as const;
     const now = new Date();
     await trail(tx, order.id, { kind: "paid", message: "Deposit paid.", amount: order.deposit, reference: paid.paymentIntentId ?? paid.eventId });
@@ -271,10 +271,11 @@ export async function cancelOrder(db: DbOrTx, actor: Actor, gateway: PaymentGate
 }
 
 /** What the customer's link shows of their order for one sent version (no trail, no other orders). */
-export async function getCustomerOrder(db: DbOrTx, grant: { versionId: string }) {
+export async function getCustomerOrder(db: DbOrTx, grant: SentGrant) {
   const [row] = await db
     .select({ status: orders.status, deposit: orders.deposit, currency: orders.currency, paidAt: orders.paidAt })
     .from(orders)
-    .where(eq(orders.sheetVersionId, grant.versionId));
+    .innerJoin(sheetVersions, eq(sheetVersions.id, orders.sheetVersionId))
+    .where(and(eq(sheetVersions.recommendationId, grant.recommendationId), eq(sheetVersions.version, grant.version)));
   return row ?? null;
 }

@@ -3,17 +3,17 @@
 // them (db/policy.ts canWriteRecommendations); a customer reaches one sheet only through a signed
 // link, which the route verifies before calling getSharedRecommendation. The spec is copied into
 // the sheet so later edits to the combination never change what a customer was sent.
-import { and, count, desc, eq, ilike, or, type SQL } from "drizzle-orm";
+import { and, count, desc, eq, ilike, isNull, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
-import { ConflictError, FieldError, NotFoundError } from "../errors";
+import { ConflictError, FieldError, NotFoundError } from "@/lib/errors";
 import { assert, canWriteRecommendations, type Actor } from "../policy";
-import { combinations, recommendations, users, type RecommendationRow } from "../schema";
-export * from "../recommendation-rules";
-import { partLineSchema, recommendationInputSchema, updateRecommendationSchema, statusChangeSchema, recommendationListQuerySchema, type RecommendationInput, type PartLine } from "../recommendation-rules";
-import { getCombination, getRevision } from "./combinations";
-import { findParts, lineTotal, sumMoney } from "./shelf";
+import { combinations, recommendations, sheetVersions, users, type RecommendationRow } from "../schema";
+import { partLineSchema, recommendationInputSchema, updateRecommendationSchema, statusChangeSchema, recommendationListQuerySchema, type RecommendationInput, type PartLine } from "@/lib/recommendations/rules";
+import { getCombination, getRevision } from "@/db/repo/combinations";
+import { findParts } from "@/db/repo/shelf";
+import { lineTotal, sumMoney } from "@/lib/shelf/rules";
 
 export type Recommendation = Omit<RecommendationRow, "spec" | "parts"> & { spec: Combination; parts: PartLine[]; combinationName: string };
 
@@ -201,4 +201,29 @@ export async function recordSendFailure(db: DbOrTx, actor: Actor, id: string, me
     .where(eq(recommendations.id, id))
     .returning();
   return row;
+}
+
+/**
+ * The outbox's report on a sheet's e-mail (no actor: the mail sender reports what happened to a
+ * send that a permitted user started). Success marks it sent; a failure keeps the status and the error.
+ */
+export async function settleRecommendationMail(db: DbOrTx, id: string, error: string | null, at = new Date()) {
+  const set = error === null ? { status: "sent" as const, sentAt: at, lastError: null, updatedAt: at } : { lastError: error.slice(0, 500), updatedAt: at };
+  await db.update(recommendations).set(set).where(eq(recommendations.id, id));
+}
+
+/** Stops every share link sent so far for a sheet (its share version moves on); a new send makes a new link. */
+export async function revokeShareLinks(db: DbOrTx, actor: Actor, id: string) {
+  await getRecommendation(db, actor, id);
+  const at = new Date();
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(recommendations)
+      .set({ shareVersion: sql`${recommendations.shareVersion} + 1`, updatedAt: at })
+      .where(eq(recommendations.id, id))
+      .returning({ shareVersion: recommendations.shareVersion });
+    // The frozen copies behind those links are withdrawn too (db/repo/sheet-versions.ts).
+    await tx.update(sheetVersions).set({ revokedAt: at }).where(and(eq(sheetVersions.recommendationId, id), isNull(sheetVersions.revokedAt)));
+    return row;
+  });
 }

@@ -1,14 +1,15 @@
-// What the customer was sent. Each send freezes the sheet as it stood into a new version; the
-// share link names that version, so edits made after sending never change what the customer
-// reads. Sending again makes a new version (older links show a notice and cannot be paid);
-// staff can revoke every link of a sheet at once.
-import { and, desc, eq, isNull, max } from "drizzle-orm";
+// What the customer was sent. Each send freezes the sheet as it stood into a new version and
+// makes that number the sheet's share version; the share link names (sheet, version), so edits
+// made after sending never change what the customer reads. Sending again makes a new version
+// (older links still open their copy, with a notice, but cannot be paid); stopping the links
+// (revokeShareLinks) withdraws every version sent so far.
+import { and, desc, eq, isNull, max, type SQL } from "drizzle-orm";
 import type { Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
-import { ConflictError, NotFoundError } from "../errors";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { assert, canWriteRecommendations, type Actor } from "../policy";
 import { recommendations, sheetVersions, type SheetVersionRow } from "../schema";
-import { defaultSheetTitle, type PartLine } from "../recommendation-rules";
+import { defaultSheetTitle, type PartLine } from "@/lib/recommendations/rules";
 import { getRecommendation, type Recommendation } from "./recommendations";
 
 /** The sheet as sent: what the customer's link shows and what an order is made from. */
@@ -41,7 +42,9 @@ function revive(s: StoredSnapshot): SheetSnapshot {
   return { ...s, createdAt: new Date(s.createdAt), sentAt: s.sentAt ? new Date(s.sentAt) : null };
 }
 
-/** Freezes the sheet as it is now into the next version (call it when the e-mail went out). */
+export type SentGrant = { recommendationId: string; version: number };
+
+/** Freezes the sheet as it is now into the next version, which becomes its share version (call it as the e-mail is queued). */
 export async function recordSentVersion(db: DbOrTx, actor: Actor, rec: Recommendation, currency: string, at = new Date()): Promise<SheetVersionRow> {
   assert(canWriteRecommendations(actor), "Only the shop's sales, tuners and admin send sheets.");
   const snapshot: StoredSnapshot = {
@@ -63,25 +66,24 @@ export async function recordSentVersion(db: DbOrTx, actor: Actor, rec: Recommend
     createdAt: rec.createdAt.toISOString(),
     sentAt: at.toISOString(),
   };
-  // Two sends at once: the unique (sheet, version) index turns the loser into a retry.
-  for (let attempt = 0; ; attempt++) {
-    const [{ n }] = await db.select({ n: max(sheetVersions.version) }).from(sheetVersions).where(eq(sheetVersions.recommendationId, rec.id));
-    const rows = await db
-      .insert(sheetVersions)
-      .values({ recommendationId: rec.id, version: (n ?? 0) + 1, snapshot, sentAt: at })
-      .onConflictDoNothing()
-      .returning();
-    if (rows[0]) return rows[0];
-    if (attempt > 5) throw new ConflictError("The sheet is being sent by someone else right now; try again.");
-  }
+  // Past every version and share version so far: a stopped link's number is never reused.
+  return db.transaction(async (tx) => {
+    const [sheet] = await tx.select({ shareVersion: recommendations.shareVersion }).from(recommendations).where(eq(recommendations.id, rec.id)).for("update");
+    if (!sheet) throw new NotFoundError("No such recommendation.");
+    const [{ n }] = await tx.select({ n: max(sheetVersions.version) }).from(sheetVersions).where(eq(sheetVersions.recommendationId, rec.id));
+    const version = Math.max(n ?? 0, sheet.shareVersion) + 1;
+    const [row] = await tx.insert(sheetVersions).values({ recommendationId: rec.id, version, snapshot, sentAt: at }).returning();
+    await tx.update(recommendations).set({ shareVersion: version }).where(eq(recommendations.id, rec.id));
+    return row;
+  });
 }
 
-async function loadVersion(db: DbOrTx, versionId: string): Promise<SentVersion | undefined> {
+async function loadVersion(db: DbOrTx, where: SQL | undefined): Promise<SentVersion | undefined> {
   const [row] = await db
     .select({ v: sheetVersions, status: recommendations.status })
     .from(sheetVersions)
     .innerJoin(recommendations, eq(recommendations.id, sheetVersions.recommendationId))
-    .where(eq(sheetVersions.id, versionId));
+    .where(where);
   if (!row) return undefined;
   const [{ n }] = await db.select({ n: max(sheetVersions.version) }).from(sheetVersions).where(eq(sheetVersions.recommendationId, row.v.recommendationId));
   return { ...row.v, snapshot: revive(row.v.snapshot as StoredSnapshot), latest: row.v.version === n, recommendationStatus: row.status };
@@ -89,13 +91,16 @@ async function loadVersion(db: DbOrTx, versionId: string): Promise<SentVersion |
 
 /**
  * One sent version for the holder of a verified share token naming it. Undefined when the token
- * names something else (an older link naming the sheet itself); NotFound once revoked.
+ * names no sent version (a print token, or a link from before versions); NotFound once stopped.
  */
-export async function getSentVersion(db: DbOrTx, grant: { versionId: string }): Promise<SentVersion | undefined> {
-  const v = await loadVersion(db, grant.versionId);
+export async function getSentVersion(db: DbOrTx, grant: SentGrant): Promise<SentVersion | undefined> {
+  const v = await loadVersion(db, and(eq(sheetVersions.recommendationId, grant.recommendationId), eq(sheetVersions.version, grant.version)));
   if (v?.revokedAt) throw new NotFoundError("This link was withdrawn by the shop.");
   return v;
 }
+
+/** One version by its id, withdrawn or not (an order keeps the version it was made from). */
+export const getSentVersionById = (db: DbOrTx, id: string) => loadVersion(db, eq(sheetVersions.id, id));
 
 /** The newest version of a sheet, for staff (its link is shown on the sheet page). */
 export async function getLatestSentVersion(db: DbOrTx, actor: Actor, recommendationId: string): Promise<SheetVersionRow | undefined> {
@@ -109,19 +114,8 @@ export async function getLatestSentVersion(db: DbOrTx, actor: Actor, recommendat
   return row;
 }
 
-/** Withdraws every link of a sheet; the customer's page then says so. Returns how many were live. */
-export async function revokeSheetLinks(db: DbOrTx, actor: Actor, recommendationId: string, at = new Date()): Promise<number> {
-  await getRecommendation(db, actor, recommendationId);
-  const rows = await db
-    .update(sheetVersions)
-    .set({ revokedAt: at })
-    .where(and(eq(sheetVersions.recommendationId, recommendationId), isNull(sheetVersions.revokedAt)))
-    .returning({ id: sheetVersions.id });
-  return rows.length;
-}
-
 /** The customer's "no, thank you", with an optional reason; the sheet becomes declined. */
-export async function declineSentVersion(db: DbOrTx, grant: { versionId: string }, reason: string, at = new Date()) {
+export async function declineSentVersion(db: DbOrTx, grant: SentGrant, reason: string, at = new Date()) {
   const v = await getSentVersion(db, grant);
   if (!v) throw new NotFoundError("No such sheet.");
   if (!v.latest) throw new ConflictError("A newer version of this sheet was sent; answer on the newest e-mail.", { field: "version" });
@@ -133,8 +127,3 @@ export async function declineSentVersion(db: DbOrTx, grant: { versionId: string 
   });
 }
 
-/** Undoes a version whose e-mail could not be sent: the customer never got its link. */
-export async function discardSentVersion(db: DbOrTx, actor: Actor, versionId: string) {
-  assert(canWriteRecommendations(actor), "Only the shop's sales, tuners and admin send sheets.");
-  await db.delete(sheetVersions).where(eq(sheetVersions.id, versionId));
-}

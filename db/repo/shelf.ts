@@ -1,37 +1,26 @@
 // The parts shelf: the shop's blowers and pulleys with price and stock. Everyone signed in reads
 // it; only the admin changes it (db/policy.ts canEditShelf). Quantities are SI like calc/, money
 // is numeric in the database (read back as strings) and decimal.js here, never binary floats.
-// The zod schemas below are the one set of rules for the API, the admin's forms and CSV import.
-import { and, asc, count, desc, eq, gt, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
-import Papa from "papaparse";
+// The rules (zod schemas, money) live in lib/shelf/rules.ts; CSV import and export in shelf-csv.ts.
+import { and, asc, count, desc, eq, gt, ilike, inArray, or, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { fromSI } from "@/calc";
 import type { DbOrTx } from "../connect";
-import { FieldError, NotFoundError } from "../errors";
-export * from "../shelf-rules";
+import { FieldError, NotFoundError } from "@/lib/errors";
 import {
-  BLOWER_CSV_COLUMNS,
   type BlowerListQuery,
-  type BlowerRecord,
   type BlowerRecordInput,
-  type CsvParseResult,
-  type CsvPreviewRow,
-  type CsvRowError,
-  MAX_CSV_BYTES,
-  MAX_CSV_ROWS,
-  PULLEY_CSV_COLUMNS,
   type Page,
   type PulleyListQuery,
-  type PulleyRecord,
   type PulleyRecordInput,
-  type ShelfKind,
   blowerListQuerySchema,
   blowerRecordSchema,
   pulleyListQuerySchema,
   pulleyRecordSchema,
-} from "../shelf-rules";
+} from "@/lib/shelf/rules";
 import { assert, canEditShelf, canSeeShelf, type Actor } from "../policy";
 import { blowers, pulleys, type BlowerRow, type PulleyRow } from "../schema";
+
 const likeOf = (s: string) => `%${s.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
 
 export async function listPulleys(db: DbOrTx, actor: Actor, query: PulleyListQuery = {}): Promise<Page<PulleyRow>> {
@@ -122,7 +111,7 @@ export function describePulley(p: Pick<PulleyRow, "position" | "diameter" | "rib
 
 // ---------------------------------------------------------------- edits (admin)
 
-const ONLY_ADMIN = "Only the admin changes the parts shelf.";
+export const ONLY_ADMIN = "Only the admin changes the parts shelf.";
 const isUuid = (id: string) => z.uuid().safeParse(id).success;
 
 async function partNumberTaken(db: DbOrTx, partNumber: string, exceptId?: string) {
@@ -180,263 +169,4 @@ export async function deleteBlower(db: DbOrTx, actor: Actor, id: string) {
   if (!isUuid(id)) throw new NotFoundError("No such blower.");
   const [row] = await db.delete(blowers).where(eq(blowers.id, id)).returning({ id: blowers.id });
   if (!row) throw new NotFoundError("No such blower.");
-}
-
-// ---------------------------------------------------------------- CSV
-
-const OPTIONAL_COLUMNS = new Set(["notes", "min_belt_diameter_mm"]);
-
-export const csvColumns = (kind: ShelfKind): readonly string[] => (kind === "pulleys" ? PULLEY_CSV_COLUMNS : BLOWER_CSV_COLUMNS);
-
-/** One problem in a CSV file: its line in the file (1 = the header), the column, the message. */
-
-// Schema paths back to the file's column names, so an error names what the person sees.
-const PULLEY_FIELD_TO_COLUMN: Record<string, string> = {
-  partNumber: "part_number",
-  position: "position",
-  diameter: "diameter_mm",
-  ribCount: "rib_count",
-  minBeltDiameter: "min_belt_diameter_mm",
-  price: "price",
-  stock: "stock",
-  notes: "notes",
-};
-const BLOWER_FIELD_TO_COLUMN: Record<string, string> = {
-  partNumber: "part_number",
-  name: "name",
-  kind: "kind",
-  displacementPerRev: "displacement_l_per_rev",
-  builtInVolumeRatio: "built_in_volume_ratio",
-  maxRpm: "max_rpm",
-  volumetricEfficiencyRef: "volumetric_efficiency_ref",
-  referenceRpm: "reference_rpm",
-  internalEfficiency: "internal_efficiency",
-  mechanicalEfficiency: "mechanical_efficiency",
-  price: "price",
-  stock: "stock",
-  notes: "notes",
-};
-
-/** A text cell: a leading apostrophe that export added to defuse spreadsheet formulas is dropped. */
-const textCell = (s: string | undefined) => (s ?? "").replace(/^'(?=[=+\-@])/, "");
-/** On export, text that a spreadsheet would run as a formula gets a leading apostrophe. */
-const safeText = (s: string) => (/^[=+\-@]/.test(s) ? `'${s}` : s);
-
-/** A cell as a number; empty or not a number → NaN so the schema names the field. */
-const num = (s: string | undefined) => (s === undefined || s.trim() === "" ? NaN : Number(s.trim()));
-
-/** Checks the size, the header and every row; returns the records (SI) and per-line errors. Never writes. */
-export function parseShelfCsv(kind: "pulleys", text: string): CsvParseResult<PulleyRecord>;
-export function parseShelfCsv(kind: "blowers", text: string): CsvParseResult<BlowerRecord>;
-export function parseShelfCsv(kind: ShelfKind, text: string): CsvParseResult<PulleyRecord | BlowerRecord>;
-export function parseShelfCsv(kind: ShelfKind, text: string): CsvParseResult<PulleyRecord | BlowerRecord> {
-  const bytes = new TextEncoder().encode(text).length;
-  if (bytes > MAX_CSV_BYTES) {
-    throw new FieldError("file", `The file is ${(bytes / 1_000_000).toFixed(1)} MB; the limit is 1 MB and ${MAX_CSV_ROWS.toLocaleString("en-US")} rows. Split it into smaller files.`);
-  }
-  const body = text.replace(/^\uFEFF/, "");
-  if (!body.trim()) throw new FieldError("file", `The file is empty. Expected a header line with the columns: ${csvColumns(kind).join(", ")}.`);
-  const parsed = Papa.parse<string[]>(body, { header: false, skipEmptyLines: false });
-  const table = parsed.data;
-  const expected = csvColumns(kind);
-  const header = (table[0] ?? []).map((h) => h.trim().toLowerCase());
-  const missing = expected.filter((c) => !OPTIONAL_COLUMNS.has(c) && !header.includes(c));
-  const unknown = header.filter((h) => h !== "" && !expected.includes(h));
-  if (missing.length || unknown.length) {
-    const parts = [missing.length ? `missing ${missing.join(", ")}` : "", unknown.length ? `unknown ${unknown.join(", ")}` : ""].filter(Boolean);
-    throw new FieldError("file", `The columns do not match a ${kind === "pulleys" ? "pulley" : "blower"} file (${parts.join("; ")}). Expected columns: ${expected.join(", ")}.`);
-  }
-
-  const rows: CsvPreviewRow<PulleyRecord | BlowerRecord>[] = [];
-  const errors: CsvRowError[] = [];
-  const seen = new Map<string, number>();
-  const toColumn = kind === "pulleys" ? PULLEY_FIELD_TO_COLUMN : BLOWER_FIELD_TO_COLUMN;
-  let line = 1;
-  let dataRows = 0;
-  for (let i = 0; i < table.length; i++) {
-    const cells = table[i];
-    const here = line;
-    // A quoted cell may span lines: the next row starts after them.
-    line += 1 + cells.reduce((n, c) => n + (c.match(/\n/g)?.length ?? 0), 0);
-    if (i === 0) continue;
-    if (cells.every((c) => c.trim() === "")) continue;
-    if (++dataRows > MAX_CSV_ROWS) {
-      throw new FieldError("file", `The file has more than ${MAX_CSV_ROWS.toLocaleString("en-US")} rows; the limit is ${MAX_CSV_ROWS.toLocaleString("en-US")} rows and 1 MB. Split it into smaller files.`);
-    }
-    if (cells.length !== header.length) {
-      errors.push({ line: here, column: "", message: `This line has ${cells.length} cells; the header has ${header.length}.` });
-      continue;
-    }
-    const cell = (name: string) => {
-      const k = header.indexOf(name);
-      return k < 0 ? undefined : cells[k];
-    };
-    const raw =
-      kind === "pulleys"
-        ? {
-            partNumber: cell("part_number") ?? "",
-            position: (cell("position") ?? "").trim().toLowerCase(),
-            diameter: num(cell("diameter_mm")) / 1000,
-            ribCount: num(cell("rib_count")),
-            minBeltDiameter: (cell("min_belt_diameter_mm") ?? "").trim() === "" ? null : num(cell("min_belt_diameter_mm")) / 1000,
-            price: cell("price") ?? "",
-            stock: num(cell("stock")),
-            notes: textCell(cell("notes")),
-          }
-        : {
-            partNumber: cell("part_number") ?? "",
-            name: textCell(cell("name")),
-            kind: (cell("kind") ?? "").trim().toLowerCase(),
-            displacementPerRev: num(cell("displacement_l_per_rev")) / 1000,
-            builtInVolumeRatio: num(cell("built_in_volume_ratio")),
-            maxRpm: num(cell("max_rpm")),
-            volumetricEfficiencyRef: num(cell("volumetric_efficiency_ref")),
-            referenceRpm: num(cell("reference_rpm")),
-            internalEfficiency: num(cell("internal_efficiency")),
-            mechanicalEfficiency: num(cell("mechanical_efficiency")),
-            price: cell("price") ?? "",
-            stock: num(cell("stock")),
-            notes: textCell(cell("notes")),
-          };
-    const result = (kind === "pulleys" ? pulleyRecordSchema : blowerRecordSchema).safeParse(raw);
-    if (!result.success) {
-      for (const issue of result.error.issues) {
-        const field = String(issue.path[0] ?? "");
-        // SI bounds in a message would confuse: the file is in mm and L/rev.
-        const message = issue.message.replace(/between ([\d.]+) and ([\d.]+) m\b\.?/, (_m, a, b) => `between ${Number(a) * 1000} and ${Number(b) * 1000} mm.`);
-        errors.push({ line: here, column: toColumn[field] ?? field, message });
-      }
-      continue;
-    }
-    const pn = result.data.partNumber;
-    const first = seen.get(pn);
-    if (first !== undefined) {
-      errors.push({ line: here, column: "part_number", message: `Part number ${pn} is already on line ${first} of this file.` });
-      continue;
-    }
-    seen.set(pn, here);
-    rows.push({ line: here, record: result.data });
-  }
-  if (!rows.length && !errors.length) throw new FieldError("file", "The file has a header but no rows.");
-  return { rows, errors };
-}
-
-export type ImportOutcome = {
-  kind: ShelfKind;
-  committed: boolean;
-  rows: CsvPreviewRow<PulleyRecord | BlowerRecord>[];
-  errors: CsvRowError[];
-  inserted: number;
-  updated: number;
-};
-
-/**
- * CSV import: `commit: false` is the preview; `commit: true` writes every row (upsert by part
- * number) in one transaction, or nothing at all if any row has an error.
- */
-export async function importShelfCsv(db: DbOrTx, actor: Actor, kind: ShelfKind, csv: string, opts: { commit: boolean }): Promise<ImportOutcome> {
-  assert(canEditShelf(actor), ONLY_ADMIN);
-  const { rows, errors } = parseShelfCsv(kind, csv);
-  const outcome: ImportOutcome = { kind, committed: false, rows, errors, inserted: 0, updated: 0 };
-  if (!opts.commit || errors.length) return outcome;
-
-  // A part number is one thing: a pulley's number may not name a blower and the other way round.
-  const numbers = rows.map((r) => r.record.partNumber);
-  const other = kind === "pulleys" ? blowers : pulleys;
-  const clashes = await db.select({ partNumber: other.partNumber }).from(other).where(inArray(other.partNumber, numbers));
-  if (clashes.length) {
-    const lineOf = new Map(rows.map((r) => [r.record.partNumber, r.line]));
-    outcome.errors = clashes.map((c) => ({ line: lineOf.get(c.partNumber) ?? 0, column: "part_number", message: `Part number ${c.partNumber} belongs to a ${kind === "pulleys" ? "blower" : "pulley"} on the shelf.` }));
-    return outcome;
-  }
-
-  const CHUNK = 500;
-  await db.transaction(async (tx) => {
-    for (let i = 0; i < rows.length; i += CHUNK) {
-      const chunk = rows.slice(i, i + CHUNK).map((r) => r.record);
-      const now = new Date();
-      const written =
-        kind === "pulleys"
-          ? await tx
-              .insert(pulleys)
-              .values(chunk as PulleyRecord[])
-              .onConflictDoUpdate({
-                target: pulleys.partNumber,
-                set: {
-                  position: sql`excluded.position`,
-                  diameter: sql`excluded.diameter`,
-                  ribCount: sql`excluded.rib_count`,
-                  minBeltDiameter: sql`excluded.min_belt_diameter`,
-                  price: sql`excluded.price`,
-                  stock: sql`excluded.stock`,
-                  notes: sql`excluded.notes`,
-                  updatedAt: now,
-                },
-              })
-              .returning({ inserted: sql<boolean>`(xmax = 0)` })
-          : await tx
-              .insert(blowers)
-              .values(chunk as BlowerRecord[])
-              .onConflictDoUpdate({
-                target: blowers.partNumber,
-                set: {
-                  name: sql`excluded.name`,
-                  kind: sql`excluded.kind`,
-                  displacementPerRev: sql`excluded.displacement_per_rev`,
-                  builtInVolumeRatio: sql`excluded.built_in_volume_ratio`,
-                  maxRpm: sql`excluded.max_rpm`,
-                  volumetricEfficiencyRef: sql`excluded.volumetric_efficiency_ref`,
-                  referenceRpm: sql`excluded.reference_rpm`,
-                  internalEfficiency: sql`excluded.internal_efficiency`,
-                  mechanicalEfficiency: sql`excluded.mechanical_efficiency`,
-                  price: sql`excluded.price`,
-                  stock: sql`excluded.stock`,
-                  notes: sql`excluded.notes`,
-                  updatedAt: now,
-                },
-              })
-              .returning({ inserted: sql<boolean>`(xmax = 0)` });
-      for (const w of written) {
-        if (w.inserted) outcome.inserted++;
-        else outcome.updated++;
-      }
-    }
-  });
-  outcome.committed = true;
-  return outcome;
-}
-
-// Lengths in mm and volumes in L with enough digits to survive a round trip through the file.
-const mm = (m: number) => String(Number((m * 1000).toFixed(4)));
-const litres = (m3: number) => String(Number((m3 * 1000).toFixed(6)));
-
-/** The whole shelf of one kind as CSV, in the import's columns. */
-export async function exportShelfCsv(db: DbOrTx, actor: Actor, kind: ShelfKind): Promise<string> {
-  assert(canSeeShelf(actor));
-  if (kind === "pulleys") {
-    const rows = await db.select().from(pulleys).orderBy(asc(pulleys.position), asc(pulleys.diameter), asc(pulleys.partNumber));
-    return Papa.unparse({
-      fields: [...PULLEY_CSV_COLUMNS],
-      data: rows.map((p) => [p.partNumber, p.position, mm(p.diameter), p.ribCount, p.minBeltDiameter === null ? "" : mm(p.minBeltDiameter), p.price, p.stock, safeText(p.notes)]),
-    });
-  }
-  const rows = await db.select().from(blowers).orderBy(asc(blowers.partNumber));
-  return Papa.unparse({
-    fields: [...BLOWER_CSV_COLUMNS],
-    data: rows.map((b) => [
-      b.partNumber,
-      safeText(b.name),
-      b.kind,
-      litres(b.displacementPerRev),
-      b.builtInVolumeRatio,
-      b.maxRpm,
-      b.volumetricEfficiencyRef,
-      b.referenceRpm,
-      b.internalEfficiency,
-      b.mechanicalEfficiency,
-      b.price,
-      b.stock,
-      safeText(b.notes),
-    ]),
-  });
 }

@@ -3,9 +3,10 @@ import bcrypt from "bcryptjs";
 import crypto from "node:crypto";
 import { z } from "zod";
 import type { DbOrTx } from "../connect";
+import { inKeyOrder } from "../keyed-queue";
 import { preparedFor } from "../prepared";
 import { authTokens, signInAttempts, users, type Role, type User } from "../schema";
-import { ConflictError, NotFoundError } from "../errors";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { assert, canManageUsers, ROLES, type Actor } from "../policy";
 
 export const normalizeEmail = (e: string) => e.trim().toLowerCase();
@@ -24,6 +25,16 @@ export async function getUserById(db: DbOrTx, id: string): Promise<User | undefi
   const query = preparedFor(db, "user_by_id", () => db.select().from(users).where(eq(users.id, sql.placeholder("id"))).prepare("user_by_id"));
   const [u] = await query.execute({ id });
   return u;
+}
+
+/** A session is alive while its account exists, is enabled, and has not moved to a newer session version. */
+export function sessionIsAlive(u: User | undefined, sv: number): u is User {
+  return !!u && !u.disabled && u.sessionVersion === sv;
+}
+
+/** Ends every session of an account (sign-out, "sign out everywhere", new password, disabled). */
+export async function endAllSessions(db: DbOrTx, userId: string) {
+  await db.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId));
 }
 
 export function toActor(u: User): Actor {
@@ -57,56 +68,80 @@ function pgCode(e: unknown): string | undefined {
   return undefined;
 }
 
-// Rate limits: a few wrong passwords per account, more per address, in a sliding window.
+// Sign-in limits, in a 15-minute sliding window (the app's own numbers; common practice, no
+// published source). Failures count since the account's last success.
+// - per address: 20 failures, then that address waits out the window;
+// - per account and address: 5 failures, then that pair waits out the window;
+// - per account from anywhere: after 5 failures, one try per 30 s. This slows a guesser who
+//   spreads over many addresses without ever locking the owner out of their own account.
 const WINDOW_MS = 15 * 60 * 1000;
 export const MAX_FAILURES_PER_ACCOUNT = 5;
 export const MAX_FAILURES_PER_ADDRESS = 20;
+export const ACCOUNT_THROTTLE_MS = 30_000;
 
-export async function isRateLimited(db: DbOrTx, email: string, ip: string): Promise<boolean> {
+// Advisory-lock classes (first key of pg_advisory_xact_lock(int, int)); always taken in this order.
+const LOCK_ACCOUNT = 71;
+const LOCK_ADDRESS = 72;
+
+/**
+ * Checks the limits and reserves one attempt (recorded as a failure until it succeeds) under
+ * advisory locks on the account and the address, so parallel tries cannot all slip under a
+ * limit. Returns the attempt's id, or "rate-limited".
+ */
+export async function reserveSignInAttempt(db: DbOrTx, email: string, ip: string): Promise<number | "rate-limited"> {
   const addr = normalizeEmail(email);
-  // Per account, failures count since the last success: a person who mistypes now and then is
-  // never locked out by failures they already got past.
-  const [lastOk] = await db
-    .select({ at: signInAttempts.createdAt })
-    .from(signInAttempts)
-    .where(and(eq(signInAttempts.email, addr), eq(signInAttempts.success, true)))
-    .orderBy(desc(signInAttempts.createdAt))
-    .limit(1);
-  const windowStart = new Date(Date.now() - WINDOW_MS);
-  const since = lastOk && lastOk.at > windowStart ? lastOk.at : windowStart;
-  const [byEmail] = await db
-    .select({ n: count() })
-    .from(signInAttempts)
-    .where(and(eq(signInAttempts.email, addr), eq(signInAttempts.success, false), gt(signInAttempts.createdAt, since)));
-  const [byIp] = await db
-    .select({ n: count() })
-    .from(signInAttempts)
-    .where(and(eq(signInAttempts.ip, ip), eq(signInAttempts.success, false), gt(signInAttempts.createdAt, windowStart)));
-  return byEmail.n >= MAX_FAILURES_PER_ACCOUNT || byIp.n >= MAX_FAILURES_PER_ADDRESS;
-}
-
-export async function recordSignInAttempt(db: DbOrTx, email: string, ip: string, success: boolean) {
-  await db.insert(signInAttempts).values({ email: normalizeEmail(email), ip, success });
+  // Few round trips while the locks are held; tries on one account or address queue in this
+  // process first (keyed-queue.ts), so a burst does not take every pooled connection.
+  return inKeyOrder([`account:${addr}`, `address:${ip}`], () => db.transaction(async (tx) => {
+    await tx.execute(sql`select pg_advisory_xact_lock(${LOCK_ACCOUNT}, hashtext(${addr})), pg_advisory_xact_lock(${LOCK_ADDRESS}, hashtext(${ip}))`);
+    const windowStart = new Date(Date.now() - WINDOW_MS);
+    // Failures count since the account's last success within the window (or the window's start).
+    const since = sql`greatest(${windowStart}::timestamptz, coalesce((select max(created_at) from sign_in_attempts where email = ${addr} and success), ${windowStart}::timestamptz))`;
+    const res = await tx.execute(sql`
+      select
+        count(*) filter (where email = ${addr} and created_at > ${since})::int as account,
+        max(created_at) filter (where email = ${addr} and created_at > ${since}) as last,
+        count(*) filter (where email = ${addr} and ip = ${ip} and created_at > ${since})::int as pair,
+        count(*) filter (where ip = ${ip})::int as address
+      from sign_in_attempts
+      where not success and created_at > ${windowStart}::timestamptz and (email = ${addr} or ip = ${ip})`);
+    const c = res.rows[0] as { account: number; last: string | Date | null; pair: number; address: number };
+    const last = c.last ? new Date(c.last).getTime() : 0;
+    const throttled = c.account >= MAX_FAILURES_PER_ACCOUNT && Date.now() - last < ACCOUNT_THROTTLE_MS;
+    if (c.address >= MAX_FAILURES_PER_ADDRESS || c.pair >= MAX_FAILURES_PER_ACCOUNT || throttled) return "rate-limited" as const;
+    const [row] = await tx.insert(signInAttempts).values({ email: addr, ip, success: false }).returning({ id: signInAttempts.id });
+    return row.id;
+  }));
 }
 
 const DUMMY_HASH = bcrypt.hashSync("not-a-password-" + crypto.randomBytes(8).toString("hex"), 10);
 
 /** Checks a password sign-in. Returns the user, or null for any failure (without saying which). */
 export async function verifyPassword(db: DbOrTx, email: string, password: string, ip: string): Promise<User | null | "rate-limited"> {
-  if (await isRateLimited(db, email, ip)) return "rate-limited";
+  const attempt = await reserveSignInAttempt(db, email, ip);
+  if (attempt === "rate-limited") return attempt;
   const u = await getUserByEmail(db, email);
   // Always pay for one bcrypt comparison, so the answer time does not tell which addresses have accounts.
   const hash = u && !u.disabled && u.passwordHash ? u.passwordHash : DUMMY_HASH;
   const matches = await bcrypt.compare(password, hash);
   const ok = matches && hash !== DUMMY_HASH;
-  await recordSignInAttempt(db, email, ip, ok);
+  if (ok) await db.update(signInAttempts).set({ success: true, createdAt: new Date() }).where(eq(signInAttempts.id, attempt));
   return ok ? u! : null;
 }
 
 // One-time tokens (sign-in links and password resets). The e-mailed token is random; only its hash is stored.
 const sha256 = (s: string) => crypto.createHash("sha256").update(s).digest("hex");
 
+async function spendOutstandingTokens(db: DbOrTx, userId: string, kind: "magic-link" | "password-reset") {
+  await db
+    .update(authTokens)
+    .set({ usedAt: new Date() })
+    .where(and(eq(authTokens.userId, userId), eq(authTokens.kind, kind), isNull(authTokens.usedAt)));
+}
+
+/** A new token of a kind replaces the account's outstanding ones: only the latest e-mailed link works. */
 export async function issueToken(db: DbOrTx, userId: string, kind: "magic-link" | "password-reset", ttlMinutes: number) {
+  await spendOutstandingTokens(db, userId, kind);
   const token = crypto.randomBytes(32).toString("base64url");
   await db.insert(authTokens).values({
     userId,
@@ -132,12 +167,17 @@ export async function consumeToken(db: DbOrTx, token: string, kind: "magic-link"
     )
     .returning();
   if (!row) return null;
+  // Using one token of a kind spends every other outstanding one: an older reset link left in a
+  // mailbox must not work after the password was chosen with a newer one.
+  await spendOutstandingTokens(db, row.userId, kind);
   const u = await getUserById(db, row.userId);
   return u && !u.disabled ? u : null;
 }
 
+/** A new password also ends every session: whoever knew the old one is signed out. */
 export async function setPassword(db: DbOrTx, userId: string, password: string) {
-  await db.update(users).set({ passwordHash: await hashPassword(password) }).where(eq(users.id, userId));
+  const passwordHash = await hashPassword(password);
+  await db.update(users).set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId));
 }
 
 export async function setUnitSystem(db: DbOrTx, actor: Actor, unitSystem: "imperial" | "metric") {
@@ -188,7 +228,9 @@ export async function updateUserAccess(db: DbOrTx, actor: Actor, userId: string,
   if (userId === actor.id && (patch.role !== undefined && patch.role !== "admin" || patch.disabled)) {
     throw new ConflictError("You cannot remove your own admin access.", { field: "role" });
   }
-  const [u] = await db.update(users).set(patch).where(eq(users.id, userId)).returning();
+  // Disabling ends the account's sessions, so re-enabling it does not bring old cookies back.
+  const set = patch.disabled ? { ...patch, sessionVersion: sql`${users.sessionVersion} + 1` } : patch;
+  const [u] = await db.update(users).set(set).where(eq(users.id, userId)).returning();
   if (!u) throw new NotFoundError("No such user.");
   return u;
 }

@@ -3,7 +3,7 @@ import type { Db } from "../connect";
 import { toActor } from "../repo/users";
 import { createCombination, saveCombination } from "../repo/combinations";
 import { combinations, users } from "../schema";
-import { bigBlockTwinScrew, fourCylinderRoots, smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "./demo-specs";
+import { bigBlockTwinScrew, fourCylinderRoots, smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 import type { DemoUsers } from "./index";
 
 /** Ids of the demo combinations, by role in the scenario. */

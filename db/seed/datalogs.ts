@@ -8,7 +8,7 @@ import type { Db } from "../connect";
 import { createDatalog } from "../repo/datalogs";
 import { combinations, datalogs } from "../schema";
 import type { DemoCombinations } from "./combinations";
-import { smallBlockSmallerPulley } from "./demo-specs";
+import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 import type { DemoUsers } from "./index";
 
 /** Deterministic PRNG (mulberry32): the same seed gives the same log on every machine. */

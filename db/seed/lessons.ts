@@ -1,6 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import type { Db } from "../connect";
 import { addStep, createLesson, updateLesson } from "../repo/lessons";
+import type { StepInput } from "@/lib/lessons/rules";
 import { lessons } from "../schema";
 import type { DemoCombinations } from "./combinations";
 import type { DemoUsers } from "./index";
@@ -47,33 +48,13 @@ export async function seedLessons(db: Db, people: DemoUsers, combos: DemoCombina
   if (!taken) await db.update(lessons).set({ classCode: DEMO_CLASS_CODE }).where(eq(lessons.id, lesson.id));
 
   const sb = combos.smallBlock;
-  await addStep(db, instructor, lesson.id, {
-    title: "Roots and twin-screw: how boost builds",
-    items: [
-      { combinationId: sb, revision: 1, label: "Small-block, Roots" },
-      { combinationId: combos.bigBlock, revision: 1, label: "Big V8, twin-screw" },
-    ],
-    series: ["boost", "netPower"],
-    note: STEP_1_NOTE,
-  });
-  await addStep(db, instructor, lesson.id, {
-    title: "Better heads and cam: boost falls, power rises",
-    items: [
-      { combinationId: sb, revision: 1, label: "Baseline" },
-      { combinationId: sb, revision: 2, label: "Heads and cam" },
-    ],
-    series: ["boost", "netPower"],
-    note: STEP_2_NOTE,
-  });
-  await addStep(db, instructor, lesson.id, {
-    title: "A smaller blower pulley: boost rises everywhere",
-    items: [
-      { combinationId: sb, revision: 2, label: "Heads and cam" },
-      { combinationId: sb, revision: 3, label: "Smaller pulley" },
-    ],
-    series: ["boost", "netPower", "blowerSpeed"],
-    note: STEP_3_NOTE,
-  });
+  const item = (combinationId: string, revision: number, label: string) => ({ combinationId, revision, label });
+  const steps: StepInput[] = [
+    { title: "Roots and twin-screw: how boost builds", items: [item(sb, 1, "Small-block, Roots"), item(combos.bigBlock, 1, "Big V8, twin-screw")], series: ["boost", "netPower"], note: STEP_1_NOTE },
+    { title: "Better heads and cam: boost falls, power rises", items: [item(sb, 1, "Baseline"), item(sb, 2, "Heads and cam")], series: ["boost", "netPower"], note: STEP_2_NOTE },
+    { title: "A smaller blower pulley: boost rises everywhere", items: [item(sb, 2, "Heads and cam"), item(sb, 3, "Smaller pulley")], series: ["boost", "netPower", "blowerSpeed"], note: STEP_3_NOTE },
+  ];
+  for (const step of steps) await addStep(db, instructor, lesson.id, step);
   await updateLesson(db, instructor, lesson.id, { published: true });
   return lesson.id;
 }

@@ -44,7 +44,7 @@ export async function seedOrders(db: Db, people: DemoUsers, combos: DemoCombinat
   const { currency } = await getShopTerms(db);
   const version = await recordSentVersion(db, people.sales, rec, currency);
   await markRecommendationSent(db, people.sales, rec.id, version.sentAt);
-  const { orderId } = await startCheckout(db, demoGateway, { versionId: version.id }, { successUrl: "about:blank", cancelUrl: "about:blank" });
+  const { orderId } = await startCheckout(db, demoGateway, { recommendationId: rec.id, version: version.version }, { successUrl: "about:blank", cancelUrl: "about:blank" });
   const [order] = await db.select().from(orders).where(eq(orders.id, orderId));
   await recordPaidCheckout(db, { eventId: "evt_demo_order_1", sessionId: SESSION, paymentIntentId: "pi_demo_order_1", amountMinor: toMinorUnits(order.deposit, order.currency), currency: order.currency });
 }

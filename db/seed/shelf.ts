@@ -3,13 +3,13 @@
 // 8-rib; PW-CP-: crank pulley). Prices and stock are invented; some sizes are out of stock.
 // Idempotent: only part numbers not yet on the shelf are added, so edits by the admin survive.
 import type { Db } from "../connect";
-import { Money } from "../repo/shelf";
+import { Money } from "@/lib/shelf/rules";
 import { blowers, pulleys } from "../schema";
 
 const inch = 0.0254;
 const litre = 0.001;
 
-/** Blowers matching the demo combinations (db/seed/demo-specs.ts), plus one more for the list. */
+/** Blowers matching the demo combinations (lib/combinations/demo-specs.ts), plus one more for the list. */
 export const DEMO_BLOWERS = [
   { partNumber: "PW-BL-R190", name: "Roots 1.9 L/rev", kind: "roots", displacementPerRev: 1.9 * litre, builtInVolumeRatio: 1, maxRpm: 14_000, volumetricEfficiencyRef: 0.82, referenceRpm: 10_000, internalEfficiency: 0.85, mechanicalEfficiency: 0.95, price: "2890.00", stock: 2, notes: "Demo blower: generic Roots, for mid-size V8 street builds." },
   { partNumber: "PW-BL-T290", name: "Twin-screw 2.9 L/rev", kind: "twin-screw", displacementPerRev: 2.9 * litre, builtInVolumeRatio: 1.6, maxRpm: 16_000, volumetricEfficiencyRef: 0.92, referenceRpm: 10_000, internalEfficiency: 0.88, mechanicalEfficiency: 0.95, price: "4650.00", stock: 1, notes: "Demo blower: generic twin-screw; pair it with an intercooler." },

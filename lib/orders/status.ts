@@ -1,5 +1,6 @@
 // Where an order stands, and which moves a person may make from there.
 import { z } from "zod";
+import { plainText } from "@/lib/validation/text";
 
 export const ORDER_STATUSES = ["awaiting-payment", "paid", "parts-reserved", "back-ordered", "fitted", "cancelled", "refunded"] as const;
 export type OrderStatus = (typeof ORDER_STATUSES)[number];
@@ -31,19 +32,18 @@ export function allocate(requested: number, onShelf: number): { reserved: number
   return { reserved, backOrdered: requested - reserved };
 }
 
-const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).trim().max(max, `${label} must be at most ${max} characters.`);
 
 export const orderListQuerySchema = z.object({
   status: z.enum([...ORDER_STATUSES, ""], { error: `status must be one of ${ORDER_STATUSES.join(", ")}.` }).optional(),
-  search: text("Search", 100).optional(),
+  search: plainText("Search", 100).optional(),
   page: z.coerce.number().int().min(1, "page must be 1 or more").default(1),
   pageSize: z.coerce.number().int().min(1).max(100, "pageSize must be at most 100").default(20),
 });
 
-export const cancelOrderSchema = z.object({ reason: text("Reason", 500).default("") });
+export const cancelOrderSchema = z.object({ reason: plainText("Reason", 500).default("") });
 export const markFittedSchema = z.object({
   datalogId: z.union([z.uuid({ error: "datalogId must be the id of a datalog." }), z.literal(""), z.null()]).optional().transform((v) => v || null),
 });
-export const declineSheetSchema = z.object({ reason: text("Reason", 1000).default("") });
+export const declineSheetSchema = z.object({ reason: plainText("Reason", 1000, { multiline: true }).default("") });
 
 export type OrderListQuery = z.input<typeof orderListQuerySchema>;

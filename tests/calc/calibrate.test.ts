@@ -48,8 +48,9 @@ describe("calibrateVe", () => {
   });
 
   describe("uses the measured temperature instead of the model's", () => {
-    it("VE scales with the measured manifold temperature, VE = ṁ·R·Tm/(Pm·Vd·N/120)", () => {
-      // model.md §4: at a measured PR the blower's delivery is fixed, so VE ∝ Tm.
+    it("VE scales with the measured manifold temperature, VE = ṁ·R·Td/(Pm·Vd·N/120)", () => {
+      // calc/README.md (calibrateVe): at a measured PR the blower's delivery is fixed, so VE ∝ Td = T0·(Tm/T0)^n,
+      // with the default n = 0.5 of the charge-temperature refinement (calc/README.md).
       fc.assert(
         fc.property(combinationArb, fc.double({ min: -20, max: 40, noNaN: true }), (c, dT) => {
           const points = synthetic(c);
@@ -59,7 +60,7 @@ describe("calibrateVe", () => {
             points.map((p) => ({ rpm: p.rpm, boostGauge: p.boostGauge, manifoldTemperature: p.manifoldTemperature + dT })),
           );
           result.veCurve.forEach((p, i) => {
-            const expected = (c.engine.veCurve[i].ve * (points[i].manifoldTemperature + dT)) / points[i].manifoldTemperature;
+            const expected = c.engine.veCurve[i].ve * Math.sqrt((points[i].manifoldTemperature + dT) / points[i].manifoldTemperature);
             expect(relDiff(p.ve, expected)).toBeLessThan(1e-9);
           });
           result.residuals.forEach((r) => expect(r.temperatureResidual!).toBeCloseTo(-dT, 6));

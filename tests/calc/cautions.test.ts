@@ -73,7 +73,7 @@ describe("cautions", () => {
 
     it("pressure-ratio-out-of-range: above the model's range, and below 1", () => {
       const c = benign();
-      const high: Combination = { ...c, drive: { ...c.drive, blowerPulleyDiameter: 0.04 } };
+      const high: Combination = { ...c, drive: { ...c.drive, blowerPulleyDiameter: 0.035 } };
       const hi = cautions(high, boostCurve(high, rpms)).filter((x) => x.code === "pressure-ratio-out-of-range");
       expect(hi.some((x) => x.severity === "warning" && x.values.pressureRatio > 2.5)).toBe(true);
       const slow: Combination = { ...c, drive: { ...c.drive, blowerPulleyDiameter: 0.3 } };

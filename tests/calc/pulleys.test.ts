@@ -109,9 +109,15 @@ describe("pulleySweep", () => {
   });
 
   it("reports a size with no balance as a problem instead of throwing", () => {
-    const rows = pulleySweep(c, 5000, [0.03, 0.08]);
+    // With the plain density (n = 1) a far too fast blower finds no balance (calc/README.md).
+    const plain = { ...c, engine: { ...c.engine, chargeTemperatureExponent: 1 } };
+    const rows = pulleySweep(plain, 5000, [0.03, 0.08]);
     expect(rows[0].point).toBeNull();
     expect(rows[0].problem).toMatch(/balance/);
+    expect(rows[0].withinRange).toBe(false);
+    expect(rows[0].rangeReasons).toEqual(["no-balance"]);
     expect(rows[1].point).not.toBeNull();
+    expect(rows[1].withinRange).toBe(true);
+    expect(rows[1].rangeReasons).toEqual([]);
   });
 });

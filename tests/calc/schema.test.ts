@@ -38,7 +38,7 @@ describe("schemas", () => {
         fuel: { afr: 12, bsfc: 8.5e-8 },
       };
       const parsed = combinationSchema.parse(minimal);
-      // Defaults named in model.md §2: internal 0.85, mechanical 0.95, belt slip 0.02.
+      // Defaults named in calc/README.md: internal 0.85, mechanical 0.95, belt slip 0.02.
       expect(parsed.blower.internalEfficiency).toBe(0.85);
       expect(parsed.blower.mechanicalEfficiency).toBe(0.95);
       expect(parsed.drive.beltSlip).toBe(0.02);

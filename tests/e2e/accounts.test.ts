@@ -148,11 +148,18 @@ describe("accounts and history in the browser", () => {
     await anon.getByRole("button", { name: "E-mail me a link" }).click();
     await anon.getByText("If an account exists for that address").waitFor(T);
 
+    // The mail is queued and sent in the background: reload the mailbox until it has arrived.
     const adminPage = admin.pages()[0];
-    await adminPage.goto(`${BASE_URL}/admin/mail`);
-    await adminPage.getByRole("heading", { name: "Mailbox" }).waitFor(T);
     const message = adminPage.getByRole("listitem").filter({ hasText: `to ${email}` }).first();
-    await message.getByText("Your Pulleywright sign-in link").waitFor(T);
+    await expect
+      .poll(async () => {
+        await adminPage.goto(`${BASE_URL}/admin/mail`);
+        await adminPage.getByRole("heading", { name: "Mailbox" }).waitFor(T);
+        return message.getByText("Your Pulleywright sign-in link").count();
+      }, { timeout: 20_000, interval: 500 })
+      .toBeGreaterThan(0);
+    // The app's own outbox lists it as sent.
+    await adminPage.getByRole("table", { name: "Outbox" }).getByRole("row").filter({ hasText: email }).filter({ hasText: "sent" }).first().waitFor(T);
     await page.goto(`${BASE_URL}/admin/mail`);
     await page.waitForURL((u) => u.pathname === "/combinations", T);
     await page.getByText("That page is not open to your role").waitFor(T);

@@ -10,7 +10,7 @@ import { createCombination, getCombination } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { users } from "@/db/schema";
 import { DEMO_DATALOG_MAPPING, DEMO_DATALOG_NAME } from "@/db/seed/datalogs";
-import { smallBlockSmallerPulley } from "@/db/seed/demo-specs";
+import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { Client, signedIn } from "../support/http";
 

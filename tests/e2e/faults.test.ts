@@ -2,7 +2,7 @@
 // the app recovers by itself when the database returns, and no acknowledged save is lost.
 import { afterAll, describe, expect, it } from "vitest";
 import { exampleCombination } from "@/calc";
-import { controlCluster } from "@/db/cluster";
+import { controlCluster } from "@/scripts/cluster";
 import { signedIn } from "../support/http";
 
 const dir = process.env.PW_PG_DIR!;

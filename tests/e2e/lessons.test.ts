@@ -128,7 +128,7 @@ describe("lessons in Chromium", () => {
     expect(res.status()).toBe(200);
     const copy = (await res.json()) as { name: string; spec: { drive: { blowerPulleyDiameter: number } } };
     expect(copy.name).toBe(`Heads and cam (from lesson ${title})`);
-    expect(copy.spec.drive.blowerPulleyDiameter).toBeCloseTo(3.4 * 0.0254, 9); // demo revision 2 keeps the 3.4 in pulley (db/seed/demo-specs.ts)
+    expect(copy.spec.drive.blowerPulleyDiameter).toBeCloseTo(3.4 * 0.0254, 9); // demo revision 2 keeps the 3.4 in pulley (lib/combinations/demo-specs.ts)
     expect(errors).toEqual([]);
     await context.close();
   });

@@ -52,13 +52,13 @@ describe("shop: recommendation sheet and parts shelf", () => {
     // It has three revisions; the newest is preselected.
     await expect(page.getByLabel("Revision to use").inputValue()).resolves.toBe("3");
 
-    // The ladder lists the shelf's blower pulleys; choose 3.00 in from it.
-    await page.getByRole("button", { name: "Choose the 3.00 in pulley" }).click();
+    // The ladder (the planner's own) lists the shelf's blower pulleys; use 3.00 in from it.
+    await page.getByRole("button", { name: "Use the 3.00 in pulley" }).click();
     await expect(page.getByLabel("Recommended blower pulley").inputValue()).resolves.toBe(String(Number((3 * 0.0254).toFixed(6))));
     // The finder answers for a target boost.
     await page.getByLabel("Target boost").fill("8");
     await page.getByRole("button", { name: "Find pulley" }).click();
-    await expect(page.getByTestId("finder-result").textContent()).resolves.toMatch(/Exact size: [\d.]+ in gives 8\.0 psi/);
+    await expect(page.getByTestId("finder-result").textContent()).resolves.toMatch(/For 8\.0 psi at [\d,]+ rpm the blower pulley is [\d.]+ in/);
 
     // A new customer's fields start empty: nothing of the combination's own customer carries over.
     await expect(page.getByLabel("Customer name").inputValue()).resolves.toBe("");

@@ -1,10 +1,12 @@
-// Sign-in defences against a real database: wrong passwords lock an account for the window,
-// an address that keeps failing is slowed down across accounts, and e-mailed tokens work once
-// and expire. Limits are the app's own (db/repo/users.ts); common practice, no published source.
+// Sign-in defences against a real database: wrong passwords from one address stop that address
+// for the account, failures from many addresses slow the account without locking its owner out,
+// an address that keeps failing is stopped across accounts, the limits hold under parallel tries,
+// and e-mailed tokens work once, expire, and a newer one replaces the older. Limits are the app's own (db/repo/users.ts); common practice, no published source.
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ConflictError } from "@/db/errors";
+import { ConflictError } from "@/lib/errors";
 import {
+  ACCOUNT_THROTTLE_MS,
   consumeToken,
   createMember,
   issueToken,
@@ -38,18 +40,43 @@ describe("password sign-in", () => {
     expect(await verifyPassword(t.db, "nobody@example.com", PASSWORD, "10.0.0.1")).toBeNull();
   });
 
-  it(`locks the account after ${MAX_FAILURES_PER_ACCOUNT} wrong passwords, even for the right one, until the window passes`, async () => {
+  it(`after ${MAX_FAILURES_PER_ACCOUNT} wrong passwords from one address that address waits out the window for that account`, async () => {
     expect(MAX_FAILURES_PER_ACCOUNT).toBe(5);
     const u = await member();
-    for (let i = 0; i < 5; i++) expect(await verifyPassword(t.db, u.email, `guess ${i}`, `10.1.0.${i}`)).toBeNull();
-    // From any address: the lock is on the account.
-    expect(await verifyPassword(t.db, u.email, PASSWORD, "10.9.9.9")).toBe("rate-limited");
+    for (let i = 0; i < 5; i++) expect(await verifyPassword(t.db, u.email, `guess ${i}`, "10.1.0.1")).toBeNull();
+    await t.db.update(signInAttempts).set({ createdAt: new Date(Date.now() - ACCOUNT_THROTTLE_MS - 1000) }).where(eq(signInAttempts.email, u.email));
+    expect(await verifyPassword(t.db, u.email, PASSWORD, "10.1.0.1")).toBe("rate-limited");
     // Another account is not affected.
     const other = await member();
     expect(await verifyPassword(t.db, other.email, PASSWORD, "10.9.9.9")).toMatchObject({ id: other.id });
     // Move the failures 16 minutes into the past: the 15-minute window is over.
     await t.db.update(signInAttempts).set({ createdAt: new Date(Date.now() - 16 * 60_000) }).where(eq(signInAttempts.email, u.email));
-    expect(await verifyPassword(t.db, u.email, PASSWORD, "10.9.9.9")).toMatchObject({ id: u.id });
+    expect(await verifyPassword(t.db, u.email, PASSWORD, "10.1.0.1")).toMatchObject({ id: u.id });
+  });
+
+  it("failures spread over many addresses slow the account to one try per 30 s but never lock its owner out", async () => {
+    const u = await member();
+    for (let i = 0; i < 5; i++) expect(await verifyPassword(t.db, u.email, `guess ${i}`, `10.5.0.${i}`)).toBeNull();
+    // Right after them, even the right password waits for the throttle (and spends no bcrypt).
+    expect(await verifyPassword(t.db, u.email, PASSWORD, "10.9.9.8")).toBe("rate-limited");
+    // 31 s later the owner, from their own address, gets in with the right password.
+    await t.db.update(signInAttempts).set({ createdAt: new Date(Date.now() - ACCOUNT_THROTTLE_MS - 1000) }).where(eq(signInAttempts.email, u.email));
+    expect(await verifyPassword(t.db, u.email, PASSWORD, "10.9.9.8")).toMatchObject({ id: u.id });
+  });
+
+  it("30 parallel wrong passwords for one account: at most 5 reach the password check (reserved under a lock)", async () => {
+    const u = await member();
+    const results = await Promise.all(Array.from({ length: 30 }, (_, i) => verifyPassword(t.db, u.email, `parallel ${i}`, "10.6.0.1")));
+    const checked = await t.db.select().from(signInAttempts).where(eq(signInAttempts.email, u.email));
+    expect(checked.length).toBeLessThanOrEqual(MAX_FAILURES_PER_ACCOUNT);
+    expect(results.filter((r) => r === "rate-limited").length).toBeGreaterThanOrEqual(30 - MAX_FAILURES_PER_ACCOUNT);
+  });
+
+  it("30 parallel tries from one address over many accounts: at most 20 reach the password check", async () => {
+    const ip = "10.7.0.1";
+    await Promise.all(Array.from({ length: 30 }, (_, i) => verifyPassword(t.db, `parallel-spray${i}@example.com`, "guess", ip)));
+    const checked = await t.db.select().from(signInAttempts).where(eq(signInAttempts.ip, ip));
+    expect(checked.length).toBeLessThanOrEqual(MAX_FAILURES_PER_ADDRESS);
   });
 
   it("a successful sign-in starts the count again", async () => {
@@ -104,6 +131,21 @@ describe("one-time tokens", () => {
     const token = await issueToken(t.db, u.id, "password-reset", 30);
     const both = await Promise.all([consumeToken(t.db, token, "password-reset"), consumeToken(t.db, token, "password-reset")]);
     expect(both.filter(Boolean)).toHaveLength(1);
+  });
+
+  it("a newer reset link replaces the older one, and using one spends every other", async () => {
+    const u = await member();
+    const older = await issueToken(t.db, u.id, "password-reset", 30);
+    const newer = await issueToken(t.db, u.id, "password-reset", 30);
+    expect(await consumeToken(t.db, older, "password-reset")).toBeNull();
+    // Two outstanding links (as left by an earlier version of the app): using the newer spends the older.
+    await t.db.update(authTokens).set({ usedAt: null }).where(eq(authTokens.userId, u.id));
+    expect(await consumeToken(t.db, newer, "password-reset")).toMatchObject({ id: u.id });
+    expect(await consumeToken(t.db, older, "password-reset")).toBeNull();
+    // Sign-in links are their own kind: a reset does not spend them.
+    const link = await issueToken(t.db, u.id, "magic-link", 15);
+    await issueToken(t.db, u.id, "password-reset", 30);
+    expect(await consumeToken(t.db, link, "magic-link")).toMatchObject({ id: u.id });
   });
 
   it("expire", async () => {

@@ -6,7 +6,7 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { exampleCombination } from "@/calc";
-import { ForbiddenError, NotFoundError } from "@/db/errors";
+import { ForbiddenError, NotFoundError } from "@/lib/errors";
 import type { Actor } from "@/db/policy";
 import * as repo from "@/db/repo/combinations";
 import { combinations } from "@/db/schema";

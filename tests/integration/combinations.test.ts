@@ -5,7 +5,7 @@ import fc from "fast-check";
 import { ZodError } from "zod";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { exampleCombination, exampleTwinScrewCombination, type Combination } from "@/calc";
-import { ConflictError, FieldError } from "@/db/errors";
+import { ConflictError, FieldError } from "@/lib/errors";
 import type { Actor } from "@/db/policy";
 import {
   createCombination,
@@ -298,7 +298,10 @@ describe("listing", () => {
         if (q.scope === "demo") conds.push(is(combinations.isDemo, true));
         if (q.search) {
           const like = `%${q.search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
-          conds.push(or(ilike(combinations.name, like), ilike(combinations.customerName, like), ilike(combinations.customerContact, like))!);
+          // Customer fields are searched only where the actor may see them: staff, or their own rows.
+          const customer = or(ilike(combinations.customerName, like), ilike(combinations.customerContact, like))!;
+          const staff = actor.role === "sales" || actor.role === "tuner";
+          conds.push(or(ilike(combinations.name, like), staff ? customer : and(is(combinations.ownerId, actor.id), customer))!);
         }
         const col = combinations[q.sort];
         const rows = await s.db

@@ -4,13 +4,13 @@ import { count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
 import { veAt } from "@/calc";
-import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "@/db/errors";
+import { ConflictError, FieldError, ForbiddenError, NotFoundError } from "@/lib/errors";
 import type { Actor } from "@/db/policy";
 import { createCombination, getCombination, listRevisions } from "@/db/repo/combinations";
 import { calibrateFromDatalog, createDatalog, deleteDatalog, getDatalog, getDatalogPoints, listDatalogs } from "@/db/repo/datalogs";
 import { datalogPoints, datalogs } from "@/db/schema";
 import { DEMO_DATALOG_MAPPING, demoDatalogCsv, demoTrueVeCurve } from "@/db/seed/datalogs";
-import { smallBlockSmallerPulley } from "@/db/seed/demo-specs";
+import { smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";
 
 const mapping = { ...DEMO_DATALOG_MAPPING };

@@ -2,9 +2,9 @@
 // raises boost everywhere, better breathing (a higher VE scale) lowers it; nothing else moves.
 import { describe, expect, it } from "vitest";
 import { combinationSchema } from "@/calc";
-import { applyWhatIf, deltaSpeeds, pointAt, rpmGrid, stepCurves } from "@/components/lessons/curves";
-import type { StepItemSnapshot } from "@/db/repo/lessons";
-import { smallBlockBaseline, smallBlockHeadsCam } from "@/db/seed/demo-specs";
+import { applyWhatIf, deltaSpeeds, pointAt, rpmGrid, stepCurves } from "@/lib/lessons/curves";
+import type { StepItemSnapshot } from "@/lib/lessons/rules";
+import { smallBlockBaseline, smallBlockHeadsCam } from "@/lib/combinations/demo-specs";
 
 const item = (label: string, spec: typeof smallBlockBaseline): StepItemSnapshot => ({
   combinationId: "00000000-0000-4000-8000-000000000000",
@@ -17,7 +17,7 @@ const items = [item("Baseline", smallBlockBaseline), item("Heads and cam", small
 
 describe("classroom what-if", () => {
   it("a smaller blower pulley for all items raises boost at every engine speed", () => {
-    // source: model.md §5, trade facts: a smaller blower pulley raises boost at every engine speed (common practice, no published source).
+    // source: calc/README.md, trade facts: a smaller blower pulley raises boost at every engine speed (common practice, no published source).
     const asBuilt = stepCurves(items, { kind: "none" });
     const smaller = stepCurves(items, { kind: "pulley", diameter: smallBlockBaseline.drive.blowerPulleyDiameter * 0.9 });
     for (const [i, c] of smaller.entries()) {
@@ -27,7 +27,7 @@ describe("classroom what-if", () => {
   });
 
   it("scaling VE up lowers boost under the same pulley", () => {
-    // source: model.md §5, trade facts: a better-breathing engine lowers boost under the same blower and pulley (common practice, no published source).
+    // source: calc/README.md, trade facts: a better-breathing engine lowers boost under the same blower and pulley (common practice, no published source).
     const asBuilt = stepCurves(items, { kind: "none" });
     const breathes = stepCurves(items, { kind: "ve", scale: 1.1 });
     breathes[0].points.forEach((p, k) => expect(p.boostGauge).toBeLessThan(asBuilt[0].points[k].boostGauge));

@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
 import { boostCurve, combinationSchema } from "@/calc";
-import { FieldError, ForbiddenError, NotFoundError } from "@/db/errors";
+import { FieldError, ForbiddenError, NotFoundError } from "@/lib/errors";
 import { createCombination, getCombination, saveCombination } from "@/db/repo/combinations";
 import {
   CLASS_CODE_ALPHABET,
@@ -21,7 +21,7 @@ import {
   updateStep,
 } from "@/db/repo/lessons";
 import { seedCombinations, type DemoCombinations } from "@/db/seed/combinations";
-import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/db/seed/demo-specs";
+import { smallBlockBaseline, smallBlockHeadsCam, smallBlockSmallerPulley } from "@/lib/combinations/demo-specs";
 import type { DemoUsers } from "@/db/seed/index";
 import { DEMO_CLASS_CODE, DEMO_LESSON_TITLE, seedLessons } from "@/db/seed/lessons";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";
@@ -308,7 +308,7 @@ describe("lessons", () => {
       const { steps } = await getLesson(t.db, instructor, await seedLessons(t.db, people, combos));
       const at = (spec: Parameters<typeof boostCurve>[0], rpms: number[]) => boostCurve(spec, rpms);
       // Step 2: better heads and cam under the same pulley: boost falls, power rises at speed.
-      // source: model.md §5, trade facts (common practice, no published source).
+      // source: calc/README.md, trade facts (common practice, no published source).
       const mid = [3500, 4500, 5500];
       const [base, heads] = steps[1].items.map((i) => at(i.spec, mid));
       mid.forEach((_, k) => {
@@ -316,7 +316,7 @@ describe("lessons", () => {
         expect(heads[k].netPower).toBeGreaterThan(base[k].netPower);
       });
       // Step 3: a smaller blower pulley raises boost at every engine speed.
-      // source: model.md §5, trade facts (common practice, no published source).
+      // source: calc/README.md, trade facts (common practice, no published source).
       const rpms = [2000, 3000, 4000, 5000, 6000];
       const [before, after] = steps[2].items.map((i) => at(i.spec, rpms));
       rpms.forEach((_, k) => expect(after[k].boostGauge).toBeGreaterThan(before[k].boostGauge));

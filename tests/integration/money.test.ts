@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { exampleCombination } from "@/calc";
 import { createCombination } from "@/db/repo/combinations";
 import { createRecommendation, getRecommendation, priceLines } from "@/db/repo/recommendations";
-import { formatMoney, lineTotal, moneySchema, sumMoney } from "@/db/repo/shelf";
+import { formatMoney, lineTotal, moneySchema, sumMoney } from "@/lib/shelf/rules";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";
 
 /** Integer-cents reference: "19.99" → 1999n, and back. */

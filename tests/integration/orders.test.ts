@@ -7,7 +7,7 @@ import http from "node:http";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { exampleCombination } from "@/calc";
-import { freePort } from "@/db/cluster";
+import { freePort } from "@/scripts/cluster";
 import type { Actor } from "@/db/policy";
 import { createCombination } from "@/db/repo/combinations";
 import { createRecommendation, setRecommendationStatus, updateRecommendation } from "@/db/repo/recommendations";
@@ -39,7 +39,7 @@ const webhook = await import("@/app/api/payments/webhook/route");
 webhookHandler = (req) => webhook.POST(req, undefined as never);
 const send = await import("@/app/api/recommendations/[id]/send/route");
 const sheet = await import("@/app/api/recommendations/[id]/route");
-const revoke = await import("@/app/api/recommendations/[id]/revoke/route");
+const stopLinks = await import("@/app/api/recommendations/[id]/share-links/route");
 const checkout = await import("@/app/api/share/[token]/checkout/route");
 const decline = await import("@/app/api/share/[token]/decline/route");
 const list = await import("@/app/api/orders/route");
@@ -102,6 +102,12 @@ async function pay(url: string) {
   return r.headers.get("location");
 }
 
+/** Mail goes through the outbox in the background: wait until `n` messages have gone. */
+async function mailsSent(n: number) {
+  for (let i = 0; i < 100 && ctx.mails.length < n; i++) await new Promise((r) => setTimeout(r, 20));
+  return ctx.mails;
+}
+
 const orderFor = async (recommendationId: string) => (await t.db.select().from(orders).where(eq(orders.recommendationId, recommendationId)))[0];
 
 beforeAll(async () => {
@@ -151,7 +157,7 @@ describe("the customer's deposit through the payment fake", () => {
     expect(await stockOf(paid.part)).toBe(2);
     const [rec] = await t.db.select({ status: recommendations.status }).from(recommendations).where(eq(recommendations.id, paid.id));
     expect(rec.status).toBe("accepted");
-    expect(ctx.mails.map((m) => m.to).sort()).toEqual(["customer@example.com", "shop@example.com"]);
+    expect((await mailsSent(2)).map((m) => m.to).sort()).toEqual(["customer@example.com", "shop@example.com"]);
     expect(ctx.mails.find((m) => m.to === "customer@example.com")?.text).toContain("$45.13");
   });
 
@@ -165,6 +171,7 @@ describe("the customer's deposit through the payment fake", () => {
     expect(after.events).toEqual(before.events);
     expect(after.status).toBe("parts-reserved");
     expect(await stockOf(paid.part)).toBe(2);
+    await new Promise((r) => setTimeout(r, 300));
     expect(ctx.mails).toEqual([]);
   });
 
@@ -250,7 +257,7 @@ describe("the sheet as sent", () => {
     const { verifyShareToken } = await import("@/app/_lib/share-link");
     const v = verifyShareToken(s.token);
     if (!v.ok) throw new Error("the link should verify");
-    const sent = await getSentVersion(t.db, { versionId: v.recommendationId });
+    const sent = await getSentVersion(t.db, { recommendationId: v.recommendationId, version: v.version });
     expect(sent?.snapshot.customerName).toBe("Original Name");
     expect(sent?.snapshot.total).toBe("180.50");
     expect(sent?.snapshot.blowerPulleyDiameter).toBe(0.08);
@@ -259,7 +266,7 @@ describe("the sheet as sent", () => {
     as(sales);
     const r2 = await send.POST(req("POST", `/api/recommendations/${s.id}/send`), params({ id: s.id }));
     expect((await r2.json()).version).toBe(2);
-    expect((await getSentVersion(t.db, { versionId: v.recommendationId }))?.latest).toBe(false);
+    expect((await getSentVersion(t.db, { recommendationId: v.recommendationId, version: v.version }))?.latest).toBe(false);
     expect((await startCheckout(s.token)).status).toBe(409);
     as(sales);
     const shown = await (await sheet.GET(req("GET", `/api/recommendations/${s.id}`), params({ id: s.id }))).json();
@@ -271,9 +278,11 @@ describe("the sheet as sent", () => {
     const part = await shelfPulley(5);
     const s = await sentSheet(part, "Revoke Example");
     as(member);
-    expect((await revoke.POST(req("POST", `/api/recommendations/${s.id}/revoke`), params({ id: s.id }))).status).toBe(403);
+    expect((await stopLinks.DELETE(req("DELETE", `/api/recommendations/${s.id}/share-links`), params({ id: s.id }))).status).toBe(403);
     as(sales);
-    expect((await (await revoke.POST(req("POST", `/api/recommendations/${s.id}/revoke`), params({ id: s.id }))).json()).revoked).toBe(1);
+    expect((await stopLinks.DELETE(req("DELETE", `/api/recommendations/${s.id}/share-links`), params({ id: s.id }))).status).toBe(200);
+    const { getSentVersion } = await import("@/db/repo/sheet-versions");
+    await expect(getSentVersion(t.db, { recommendationId: s.id, version: 1 })).rejects.toThrow(/withdrawn/);
     expect((await startCheckout(s.token)).status).toBe(404);
 
     const d = await sentSheet(part, "Decline Example");

@@ -3,9 +3,9 @@
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { exampleCombination, type Combination } from "@/calc";
-import { buildSheetEmail } from "@/components/recommendation/email";
-import { computeSheet } from "@/components/recommendation/sheet-data";
-import { ConflictError, FieldError, ForbiddenError } from "@/db/errors";
+import { buildSheetEmail } from "@/app/_lib/recommendation-email";
+import { computeSheet } from "@/lib/recommendations/sheet-data";
+import { ConflictError, FieldError, ForbiddenError } from "@/lib/errors";
 import { createCombination, saveCombination } from "@/db/repo/combinations";
 import {
   createRecommendation,

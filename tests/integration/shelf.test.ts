@@ -3,20 +3,11 @@
 import { count, eq } from "drizzle-orm";
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { FieldError, ForbiddenError } from "@/db/errors";
-import {
-  createPulley,
-  exportShelfCsv,
-  importShelfCsv,
-  listBlowers,
-  listPulleys,
-  MAX_CSV_ROWS,
-  parseShelfCsv,
-  PULLEY_CSV_COLUMNS,
-  blowerFormSchema,
-  pulleyFormSchema,
-  updatePulley,
-} from "@/db/repo/shelf";
+import { FieldError, ForbiddenError } from "@/lib/errors";
+import { createPulley, listBlowers, listPulleys, updatePulley } from "@/db/repo/shelf";
+import { exportShelfCsv, importShelfCsv } from "@/db/repo/shelf-csv";
+import { parseShelfCsv } from "@/lib/shelf/csv";
+import { MAX_CSV_ROWS, PULLEY_CSV_COLUMNS, blowerFormSchema, pulleyFormSchema } from "@/lib/shelf/rules";
 import { blowers, pulleys } from "@/db/schema";
 import { seedShelf } from "@/db/seed/shelf";
 import { freshDatabase, makeUser, type TestDb } from "../support/db";

@@ -3,7 +3,7 @@
 // next request because the session's user is reloaded every time.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
-import { ConflictError, ForbiddenError, NotFoundError, UnauthorizedError } from "@/db/errors";
+import { ConflictError, ForbiddenError, NotFoundError, UnauthorizedError } from "@/lib/errors";
 import type { Actor } from "@/db/policy";
 import { listUsers, updateUserAccess } from "@/db/repo/users";
 import { mockSession } from "../support/session-mock";

@@ -5,7 +5,8 @@
 import { vi } from "vitest";
 
 export type SentMail = { to: string; subject: string; text: string; attachments?: { filename: string }[] };
-export type MockSession = { db: unknown; userId: string | null; mails: SentMail[] };
+/** `sv`: the session version the cookie was made with (none, as in cookies from before versions, when unset). */
+export type MockSession = { db: unknown; userId: string | null; sv?: number; mails: SentMail[] };
 
 export function mockSession(): MockSession {
   const session: MockSession = { db: undefined, userId: null, mails: [] };
@@ -38,7 +39,7 @@ export function mockSession(): MockSession {
     }),
     headers: async () => new Headers(),
   }));
-  vi.doMock("next-auth/jwt", () => ({ decode: async () => (session.userId ? { sub: session.userId } : null) }));
+  vi.doMock("next-auth/jwt", () => ({ decode: async () => (session.userId ? { sub: session.userId, ...(session.sv === undefined ? {} : { sv: session.sv }) } : null) }));
   vi.doMock("next/cache", () => ({ revalidatePath: () => {}, revalidateTag: () => {} }));
   return session;
 }

@@ -4,11 +4,12 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { z } from "zod";
-import { act, type ActionState, formFields } from "@/app/_lib/action";
+import { act, formFields } from "@/app/_lib/action";
+import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
-import { TEMPLATE_KEYS, templateSpec } from "@/components/combinations/templates";
+import { TEMPLATE_KEYS, templateSpec } from "@/lib/combinations/templates";
 import { getDb } from "@/db/client";
-import { FieldError } from "@/db/errors";
+import { FieldError } from "@/lib/errors";
 import {
   createCombination,
   deleteCombination,

@@ -2,6 +2,21 @@ import type { Metadata } from "next";
 import { requirePageUser } from "@/app/_lib/session";
 import { CombinationsList } from "@/components/combinations/combinations-list";
 import { Notice } from "@/components/ui/notice";
+import {
+  deleteCombinationAction,
+  duplicateCombinationAction,
+  importCombinationsAction,
+  renameCombinationAction,
+  undoDeleteAction,
+} from "./actions";
+
+const LIST_ACTIONS = {
+  rename: renameCombinationAction,
+  duplicate: duplicateCombinationAction,
+  remove: deleteCombinationAction,
+  undoDelete: undoDeleteAction,
+  importFile: importCombinationsAction,
+};
 
 export const metadata: Metadata = { title: "Combinations" };
 
@@ -11,7 +26,7 @@ export default async function CombinationsPage({ searchParams }: { searchParams:
   return (
     <div className="flex flex-col gap-4">
       {denied ? <Notice tone="warning">That page is not open to your role ({user.role}).</Notice> : null}
-      <CombinationsList role={user.role} unitSystem={user.unitSystem} />
+      <CombinationsList role={user.role} unitSystem={user.unitSystem} actions={LIST_ACTIONS} />
     </div>
   );
 }

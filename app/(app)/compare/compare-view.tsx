@@ -6,10 +6,10 @@ import { useMemo, useState } from "react";
 import type { Combination, UnitSystem } from "@/calc";
 import type { CurveMetric, CurveSeries } from "@/components/charts/curve-chart";
 import { LazyCurveChart } from "@/components/charts/curve-chart-lazy";
-import { rpmGrid, safeCurve } from "@/components/planner/compute";
-import { defaultSpeeds, deltaRows } from "@/components/planner/side-by-side";
+import { rpmGrid, safeCurve } from "@/lib/planner/compute";
+import { defaultSpeeds, deltaRows } from "@/lib/planner/side-by-side";
 import { Button } from "@/components/ui/button";
-import { deltaText, quantityText } from "@/components/units/format";
+import { deltaText, quantityText } from "@/lib/units/format";
 import { compareQuery, MAX_ITEMS, parseSpeeds, type CompareItem } from "./items";
 
 export type ResolvedItem = { key: string; combinationId: string; revision: number | "current"; label: string; spec: Combination };

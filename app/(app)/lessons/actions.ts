@@ -3,22 +3,12 @@
 // ownership and role (db/repo/lessons.ts), so these are as safe as the REST routes they mirror.
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
-import { act, type ActionState, formFields } from "@/app/_lib/action";
+import { act, formFields } from "@/app/_lib/action";
+import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import {
-  addStep,
-  copyStepItem,
-  createLesson,
-  deleteLesson,
-  deleteStep,
-  joinLesson,
-  moveStep,
-  regenerateClassCode,
-  updateLesson,
-  updateStep,
-  type StepInput,
-} from "@/db/repo/lessons";
+import { addStep, copyStepItem, createLesson, deleteLesson, deleteStep, joinLesson, moveStep, regenerateClassCode, updateLesson, updateStep } from "@/db/repo/lessons";
+import { type StepInput } from "@/lib/lessons/rules";
 
 const field = (form: FormData, name: string) => {
   const v = formFields(form)[name];

@@ -3,6 +3,7 @@ import { requirePageUser } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import { getShopTerms } from "@/db/repo/shop";
 import { ShopTermsForm } from "./shop-terms-form";
+import { SignOutEverywhere } from "./sign-out-everywhere";
 import { UnitsForm } from "./units-form";
 
 export const metadata: Metadata = { title: "Settings" };
@@ -22,6 +23,7 @@ export default async function SettingsPage() {
       </dl>
       <UnitsForm current={user.unitSystem} />
       {user.role === "admin" ? <ShopTerms /> : null}
+      <SignOutEverywhere />
     </div>
   );
 }

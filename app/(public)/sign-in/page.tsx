@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { safeCallback } from "@/app/_lib/safe-callback";
 import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };
@@ -11,8 +12,4 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
       <SignInForm initialError={sp.error} callbackUrl={safeCallback(sp.callbackUrl)} />
     </div>
   );
-}
-
-function safeCallback(url?: string) {
-  return url && url.startsWith("/") && !url.startsWith("//") ? url : "/combinations";
 }

@@ -3,7 +3,8 @@ import { NextResponse } from "next/server";
 import { parseJson, route } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { createLesson, lessonMetaSchema, listLessons } from "@/db/repo/lessons";
+import { createLesson, listLessons } from "@/db/repo/lessons";
+import { lessonMetaSchema } from "@/lib/lessons/rules";
 
 export const dynamic = "force-dynamic";
 

@@ -1,7 +1,8 @@
 import { route, parseJson, parseQuery } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { createRecommendation, listRecommendations, recommendationInputSchema, recommendationListQuerySchema } from "@/db/repo/recommendations";
+import { createRecommendation, listRecommendations } from "@/db/repo/recommendations";
+import { recommendationInputSchema, recommendationListQuerySchema } from "@/lib/recommendations/rules";
 
 const STAFF = ["sales", "tuner", "admin"] as const;
 

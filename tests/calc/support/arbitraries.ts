@@ -1,11 +1,11 @@
 // Generators of arbitrary (invented) inputs for property tests, and an independent restatement
-// of model.md's equations used as test oracles. None of these numbers are check values.
+// of the equations of calc/README.md used as test oracles. None of these numbers are check values.
 import fc from "fast-check";
 import type { Combination } from "@/calc";
 
-/** R for dry air as model.md §3 states it (J/(kg·K)); any thermodynamics text gives 287.05. */
+/** R for dry air as calc/README.md states it (J/(kg·K)); any thermodynamics text gives 287.05. */
 export const R_MODEL = 287.05;
-/** κ = (γ − 1)/γ with γ = 1.4 (model.md §3). */
+/** κ = (γ − 1)/γ with γ = 1.4 (calc/README.md). */
 export const KAPPA_MODEL = 0.4 / 1.4;
 
 /** Relative difference |a − b| / max(|a|, |b|, tiny). */
@@ -13,7 +13,7 @@ export function relDiff(a: number, b: number): number {
   return Math.abs(a - b) / Math.max(Math.abs(a), Math.abs(b), 1e-300);
 }
 
-/** VE at rpm, piecewise-linear, flat outside: model.md §2 restated independently. */
+/** VE at rpm, piecewise-linear, flat outside: calc/README.md restated independently. */
 export function veOf(curve: readonly { rpm: number; ve: number }[], rpm: number): number {
   const pts = [...curve].sort((a, b) => a.rpm - b.rpm);
   if (rpm <= pts[0].rpm) return pts[0].ve;
@@ -100,7 +100,7 @@ export const combinationArb: fc.Arbitrary<Combination> = fc
 /** An engine speed for property tests (rev/min). */
 export const rpmArb = fc.integer({ min: 1500, max: 7000 });
 
-/** The same combination in the ideal limit of model.md §3 (no slip, ηint = 1, ε = 1 back to T1, no losses). */
+/** The same combination in the ideal limit of calc/README.md (no slip, ηint = 1, ε = 1 back to T1, no losses). */
 export function idealLimit(c: Combination): Combination {
   return {
     ...c,

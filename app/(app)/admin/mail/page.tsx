@@ -3,6 +3,8 @@
 import type { Metadata } from "next";
 import { env } from "@/app/_lib/env";
 import { requirePageUser } from "@/app/_lib/session";
+import { toActor } from "@/db/repo/users";
+import { OutboxList } from "./outbox-list";
 import { Notice } from "@/components/ui/notice";
 
 export const metadata: Metadata = { title: "Mailbox" };
@@ -22,14 +24,16 @@ async function readInbox(base: string): Promise<{ messages: Captured[] } | { err
 }
 
 export default async function MailboxPage() {
-  await requirePageUser(["admin"]);
+  const user = await requirePageUser(["admin"]);
   const base = env().MAIL_FAKE_URL;
   return (
     <div className="flex max-w-4xl flex-col gap-4">
       <div>
         <h1 className="text-2xl font-semibold">Mailbox</h1>
-        <p className="text-sm text-muted">Messages the app sent, as captured by the local mail fake, newest first.</p>
+        <p className="text-sm text-muted">What the app queued, sent and gave up on, newest first. Failed sends are retried with a growing wait.</p>
       </div>
+      <OutboxList actor={toActor(user)} />
+      <h2 className="mt-4 text-lg font-semibold">Captured by the local mail fake</h2>
       {!base ? (
         <Notice tone="info" title="No local mail fake is configured">
           MAIL_FAKE_URL is not set, so mail goes to the real SMTP server ({env().SMTP_URL.replace(/\/\/[^@/]*@/, "//")}) and

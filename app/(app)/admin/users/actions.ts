@@ -3,7 +3,8 @@
 // cannot demote or disable themselves, so the shop never loses its last admin by accident.
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { act, type ActionState, formFields } from "@/app/_lib/action";
+import { act, formFields } from "@/app/_lib/action";
+import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import { updateUserAccess, userAccessSchema } from "@/db/repo/users";

@@ -2,6 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { UserAccessControls } from "@/components/admin/user-access-controls";
+import { EmptyRow } from "@/components/ui/data-table";
+import { setUserDisabledAction, setUserRoleAction } from "./actions";
 import { getDb } from "@/db/client";
 import { listUsers, toActor } from "@/db/repo/users";
 
@@ -54,16 +56,12 @@ export default async function AdminUsersPage({ searchParams }: { searchParams: P
                 <td className="px-3 py-2">{r.email}</td>
                 <td className="px-3 py-2 whitespace-nowrap tabular-nums">{r.createdAt.toISOString().slice(0, 10)}</td>
                 <td className="px-3 py-2">
-                  <UserAccessControls id={r.id} email={r.email} role={r.role} disabled={r.disabled} self={r.id === user.id} />
+                  <UserAccessControls id={r.id} email={r.email} role={r.role} disabled={r.disabled} self={r.id === user.id} actions={{ setRole: setUserRoleAction, setDisabled: setUserDisabledAction }} />
                 </td>
               </tr>
             ))}
             {rows.length === 0 ? (
-              <tr>
-                <td colSpan={4} className="px-3 py-6 text-center text-muted">
-                  No account matches “{search}”.
-                </td>
-              </tr>
+              <EmptyRow colSpan={4}>No account matches “{search}”.</EmptyRow>
             ) : null}
           </tbody>
         </table>

@@ -4,7 +4,8 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { z } from "zod";
-import { act, type ActionState } from "@/app/_lib/action";
+import { act } from "@/app/_lib/action";
+import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import { duplicateCombination, saveCombination } from "@/db/repo/combinations";

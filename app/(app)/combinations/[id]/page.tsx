@@ -1,15 +1,15 @@
-import Link from "next/link";
 import { notFound } from "next/navigation";
 import { combinationSchema, type Combination } from "@/calc";
 import { requirePageUser } from "@/app/_lib/session";
-import { readPlannerShelf } from "@/components/planner/shelf-read";
+import { readPlannerShelf } from "@/db/repo/planner-shelf";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { canWriteOwned } from "@/db/policy";
 import { getCombination } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { duplicateToEdit, savePlannerUnits, saveRevision } from "./actions";
 import { Planner } from "./planner";
+import { Breadcrumb } from "@/components/ui/breadcrumb";
 
 export async function generateMetadata({ params }: { params: Promise<{ id: string }> }) {
   void params;
@@ -34,12 +34,7 @@ export default async function PlannerPage({ params }: { params: Promise<{ id: st
   const canWrite = canWriteOwned(actor, row.ownerId);
   return (
     <div className="flex flex-col gap-4">
-      <nav aria-label="Breadcrumb" className="text-sm text-muted">
-        <Link href="/combinations" className="hover:underline">
-          Combinations
-        </Link>{" "}
-        / <span aria-current="page">{row.name}</span>
-      </nav>
+      <Breadcrumb href="/combinations" label="Combinations" here={row.name} className="text-sm text-muted" linkClassName="hover:underline" markCurrent />
       <Planner
         key={row.id}
         combinationId={row.id}

@@ -1,9 +1,10 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { NewCombinationForm } from "@/components/combinations/new-combination-form";
-import { TEMPLATES } from "@/components/combinations/templates";
-import { specRows } from "@/components/combinations/spec-fields";
+import { TEMPLATES } from "@/lib/combinations/templates";
+import { specRows } from "@/lib/combinations/spec-fields";
+import { createCombinationAction } from "../actions";
+import { BackLink } from "@/components/ui/back-link";
 
 export const metadata: Metadata = { title: "New combination" };
 
@@ -23,17 +24,13 @@ export default async function NewCombinationPage() {
   }));
   return (
     <div className="max-w-2xl">
-      <p className="mb-2 text-sm">
-        <Link href="/combinations" className="underline">
-          ← Combinations
-        </Link>
-      </p>
+      <BackLink href="/combinations" label="Combinations" className="mb-2 text-sm" linkClassName="underline" />
       <h1 className="mb-1 text-2xl font-semibold">New combination</h1>
       <p className="mb-6 text-sm text-muted">
         Pick a starting point and give it a name; the planner opens next, where you change the engine, blower and pulleys to
         match the real car. The starting points are invented demo values.
       </p>
-      <NewCombinationForm templates={templates} staff={staff} />
+      <NewCombinationForm templates={templates} staff={staff} createAction={createCombinationAction} />
     </div>
   );
 }

@@ -2,7 +2,7 @@ import "server-only";
 import { notFound } from "next/navigation";
 import { requirePageUser } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { getDatalogAnalysis } from "@/db/repo/datalogs";
 import { toActor } from "@/db/repo/users";
 

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { cleaningFromQuery, type CleaningQuery } from "@/components/datalogs/cleaning-query";
+import { cleaningFromQuery, type CleaningQuery } from "@/lib/datalogs/cleaning-query";
 import { DeleteLogButton } from "@/components/datalogs/delete-log-button";
 import { LogAnalysis } from "@/components/datalogs/log-analysis";
 import { LogHeader } from "@/components/datalogs/log-header";

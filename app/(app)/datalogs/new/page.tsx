@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import type { Combination } from "@/calc";
 import { requirePageUser } from "@/app/_lib/session";
 import { UploadForm, type UploadCombination } from "@/components/datalogs/upload-form";
@@ -7,6 +6,7 @@ import { getDb } from "@/db/client";
 import { canWriteOwned } from "@/db/policy";
 import { getCombination, listCombinations } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
+import { BackLink } from "@/components/ui/back-link";
 
 export const metadata: Metadata = { title: "Upload a log" };
 
@@ -28,11 +28,7 @@ export default async function NewDatalogPage({ searchParams }: { searchParams: P
   const initial = combos.some((c) => c.id === combination) ? combination! : null;
   return (
     <div className="flex max-w-4xl flex-col gap-4">
-      <p className="text-sm">
-        <Link href="/datalogs" className="text-muted hover:underline">
-          ← Datalogs
-        </Link>
-      </p>
+      <BackLink href="/datalogs" label="Datalogs" />
       <h1 className="text-2xl font-semibold">Upload a log</h1>
       <UploadForm combinations={combos} initialCombinationId={initial} unitSystem={user.unitSystem} />
     </div>

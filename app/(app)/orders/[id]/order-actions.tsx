@@ -2,7 +2,7 @@
 // What staff do with an order: mark it fitted (with the datalog that verified it), or cancel it,
 // which refunds a paid deposit through the payment service and puts the parts back on the shelf.
 import { useState } from "react";
-import { apiJson } from "@/components/shelf/api";
+import { apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { useAction } from "@/components/ui/use-action";

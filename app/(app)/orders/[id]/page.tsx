@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requirePageUser } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { canRefundOrders } from "@/db/policy";
 import { listDatalogs } from "@/db/repo/datalogs";
 import { getOrder } from "@/db/repo/orders";

@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { loadForStaff } from "@/app/_lib/recommendation-load";
 import { requirePageUser } from "@/app/_lib/session";
 import { sentVersionLink } from "@/app/_lib/share-url";
-import { loadForStaff } from "@/components/recommendation/load";
 import { SheetActions } from "@/components/recommendation/sheet-actions";
 import { SheetView } from "@/components/recommendation/sheet-view";
+import { Breadcrumb } from "@/components/ui/breadcrumb";
 import { getDb } from "@/db/client";
 import { getLatestSentVersion } from "@/db/repo/sheet-versions";
 import { toActor } from "@/db/repo/users";
@@ -19,12 +19,7 @@ export default async function RecommendationPage({ params }: { params: Promise<{
   const version = await getLatestSentVersion(getDb(), toActor(user), id);
   return (
     <div className="flex flex-col gap-4">
-      <nav aria-label="Breadcrumb" className="no-print text-sm">
-        <Link href="/recommendations" className="underline">
-          Recommendations
-        </Link>{" "}
-        / {sheet.customerName} <span className="text-muted">· {sheet.combinationName}, revision {sheet.revision} (internal)</span>
-      </nav>
+      <Breadcrumb href="/recommendations" label="Recommendations" here={`${sheet.customerName} · ${sheet.combinationName}, revision ${sheet.revision} (internal)`} className="no-print text-sm" linkClassName="underline" />
       <SendPanel id={sheet.id} status={sheet.status} customerEmail={sheet.customerEmail} shareUrl={version ? sentVersionLink(version, unitSystem).url : null} version={version?.version ?? null} />
       <SheetActions id={sheet.id} status={sheet.status} customerEmail={sheet.customerEmail} sentAt={sheet.sentAt ? sheet.sentAt.toISOString() : null} lastError={sheet.lastError} />
       <div className="rounded-md border border-line bg-panel p-4">

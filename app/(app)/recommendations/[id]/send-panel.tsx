@@ -2,7 +2,7 @@
 // Sending a sheet: preview the e-mail as it will go (the PDF goes attached), send it, and once
 // sent, the customer's link to copy, or to withdraw.
 import { useState } from "react";
-import { apiJson } from "@/components/shelf/api";
+import { apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { useAction } from "@/components/ui/use-action";
@@ -29,7 +29,7 @@ export function SendPanel({ id, status, customerEmail, shareUrl, version }: Prop
   const revoke = () => {
     if (!window.confirm("Withdraw the customer's link? It will stop opening the sheet; send the sheet again to give them a new one.")) return;
     void run("revoke", async () => {
-      await apiJson(`/api/recommendations/${id}/revoke`, { method: "POST" });
+      await apiJson(`/api/recommendations/${id}/share-links`, { method: "DELETE" });
       return "The link was withdrawn.";
     });
   };

@@ -1,11 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
-import { loadShelfForForm } from "@/components/recommendation/form-data";
+import { loadShelfForForm } from "@/app/(app)/recommendations/form-data";
 import { RecommendationForm } from "@/components/recommendation/recommendation-form";
 import { Notice } from "@/components/ui/notice";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { getCombination, getRevision, listCombinations, listRevisions } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 

@@ -4,7 +4,7 @@ import { notFound } from "next/navigation";
 import { copyItemAction } from "@/app/(app)/lessons/actions";
 import { requirePageUser } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { getLesson } from "@/db/repo/lessons";
 import { toActor } from "@/db/repo/users";
 import { ClassroomView } from "@/components/lessons/classroom-view";

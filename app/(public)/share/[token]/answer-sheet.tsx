@@ -3,7 +3,7 @@
 // decline with an optional reason.
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { apiJson } from "@/components/shelf/api";
+import { apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 

@@ -9,6 +9,15 @@ import { ORDER_STATUS_LABELS } from "@/lib/orders/status";
 import { AnswerSheet } from "./answer-sheet";
 import { loadSentSheet, type CustomerAnswer } from "./sent-sheet";
 
+/** A token with a broken %-escape is simply not a token (refused below), never an error. */
+function safeDecode(s: string): string {
+  try {
+    return decodeURIComponent(s);
+  } catch {
+    return s;
+  }
+}
+
 export const metadata: Metadata = { title: "Your recommendation", robots: { index: false, follow: false } };
 
 type Props = { params: Promise<{ token: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
@@ -43,7 +52,7 @@ function AnswerState({ answer, token, justPaid, cancelled }: { answer: CustomerA
 /** A customer's view of one sheet as it was sent, opened from the e-mailed link; no account needed. */
 export default async function SharedSheetPage({ params, searchParams }: Props) {
   const [{ token: raw }, sp] = await Promise.all([params, searchParams]);
-  const token = decodeURIComponent(raw);
+  const token = safeDecode(raw);
   const loaded = await loadSentSheet(token, sp.units);
   if (!loaded.ok) return <LinkRefused reason={loaded.reason} />;
   const other = loaded.unitSystem === "metric" ? "imperial" : "metric";

@@ -1,13 +1,13 @@
 import "server-only";
 // The sheet behind a customer's link: the version frozen when it was sent, with what the customer
 // may do about it (accept and pay the deposit, or decline). Links from before versions existed
-// name the sheet itself; they still open it through loadByToken.
+// name no sent version; they open the sheet as it is, while their share version is current.
 import type { UnitSystem } from "@/calc";
 import { verifyShareToken } from "@/app/_lib/share-link";
-import { loadByToken, unitsParam, type Refused } from "@/components/recommendation/load";
+import { loadByToken, unitsParam, type Refused } from "@/app/_lib/recommendation-load";
 import type { SheetRecord } from "@/components/recommendation/sheet-view";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { getCustomerOrder } from "@/db/repo/orders";
 import { getSentVersion } from "@/db/repo/sheet-versions";
 import { getShopDetails, getShopTerms, type ShopDetails } from "@/db/repo/shop";
@@ -23,11 +23,11 @@ export type CustomerAnswer =
 
 export type SentSheet = { ok: true; sheet: SheetRecord; title: string; currency: string; shop: ShopDetails; unitSystem: UnitSystem; expiresAt: Date; version: number | null; answer: CustomerAnswer };
 
-export async function loadSentSheet(token: string, units: unknown): Promise<SentSheet | Refused | { ok: false; reason: "revoked" }> {
+export async function loadSentSheet(token: string, units: unknown): Promise<SentSheet | Refused> {
   const v = verifyShareToken(token);
   if (!v.ok) return { ok: false, reason: v.reason };
   const db = getDb();
-  const grant = { versionId: v.recommendationId };
+  const grant = { recommendationId: v.recommendationId, version: v.version };
   const sent = await getSentVersion(db, grant).catch((e) => {
     if (e instanceof NotFoundError) return "revoked" as const;
     throw e;

@@ -4,7 +4,8 @@ import { NextResponse } from "next/server";
 import { parseJson, route } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { deleteLesson, getLesson, updateLesson, updateLessonSchema } from "@/db/repo/lessons";
+import { deleteLesson, getLesson, updateLesson } from "@/db/repo/lessons";
+import { updateLessonSchema } from "@/lib/lessons/rules";
 import { lessonJson, type LessonContext } from "../_shared";
 
 export const dynamic = "force-dynamic";

@@ -2,7 +2,8 @@
 import { parseJson, route } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { joinLesson, joinSchema } from "@/db/repo/lessons";
+import { joinLesson } from "@/db/repo/lessons";
+import { joinSchema } from "@/lib/lessons/rules";
 
 export const dynamic = "force-dynamic";
 

@@ -1,9 +1,11 @@
 import { NextResponse } from "next/server";
 import { route } from "@/app/_lib/http";
-import { appUrl, sendMail } from "@/app/_lib/mail";
+import { readBodyCapped } from "@/app/_lib/body-limit";
+import { appUrl } from "@/app/_lib/mail";
+import { queueMail } from "@/app/_lib/mail-sender";
 import { paidCheckoutOf, verifyWebhook } from "@/app/_lib/payments";
 import { getDb } from "@/db/client";
-import { FieldError } from "@/db/errors";
+import { FieldError } from "@/lib/errors";
 import { recordPaidCheckout } from "@/db/repo/orders";
 import { getShopDetails } from "@/db/repo/shop";
 import { customerReceipt, shopNotice } from "@/lib/orders/receipt";
@@ -17,9 +19,7 @@ const MAX_EVENT_BYTES = 256 * 1024;
 export const POST = route(async (req) => {
   const signature = req.headers.get("stripe-signature");
   if (!signature) throw new FieldError("stripe-signature", "The Stripe-Signature header is missing.");
-  if (Number(req.headers.get("content-length") ?? 0) > MAX_EVENT_BYTES) throw new FieldError("_", "The event is too large.");
-  const payload = await req.text();
-  if (Buffer.byteLength(payload) > MAX_EVENT_BYTES) throw new FieldError("_", "The event is too large.");
+  const payload = (await readBodyCapped(req, MAX_EVENT_BYTES)).toString("utf8");
   let event;
   try {
     event = verifyWebhook(payload, signature);
@@ -32,13 +32,13 @@ export const POST = route(async (req) => {
   const db = getDb();
   const outcome = await recordPaidCheckout(db, paid);
   if (outcome.kind === "paid") {
-    // The payment is recorded whatever happens to the mail; a failed send is logged, not retried by the service.
+    // The payment is recorded whatever happens to the mail: the outbox sends (and retries) it in the background.
     const shop = await getShopDetails(db);
     const { order, reservations, snapshot } = outcome;
     const mails = [];
     if (order.customerEmail) mails.push({ to: order.customerEmail, ...customerReceipt({ order, title: snapshot.title, reservations, shopName: shop.name }) });
     if (shop.email) mails.push({ to: shop.email, ...shopNotice({ order, title: snapshot.title, reservations, orderUrl: appUrl(`/orders/${order.id}`) }) });
-    await Promise.all(mails.map((m) => sendMail(m).catch((err) => console.error("[webhook] mail failed:", err instanceof Error ? err.message : err))));
+    for (const m of mails) await queueMail({ ...m, purpose: `order:${order.id}` }, db);
   }
   return { received: true, outcome: outcome.kind };
 });

@@ -2,8 +2,9 @@ import { route, parseJson } from "@/app/_lib/http";
 import { getCurrentUser, requireActor } from "@/app/_lib/session";
 import { sentVersionLink } from "@/app/_lib/share-url";
 import { getDb } from "@/db/client";
-import { getRecommendation, updateRecommendation, updateRecommendationSchema } from "@/db/repo/recommendations";
+import { getRecommendation, updateRecommendation } from "@/db/repo/recommendations";
 import { getLatestSentVersion } from "@/db/repo/sheet-versions";
+import { updateRecommendationSchema } from "@/lib/recommendations/rules";
 
 const STAFF = ["sales", "tuner", "admin"] as const;
 type Ctx = { params: Promise<{ id: string }> };

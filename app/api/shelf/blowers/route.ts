@@ -1,7 +1,8 @@
 import { route, parseJson, parseQuery } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { blowerListQuerySchema, blowerRecordSchema, createBlower, listBlowers } from "@/db/repo/shelf";
+import { createBlower, listBlowers } from "@/db/repo/shelf";
+import { blowerListQuerySchema, blowerRecordSchema } from "@/lib/shelf/rules";
 
 /** The shelf's blowers: search, filters (kind, in stock), sort and pages. */
 export const GET = route(async (req) => {

@@ -2,7 +2,8 @@ import { z } from "zod";
 import { route, parseQuery } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { exportShelfCsv, shelfKindSchema } from "@/db/repo/shelf";
+import { exportShelfCsv } from "@/db/repo/shelf-csv";
+import { shelfKindSchema } from "@/lib/shelf/rules";
 
 /** The shelf as CSV, in the columns the import reads. */
 export const GET = route(async (req) => {

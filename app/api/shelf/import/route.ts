@@ -1,10 +1,12 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
+import { PayloadTooLarge, readBodyCapped, withBody } from "@/app/_lib/body-limit";
 import { route, parseQuery } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { FieldError } from "@/db/errors";
-import { importShelfCsv, MAX_CSV_BYTES, MAX_CSV_ROWS, shelfKindSchema } from "@/db/repo/shelf";
+import { FieldError } from "@/lib/errors";
+import { importShelfCsv } from "@/db/repo/shelf-csv";
+import { MAX_CSV_BYTES, MAX_CSV_ROWS, shelfKindSchema } from "@/lib/shelf/rules";
 
 const querySchema = z.object({
   kind: shelfKindSchema,
@@ -16,16 +18,26 @@ const tooLarge = () => NextResponse.json({ error: TOO_LARGE, fieldErrors: { file
 
 /** The CSV as text: a raw text/csv body, or the "file" field of a multipart form. */
 async function readCsv(req: Request): Promise<string | null> {
-  // Room for multipart framing around a file of the largest allowed size.
-  if (Number(req.headers.get("content-length") ?? "0") > MAX_CSV_BYTES + 16_384) return null;
+  // Room for multipart framing around a file of the largest allowed size; counted while it streams.
+  let body: Buffer;
+  try {
+    body = await readBodyCapped(req, MAX_CSV_BYTES + 16_384);
+  } catch (e) {
+    if (e instanceof PayloadTooLarge) return null;
+    throw e;
+  }
   if ((req.headers.get("content-type") ?? "").startsWith("multipart/form-data")) {
-    const file = (await req.formData()).get("file");
+    const form = await withBody(req, body)
+      .formData()
+      .catch(() => {
+        throw new FieldError("file", "The upload is not a well-formed multipart form (missing or broken boundary). Choose the file again.");
+      });
+    const file = form.get("file");
     if (!(file instanceof File)) throw new FieldError("file", "Choose a CSV file to upload.");
     if (file.size > MAX_CSV_BYTES) return null;
     return file.text();
   }
-  const text = await req.text();
-  return Buffer.byteLength(text) > MAX_CSV_BYTES ? null : text;
+  return body.length > MAX_CSV_BYTES ? null : body.toString("utf8");
 }
 
 /**

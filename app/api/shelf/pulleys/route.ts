@@ -1,7 +1,8 @@
 import { route, parseJson, parseQuery } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { createPulley, listPulleys, pulleyListQuerySchema, pulleyRecordSchema } from "@/db/repo/shelf";
+import { createPulley, listPulleys } from "@/db/repo/shelf";
+import { pulleyListQuerySchema, pulleyRecordSchema } from "@/lib/shelf/rules";
 
 /** The shelf's pulleys: search, filters (position, rib count, in stock), sort and pages. */
 export const GET = route(async (req) => {

@@ -1,7 +1,8 @@
 "use server";
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { act, type ActionState } from "@/app/_lib/action";
+import { act } from "@/app/_lib/action";
+import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import { restoreRevision } from "@/db/repo/combinations";

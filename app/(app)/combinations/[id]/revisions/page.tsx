@@ -6,9 +6,10 @@ import { notFound } from "next/navigation";
 import type { Combination } from "@/calc";
 import { requirePageUser } from "@/app/_lib/session";
 import { RestoreRevision } from "@/components/combinations/restore-revision";
-import { specChanges, specRows } from "@/components/combinations/spec-fields";
+import { restoreRevisionAction } from "./actions";
+import { specChanges, specRows } from "@/lib/combinations/spec-fields";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { canWriteOwned } from "@/db/policy";
 import { getCombination, listRevisions } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
@@ -92,7 +93,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
                       <Link href={`?view=${r.number}#view`} className="rounded-md px-2 py-1 hover:bg-bg" aria-label={`View revision ${r.number}`}>
                         View
                       </Link>
-                      {writable && r.number !== current ? <RestoreRevision combinationId={id} number={r.number} currentRevision={current} /> : null}
+                      {writable && r.number !== current ? <RestoreRevision combinationId={id} number={r.number} currentRevision={current} restoreAction={restoreRevisionAction} /> : null}
                     </div>
                   </td>
                 </tr>

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { CalibrateView } from "@/components/datalogs/calibrate-view";
-import { cleaningFromQuery, type CleaningQuery } from "@/components/datalogs/cleaning-query";
+import { cleaningFromQuery, type CleaningQuery } from "@/lib/datalogs/cleaning-query";
 import { LogHeader } from "@/components/datalogs/log-header";
 import { SafetyNotes } from "@/components/datalogs/safety";
 import { combinationSchema } from "@/calc";

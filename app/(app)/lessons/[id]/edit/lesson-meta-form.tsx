@@ -3,7 +3,7 @@ import { useActionState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import type { ActionState } from "@/app/_lib/action";
+import type { ActionState } from "@/lib/action-state";
 
 type LessonMetaFormProps = { title: string; summary: string; action: (prev: ActionState | undefined, form: FormData) => Promise<ActionState> };
 

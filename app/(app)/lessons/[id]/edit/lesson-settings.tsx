@@ -3,6 +3,7 @@
 import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { TitledSection } from "@/components/ui/titled-section";
 
 type Result = { ok: true } | { ok: false; message: string };
 type LessonSettingsProps = {
@@ -24,10 +25,7 @@ export function LessonSettings({ published, classCode, stepCount, setPublished, 
     });
 
   return (
-    <section aria-labelledby="lesson-settings" className="flex flex-col gap-3 rounded-lg border border-line bg-panel p-4">
-      <h2 id="lesson-settings" className="text-base font-semibold">
-        Class
-      </h2>
+    <TitledSection id="lesson-settings" title="Class" className="flex flex-col gap-3 rounded-lg border border-line bg-panel p-4">
       <p className="text-sm" data-testid="lesson-status">
         Status: {published ? <strong className="text-ok">Published</strong> : <strong className="text-muted">Draft, visible only to you</strong>}
       </p>
@@ -57,6 +55,6 @@ export function LessonSettings({ published, classCode, stepCount, setPublished, 
       >
         Delete lesson
       </Button>
-    </section>
+    </TitledSection>
   );
 }

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requirePageUser } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { NotFoundError } from "@/db/errors";
+import { NotFoundError } from "@/lib/errors";
 import { getLesson, listStepSources } from "@/db/repo/lessons";
 import { toActor } from "@/db/repo/users";
 import { deleteLessonAction, deleteStepAction, moveStepAction, regenerateCodeAction, saveLessonAction, saveStepAction, setPublishedAction } from "../../actions";

@@ -3,10 +3,11 @@
 // and delete, and the form that adds a step.
 import { useState, useTransition } from "react";
 import { StepEditor, type SaveStep } from "@/components/lessons/step-editor";
-import { SERIES_LABEL } from "@/components/lessons/curves";
+import { SERIES_LABEL } from "@/lib/lessons/curves";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import type { LessonStep, StepInput, StepSource } from "@/db/repo/lessons";
+import type { LessonStep, StepSource } from "@/db/repo/lessons";
+import type { StepInput } from "@/lib/lessons/rules";
 
 type Result = { ok: true } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
 type StepListProps = {

@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { loadShelfForForm } from "@/components/recommendation/form-data";
-import { loadForStaff } from "@/components/recommendation/load";
+import { loadShelfForForm } from "@/app/(app)/recommendations/form-data";
+import { loadForStaff } from "@/app/_lib/recommendation-load";
 import { RecommendationForm } from "@/components/recommendation/recommendation-form";
 import { requirePageUser } from "@/app/_lib/session";
 import { getDb } from "@/db/client";

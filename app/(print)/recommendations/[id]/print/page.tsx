@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { LinkRefused } from "@/components/recommendation/link-refused";
-import { loadByToken, loadForStaff } from "@/components/recommendation/load";
+import { loadByToken, loadForStaff } from "@/app/_lib/recommendation-load";
 import { PrintButton } from "@/components/recommendation/print-button";
 import { SheetView } from "@/components/recommendation/sheet-view";
 

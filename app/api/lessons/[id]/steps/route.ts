@@ -3,7 +3,8 @@ import { NextResponse } from "next/server";
 import { parseJson, route } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { addStep, getLesson, stepInputSchema } from "@/db/repo/lessons";
+import { addStep, getLesson } from "@/db/repo/lessons";
+import { stepInputSchema } from "@/lib/lessons/rules";
 import type { LessonContext } from "../../_shared";
 
 export const dynamic = "force-dynamic";

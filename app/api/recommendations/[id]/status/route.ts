@@ -1,7 +1,8 @@
 import { route, parseJson } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { setRecommendationStatus, statusChangeSchema } from "@/db/repo/recommendations";
+import { setRecommendationStatus } from "@/db/repo/recommendations";
+import { statusChangeSchema } from "@/lib/recommendations/rules";
 
 type Ctx = { params: Promise<{ id: string }> };
 

@@ -1,7 +1,8 @@
 import { route, parseJson } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { blowerRecordSchema, deleteBlower, updateBlower } from "@/db/repo/shelf";
+import { deleteBlower, updateBlower } from "@/db/repo/shelf";
+import { blowerRecordSchema } from "@/lib/shelf/rules";
 
 type Ctx = { params: Promise<{ id: string }> };
 

@@ -1,7 +1,8 @@
 import { route, parseJson } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { deletePulley, pulleyRecordSchema, updatePulley } from "@/db/repo/shelf";
+import { deletePulley, updatePulley } from "@/db/repo/shelf";
+import { pulleyRecordSchema } from "@/lib/shelf/rules";
 
 type Ctx = { params: Promise<{ id: string }> };
 

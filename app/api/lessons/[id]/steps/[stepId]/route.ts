@@ -3,7 +3,8 @@ import { NextResponse } from "next/server";
 import { parseJson, route } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { deleteStep, stepInputSchema, updateStep } from "@/db/repo/lessons";
+import { deleteStep, updateStep } from "@/db/repo/lessons";
+import { stepInputSchema } from "@/lib/lessons/rules";
 import type { StepContext } from "../../../_shared";
 
 export const dynamic = "force-dynamic";

@@ -3,7 +3,8 @@ import { NextResponse } from "next/server";
 import { parseJson, route } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { copySchema, copyStepItem } from "@/db/repo/lessons";
+import { copyStepItem } from "@/db/repo/lessons";
+import { copySchema } from "@/lib/lessons/rules";
 import type { StepContext } from "../../../../_shared";
 
 export const dynamic = "force-dynamic";

@@ -2,7 +2,8 @@
 import { parseJson, route } from "@/app/_lib/http";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { moveSchema, moveStep } from "@/db/repo/lessons";
+import { moveStep } from "@/db/repo/lessons";
+import { moveSchema } from "@/lib/lessons/rules";
 import type { StepContext } from "../../../../_shared";
 
 export const dynamic = "force-dynamic";

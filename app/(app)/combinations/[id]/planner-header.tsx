@@ -1,0 +1,66 @@
+"use client";
+// The planner's heading (name, revision, links, units) and the offer of a kept draft.
+import Link from "next/link";
+import type { UnitSystem } from "@/calc";
+import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
+
+type PlannerHeaderProps = { name: string; combinationId: string; baseRevision: number; isDemo: boolean; system: UnitSystem; onUnits: (u: UnitSystem) => void; unitsMessage: string | null };
+
+export function PlannerHeader({ name, combinationId, baseRevision, isDemo, system, onUnits, unitsMessage }: PlannerHeaderProps) {
+  return (
+    <>
+      <header className="flex flex-wrap items-start gap-x-6 gap-y-2">
+        <div className="flex flex-col gap-1">
+          <h1 className="text-xl font-semibold">{name}</h1>
+          <p className="text-sm text-muted">
+            Planner · revision <span data-testid="base-revision">{baseRevision}</span>
+            {isDemo ? " · shop demo (invented data)" : ""} ·{" "}
+            <Link href={`/combinations/${combinationId}/revisions`} className="text-accent underline underline-offset-2">
+              History
+            </Link>{" "}
+            ·{" "}
+            <Link href={`/compare?items=${combinationId}:current`} className="text-accent underline underline-offset-2">
+              Side by side
+            </Link>
+          </p>
+        </div>
+        <fieldset className="ml-auto flex items-center gap-3 text-sm">
+          <legend className="sr-only">Units</legend>
+          <span aria-hidden="true" className="text-muted">
+            Units
+          </span>
+          {(["imperial", "metric"] as const).map((u) => (
+            <label key={u} className="flex items-center gap-1">
+              <input type="radio" name="planner-units" value={u} checked={system === u} onChange={() => onUnits(u)} />
+              {u === "imperial" ? "Imperial" : "Metric"}
+            </label>
+          ))}
+        </fieldset>
+      </header>
+      {unitsMessage ? (
+        <p role="status" className="text-xs text-muted">
+          {unitsMessage}
+        </p>
+      ) : null}
+    </>
+  );
+}
+
+export function DraftOffer({ revision, savedAt, onRestore, onDiscard }: { revision: number; savedAt: number; onRestore: () => void; onDiscard: () => void }) {
+  return (
+    <Notice tone="warning" title="Unsaved changes found">
+      <p>
+        This browser kept changes to revision {revision} from {new Date(savedAt).toLocaleString()} that were never saved.
+      </p>
+      <div className="mt-2 flex gap-2">
+        <Button type="button" onClick={onRestore}>
+          Restore unsaved changes
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDiscard}>
+          Discard them
+        </Button>
+      </div>
+    </Notice>
+  );
+}

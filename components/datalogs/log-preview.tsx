@@ -1,0 +1,72 @@
+"use client";
+// Step 4 of the log upload: what will be stored, and every line that cannot be read.
+import type { UnitSystem } from "@/calc";
+import { Notice } from "@/components/ui/notice";
+import { fig, rpmText } from "@/lib/datalogs/format";
+import type { parseLog } from "@/lib/datalogs/parse";
+
+type LogPreviewProps = {
+  parsed: { result: ReturnType<typeof parseLog> | null; mappingError: string | null };
+  ambientPa: number;
+  unitSystem: UnitSystem;
+  pressureUnit: string;
+  temperatureUnit: string;
+};
+
+export function LogPreview({ parsed, ambientPa, unitSystem, pressureUnit, temperatureUnit }: LogPreviewProps) {
+  const r = parsed.result;
+  return (
+    <section aria-labelledby="step-4" className="flex flex-col gap-3">
+      <h2 id="step-4" className="text-lg font-semibold">
+        4. Preview
+      </h2>
+      {parsed.mappingError ? <Notice tone="danger">{parsed.mappingError}</Notice> : null}
+      {r?.fatal ? <Notice tone="danger">{r.fatal}</Notice> : null}
+      {r && !r.fatal ? (
+        <p className="text-sm" role="status">
+          {r.dataLines.toLocaleString("en-US")} data rows; {r.points.length.toLocaleString("en-US")} read; {r.errors.length + r.moreErrors} with errors.
+        </p>
+      ) : null}
+      {r && r.errors.length ? (
+        <Notice tone="danger" title="These lines cannot be read; nothing is stored until they are fixed (or the mapping is):">
+          <ul className="list-disc pl-5" aria-label="Line errors">
+            {r.errors.map((e) => (
+              <li key={e.line}>{e.message}</li>
+            ))}
+          </ul>
+          {r.moreErrors ? <p>…and {r.moreErrors} more lines.</p> : null}
+        </Notice>
+      ) : null}
+      {r && r.points.length ? (
+        <div className="overflow-x-auto">
+          <table className="text-sm" aria-label="First rows as they will be stored">
+            <thead>
+              <tr className="text-left text-muted">
+                <th className="pr-4 font-medium">Line</th>
+                <th className="pr-4 font-medium">Engine speed (rpm)</th>
+                <th className="pr-4 font-medium">Boost ({pressureUnit})</th>
+                <th className="pr-4 font-medium">Manifold absolute ({pressureUnit})</th>
+                <th className="pr-4 font-medium">Intake air ({temperatureUnit})</th>
+                <th className="pr-4 font-medium">Throttle (%)</th>
+                <th className="pr-4 font-medium">Time (s)</th>
+              </tr>
+            </thead>
+            <tbody>
+              {r.points.slice(0, 8).map((p) => (
+                <tr key={p.line}>
+                  <td className="pr-4">{p.line}</td>
+                  <td className="pr-4">{rpmText(p.rpm)}</td>
+                  <td className="pr-4">{fig("pressure", p.manifoldPressure - ambientPa, unitSystem)}</td>
+                  <td className="pr-4">{fig("pressure", p.manifoldPressure, unitSystem)}</td>
+                  <td className="pr-4">{fig("temperature", p.intakeTemperature, unitSystem)}</td>
+                  <td className="pr-4">{p.throttle ?? "—"}</td>
+                  <td className="pr-4">{p.time ?? "—"}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,139 @@
+"use client";
+// The pulley finder: the exact blower pulley for a target boost at an engine speed, the nearest
+// stocked sizes either side, and their predicted curves. Used by the planner and the
+// recommendation sheet; inside another form (`nested`) it is a group with a plain button.
+import { useMemo, useState, type FormEvent } from "react";
+import { toSI, unitLabel, type Combination, type UnitSystem } from "@/calc";
+import type { CurveSeries } from "@/components/charts/curve-chart";
+import { LazyCurveChart } from "@/components/charts/curve-chart-lazy";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { figure, quantityText } from "@/lib/units/format";
+import { findPulley, safeCurve, withPulley } from "@/lib/planner/compute";
+
+export type PulleyFinderProps = {
+  spec: Combination;
+  system: UnitSystem;
+  rpms: number[];
+  stock: number[];
+  defaultRpm: number;
+  onApply?: (diameter: number) => void;
+  /** Rendered inside another form: a group instead of a form of its own. */
+  nested?: boolean;
+};
+
+export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onApply, nested }: PulleyFinderProps) {
+  const [target, setTarget] = useState("");
+  const [rpm, setRpm] = useState(String(Math.round(defaultRpm)));
+  const [request, setRequest] = useState<{ boost: number; rpm: number } | null>(null);
+  const [error, setError] = useState<{ field: "target" | "rpm"; message: string } | null>(null);
+  const pressureUnit = unitLabel("pressure", system);
+
+  const outcome = useMemo(() => (request ? findPulley(spec, request.rpm, request.boost, stock, system) : null), [request, spec, stock, system]);
+  const series = useMemo((): CurveSeries[] => {
+    if (!outcome?.ok) return [];
+    const r = outcome.result;
+    const out: CurveSeries[] = [{ label: `Exact ${quantityText("length-small", r.diameter, system)}`, points: safeCurve(withPulley(spec, r.diameter), rpms), colorIndex: 0 }];
+    if (r.below) out.push({ label: `Stocked ${quantityText("length-small", r.below.diameter, system)} (smaller)`, points: safeCurve(withPulley(spec, r.below.diameter), rpms), colorIndex: 5, dashed: true });
+    if (r.above) out.push({ label: `Stocked ${quantityText("length-small", r.above.diameter, system)} (larger)`, points: safeCurve(withPulley(spec, r.above.diameter), rpms), colorIndex: 2, dashed: true });
+    return out;
+  }, [outcome, spec, rpms, system]);
+
+  const submit = (e?: FormEvent) => {
+    e?.preventDefault();
+    const t = Number(target);
+    const n = Number(rpm);
+    if (target.trim() === "" || !Number.isFinite(t)) return setError({ field: "target", message: `Give a target boost in ${pressureUnit}.` });
+    if (rpm.trim() === "" || !Number.isFinite(n) || n < 100 || n > 20_000) return setError({ field: "rpm", message: "Give an engine speed between 100 and 20,000 rpm." });
+    setError(null);
+    setRequest({ boost: toSI("pressure", t, system), rpm: n });
+  };
+
+  const Wrapper = nested ? "div" : "form";
+  const wrapperProps = nested
+    ? { role: "group", "aria-labelledby": "finder-heading", className: "flex flex-wrap items-end gap-3" }
+    : { onSubmit: submit, noValidate: true, className: "flex flex-wrap items-end gap-3" };
+
+  return (
+    <section aria-labelledby="finder-heading" className="flex flex-col gap-3">
+      <h2 id="finder-heading" className="text-base font-semibold">
+        Pulley finder
+      </h2>
+      <Wrapper {...wrapperProps}>
+        <Field
+          name="finderTarget"
+          label="Target boost"
+          unit={pressureUnit}
+          type="number"
+          step="any"
+          inputMode="decimal"
+          value={target}
+          onChange={(e) => setTarget(e.target.value)}
+          errors={error?.field === "target" ? error.message : undefined}
+        />
+        <Field
+          name="finderRpm"
+          label="At engine speed"
+          unit="rpm"
+          type="number"
+          step="50"
+          inputMode="numeric"
+          value={rpm}
+          onChange={(e) => setRpm(e.target.value)}
+          errors={error?.field === "rpm" ? error.message : undefined}
+        />
+        <Button type={nested ? "button" : "submit"} onClick={nested ? () => submit() : undefined}>
+          Find pulley
+        </Button>
+      </Wrapper>
+      {outcome && !outcome.ok ? (
+        <Notice tone="warning" title="Target out of reach">
+          {outcome.message}
+        </Notice>
+      ) : null}
+      {outcome?.ok ? (
+        <div className="flex flex-col gap-2" data-testid="finder-result">
+          <p role="status" className="text-sm">
+            For {quantityText("pressure", outcome.result.point.boostGauge, system)} at {figure("speed", outcome.result.point.rpm, system)} rpm the blower pulley is{" "}
+            <strong data-testid="finder-exact" data-diameter-m={outcome.result.diameter}>
+              {quantityText("length-small", outcome.result.diameter, system)}
+            </strong>{" "}
+            (drive ratio {outcome.result.point.driveRatio.toFixed(2)}).
+          </p>
+          <ul className="text-sm">
+            {(
+              [
+                ["below", "Nearest stocked, smaller (more boost)", outcome.result.below],
+                ["above", "Nearest stocked, larger (less boost)", outcome.result.above],
+              ] as const
+            ).map(([side, label, s]) => (
+              <li key={side} data-testid={`finder-${side}`} data-diameter-m={s?.diameter ?? ""}>
+                {label}:{" "}
+                {s ? `${quantityText("length-small", s.diameter, system)}, ${quantityText("pressure", s.point.boostGauge, system)}` : stock.length ? "none on the shelf" : "the parts shelf has no blower pulleys"}
+              </li>
+            ))}
+          </ul>
+          {onApply ? (
+            <div className="flex flex-wrap gap-2">
+              <Button type="button" variant="secondary" onClick={() => onApply(outcome.result.diameter)}>
+                Use the exact size in the editor
+              </Button>
+              {outcome.result.below ? (
+                <Button type="button" variant="secondary" onClick={() => onApply(outcome.result.below!.diameter)}>
+                  Use the smaller stocked size
+                </Button>
+              ) : null}
+              {outcome.result.above ? (
+                <Button type="button" variant="secondary" onClick={() => onApply(outcome.result.above!.diameter)}>
+                  Use the larger stocked size
+                </Button>
+              ) : null}
+            </div>
+          ) : null}
+          <LazyCurveChart series={series} metrics={["boostGauge"]} unitSystem={system} redlineRpm={spec.engine.redlineRpm} height={240} ariaLabel="Predicted boost with the found pulley and the nearest stocked sizes" />
+        </div>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,24 @@
+"use client";
+// The pulley ladder and finder for a combination outside the planner (the recommendation
+// sheet): the same components and the same maths, with "Use" choosing the sheet's pulley.
+import { useMemo } from "react";
+import type { Combination, UnitSystem } from "@/calc";
+import { finderStock, ladder, peakPowerRpm, rpmGrid, safeCurve, type ShelfPulley } from "@/lib/planner/compute";
+import { PulleyFinder } from "./pulley-finder";
+import { PulleyLadder } from "./pulley-ladder";
+
+type PulleyHelpProps = { spec: Combination; shelf: ShelfPulley[]; system: UnitSystem; onChoose: (diameter: number) => void };
+
+export function PulleyHelp({ spec, shelf, system, onChoose }: PulleyHelpProps) {
+  const computed = useMemo(() => {
+    const rpms = rpmGrid(spec);
+    const peak = peakPowerRpm(safeCurve(spec, rpms), spec.engine.redlineRpm);
+    return { rpms, peak, rows: ladder(spec, peak, shelf) };
+  }, [spec, shelf]);
+  return (
+    <div className="flex flex-col gap-4">
+      <PulleyLadder rows={computed.rows} system={system} peakRpm={computed.peak} redlineRpm={spec.engine.redlineRpm} fromShelf={shelf.length > 0} onUse={onChoose} />
+      <PulleyFinder spec={spec} system={system} rpms={computed.rpms} stock={finderStock(shelf)} defaultRpm={computed.peak} onApply={onChoose} nested />
+    </div>
+  );
+}

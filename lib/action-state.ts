@@ -1,0 +1,4 @@
+/** What every server action returns to its form (for useActionState): ok, or a message with per-field errors. */
+export type ActionState<T = unknown> =
+  | { ok: true; data?: T; message?: string }
+  | { ok: false; message: string; fieldErrors?: Record<string, string[]>; status: number };

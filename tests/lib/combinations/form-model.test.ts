@@ -1,0 +1,184 @@
+// The planner's form: user units in, SI out, and calc's rules as field errors in the user's units.
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { combinationSchema, type Combination } from "@/calc";
+import { convertForm, localizeMessage, sameSpec, toForm, toSpec, unitOf, validateForm } from "@/lib/combinations/form-model";
+import { smallBlockBaseline } from "@/lib/combinations/demo-specs";
+import { combinationArb } from "@/tests/calc/support/arbitraries";
+
+const demo: Combination = combinationSchema.parse(smallBlockBaseline);
+
+describe("form values and SI", () => {
+  it("shows the demo's blower and crank pulleys in inches and millimetres", () => {
+    // source: the demo seed defines 3.4 in and 6.5 in; 1 in = 25.4 mm exactly (NIST SP 811)
+    const imperial = toForm(demo, "imperial");
+    expect(imperial.drive.blowerPulleyDiameter).toBe(3.4);
+    expect(imperial.drive.crankPulleyDiameter).toBe(6.5);
+    const metric = toForm(demo, "metric");
+    expect(metric.drive.blowerPulleyDiameter).toBeCloseTo(86.36, 6);
+    expect(metric.drive.crankPulleyDiameter).toBeCloseTo(165.1, 6);
+    // source: 5.0 L = 5.0 / 0.016387064 in³ = 305.12 in³ (1 in³ = 16.387064 cm³, NIST SP 811)
+    expect(imperial.engine.displacement).toBeCloseTo(305.12, 1);
+    expect(metric.engine.displacement).toBeCloseTo(5.0, 9);
+  });
+
+  it("round-trips a form in either system to the same SI combination", () => {
+    for (const system of ["imperial", "metric"] as const) {
+      const back = combinationSchema.parse(toSpec(toForm(demo, system), system));
+      expect(sameSpec(back, demo)).toBe(true);
+    }
+  });
+
+  it("keeps every untouched stored value exactly, in either system (property)", () => {
+    fc.assert(
+      fc.property(combinationArb, fc.constantFrom("imperial" as const, "metric" as const), (c, system) => {
+        const saved = combinationSchema.parse(c);
+        expect(combinationSchema.parse(toSpec(toForm(saved, system), system, saved))).toEqual(saved);
+      }),
+      { numRuns: 300 },
+    );
+    // Without the stored values to fall back on, the unit round trip alone is not exact (5.0 L
+    // through in³ at six figures), which is what keeping them is for.
+    const viaInches = toSpec(toForm(demo, "imperial"), "imperial").engine.displacement;
+    expect(viaInches).not.toBe(demo.engine.displacement);
+    expect(toSpec(toForm(demo, "imperial"), "imperial", demo).engine.displacement).toBe(demo.engine.displacement);
+  });
+
+  it("takes an edited field from the form and leaves the rest as stored", () => {
+    const f = toForm(demo, "imperial");
+    f.drive.blowerPulleyDiameter = 3.3;
+    f.engine.veCurve[1].ve = 88;
+    const spec = combinationSchema.parse(toSpec(f, "imperial", demo));
+    // source: 3.3 in × 0.0254 m/in (NIST SP 811)
+    expect(spec.drive.blowerPulleyDiameter).toBeCloseTo(0.08382, 12);
+    expect(spec.engine.veCurve[1].ve).toBeCloseTo(0.88, 12);
+    expect({ ...spec, drive: { ...spec.drive, blowerPulleyDiameter: 0 }, engine: { ...spec.engine, veCurve: spec.engine.veCurve.filter((_, i) => i !== 1) } }).toEqual({
+      ...demo,
+      drive: { ...demo.drive, blowerPulleyDiameter: 0 },
+      engine: { ...demo.engine, veCurve: demo.engine.veCurve.filter((_, i) => i !== 1) },
+    });
+  });
+
+  it("turns percentages into fractions and a typed pulley size into metres", () => {
+    const f = toForm(demo, "imperial");
+    f.engine.veCurve[0].ve = 90;
+    f.drive.blowerPulleyDiameter = 3.0;
+    f.drive.beltSlip = 3;
+    const spec = toSpec(f, "imperial");
+    expect(spec.engine.veCurve[0].ve).toBeCloseTo(0.9, 12);
+    // source: 3.0 in × 0.0254 m/in = 0.0762 m (exact)
+    expect(spec.drive.blowerPulleyDiameter).toBeCloseTo(0.0762, 12);
+    expect(spec.drive.beltSlip).toBeCloseTo(0.03, 12);
+  });
+
+  it("converts imperial to metric and back without drift", () => {
+    const f = toForm(demo, "imperial");
+    const again = convertForm(convertForm(f, "imperial", "metric"), "metric", "imperial");
+    expect(again.drive.blowerPulleyDiameter).toBe(3.4);
+    expect(again.ambient.temperature).toBeCloseTo(f.ambient.temperature, 3);
+    expect(sameSpec(toSpec(again, "imperial"), toSpec(f, "imperial"))).toBe(true);
+    // source: 25 °C = 77 °F (°F = °C × 9/5 + 32)
+    expect(f.ambient.temperature).toBeCloseTo(77, 6);
+  });
+
+  it("leaves out a switched-off intercooler and injectors", () => {
+    const f = toForm(demo, "metric");
+    expect(f.intercoolerOn).toBe(false);
+    expect(toSpec(f, "metric").intercooler).toBeNull();
+    f.intercoolerOn = true;
+    expect(toSpec(f, "metric").intercooler).toMatchObject({ effectiveness: expect.any(Number) });
+    f.fuel.injectorsOn = false;
+    expect(toSpec(f, "metric").fuel.injectorCount).toBeNull();
+  });
+
+  it("notices a 0.1 in pulley change as an unsaved edit, and a unit round trip as none", () => {
+    const f = toForm(demo, "imperial");
+    expect(sameSpec(toSpec(f, "imperial"), demo)).toBe(true);
+    f.drive.blowerPulleyDiameter = 3.3;
+    expect(sameSpec(toSpec(f, "imperial"), demo)).toBe(false);
+  });
+});
+
+describe("validation names the field, in the user's units", () => {
+  it("rejects a blower pulley too large and gives the limits in inches", () => {
+    const f = toForm(demo, "imperial");
+    f.drive.blowerPulleyDiameter = 25;
+    const r = validateForm(f, "imperial");
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(Object.keys(r.errors)).toEqual(["drive.blowerPulleyDiameter"]);
+    // source: calc's limits 0.03–0.5 m; 0.03 / 0.0254 = 1.1811 in, 0.5 / 0.0254 = 19.685 in
+    // (1 in = 0.0254 m, NIST SP 811, App. B), stated inward to three figures.
+    expect(r.errors["drive.blowerPulleyDiameter"]).toBe("Blower pulley diameter must be between 1.19 and 19.6 in");
+  });
+
+  it("gives the same limits in millimetres to a metric user", () => {
+    const f = toForm(demo, "metric");
+    f.drive.blowerPulleyDiameter = 10;
+    const r = validateForm(f, "metric");
+    expect(r.ok ? null : r.errors["drive.blowerPulleyDiameter"]).toBe("Blower pulley diameter must be between 30 and 500 mm");
+  });
+
+  it("names an empty box", () => {
+    const f = toForm(demo, "imperial");
+    f.engine.displacement = Number.NaN;
+    const r = validateForm(f, "imperial");
+    expect(r.ok ? null : r.errors["engine.displacement"]).toMatch(/^Engine displacement must be between 12\.3 and 1220 in³$/); // 0.0002–0.02 m³ is 12.205–1220.5 in³ (NIST SP 811)
+  });
+
+  it("states limits that are themselves accepted, for each bounded size in both unit systems", () => {
+    // For every field calc bounds, typing exactly the stated minimum or maximum passes validation.
+    for (const system of ["metric", "imperial"] as const) {
+      const probe = toForm(demo, system);
+      const paths: [string, (f: typeof probe, v: number) => void][] = [
+        ["drive.blowerPulleyDiameter", (f, v) => (f.drive.blowerPulleyDiameter = v)],
+        ["drive.crankPulleyDiameter", (f, v) => (f.drive.crankPulleyDiameter = v)],
+        ["engine.displacement", (f, v) => (f.engine.displacement = v)],
+        ["blower.displacementPerRev", (f, v) => (f.blower.displacementPerRev = v)],
+      ];
+      for (const [path, set] of paths) {
+        const f = toForm(demo, system);
+        set(f, -1);
+        const r = validateForm(f, system);
+        const m = r.ok ? null : /between (\S+) and (\S+)/.exec(r.errors[path]);
+        expect(m, path).not.toBeNull();
+        for (const limit of [Number(m![1]), Number(m![2])]) {
+          const g = toForm(demo, system);
+          set(g, limit);
+          const ok = validateForm(g, system);
+          expect(ok.ok ? [] : Object.entries(ok.errors).filter(([k]) => k === path), `${path} = ${limit} ${system}`).toEqual([]);
+        }
+      }
+    }
+  });
+
+  it("puts fractions as percentages", () => {
+    expect(localizeMessage("drive.beltSlip", "Belt slip must be between 0 and 0.2 (as a fraction)", "metric")).toBe("Belt slip must be between 0 and 20 %");
+    const f = toForm(demo, "metric");
+    f.engine.veCurve[2].ve = 250;
+    const r = validateForm(f, "metric");
+    expect(r.ok ? null : r.errors["engine.veCurve.2.ve"]).toBe("Volumetric efficiency must be between 20 and 200 %");
+  });
+
+  it("catches the rules across fields: a Roots blower's volume ratio, a repeated VE speed, half-given injectors", () => {
+    const f = toForm(demo, "imperial");
+    f.blower.builtInVolumeRatio = 1.5;
+    f.engine.veCurve[1].rpm = f.engine.veCurve[0].rpm;
+    f.fuel.injectorFlow = Number.NaN;
+    const r = validateForm(f, "imperial");
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.errors["blower.builtInVolumeRatio"]).toMatch(/Roots blower has no internal compression/);
+    expect(r.errors["engine.veCurve.1.rpm"]).toMatch(/twice/);
+    expect(r.errors["fuel.injectorFlow"]).toMatch(/Injector flow/);
+  });
+
+  it("shows every field's unit", () => {
+    expect(unitOf("drive.blowerPulleyDiameter", "imperial")).toBe("in");
+    expect(unitOf("drive.blowerPulleyDiameter", "metric")).toBe("mm");
+    expect(unitOf("ambient.pressure", "imperial")).toBe("psi");
+    expect(unitOf("engine.veCurve.3.ve", "metric")).toBe("%");
+    expect(unitOf("fuel.bsfc", "metric")).toBe("g/(kW·h)");
+    expect(unitOf("engine.cylinders", "metric")).toBe("");
+  });
+});
