@@ -70,10 +70,17 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
     lines.append({ partNumber: p.partNumber, description: p.description, unitPrice: p.price, quantity: 1 });
   }
 
+  // Pulleys that fit the customer's belt (rib count); the ladder, finder and "add" use only these.
+  const ribCounts = [...new Set(pulleys.map((p) => p.ribCount))].sort((a, b) => b - a);
+  const [ribs, setRibs] = useState(ribCounts[0] ?? 0);
+  const fitting = pulleys.filter((p) => p.ribCount === ribs);
+  const candidates = fitting.filter((p) => same(p.diameter, chosen));
+  const [variant, setVariant] = useState("");
+
+  /** Adds the chosen size; when the shelf holds several variants of it, the one picked in "Which one?". */
   function addChosenPulley() {
-    const candidates = parts.filter((p) => p.position === "blower" && p.diameter !== undefined && same(p.diameter, chosen));
-    const best = candidates.find((p) => p.stock > 0) ?? candidates[0];
-    if (best) addShelfPart(best.partNumber);
+    const pick = candidates.length === 1 ? candidates[0] : candidates.find((p) => p.partNumber === variant);
+    if (pick) addShelfPart(pick.partNumber);
   }
 
   const submit = form.handleSubmit(async (values) => {
@@ -93,7 +100,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
   });
 
   const lineError = (i: number, k: "description" | "unitPrice" | "quantity" | "partNumber") => errors.parts?.[i]?.[k]?.message as string | undefined;
-  const hasChosenOnShelf = parts.some((p) => p.position === "blower" && p.diameter !== undefined && same(p.diameter, chosen));
+  const hasChosenOnShelf = candidates.length === 1 || candidates.some((p) => p.partNumber === variant);
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-6" aria-label="Recommendation">
@@ -128,6 +135,39 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
               </p>
             ) : null}
           </div>
+          {ribCounts.length > 1 ? (
+            <div className="flex flex-col gap-1">
+              <label htmlFor="f-ribs" className="text-sm font-medium">
+                Belt
+              </label>
+              <select id="f-ribs" value={ribs} onChange={(e) => (setRibs(Number(e.target.value)), setVariant(""))} className="rounded-md border border-line bg-panel px-2 py-1.5 text-sm">
+                {ribCounts.map((n) => (
+                  <option key={n} value={n}>
+                    {n}-rib
+                  </option>
+                ))}
+              </select>
+            </div>
+          ) : null}
+          {candidates.length > 1 ? (
+            <div className="flex flex-col gap-1">
+              <label htmlFor="f-variant" className="text-sm font-medium">
+                Which one?
+              </label>
+              <select id="f-variant" value={variant} onChange={(e) => setVariant(e.target.value)} className="rounded-md border border-line bg-panel px-2 py-1.5 text-sm">
+                <option value="">Choose the pulley…</option>
+                {candidates.map((p) => (
+                  <option key={p.partNumber} value={p.partNumber}>
+                    {p.partNumber}, {price(p.price)}, {p.stock > 0 ? `${p.stock} in stock` : "out of stock: it will be ordered in"}
+                  </option>
+                ))}
+              </select>
+            </div>
+          ) : candidates.length === 1 ? (
+            <p className="text-sm text-muted" data-testid="chosen-stock">
+              {candidates[0].partNumber}: {candidates[0].stock > 0 ? `${candidates[0].stock} in stock` : "out of stock: it will be ordered in"}
+            </p>
+          ) : null}
           <Button type="button" variant="secondary" onClick={addChosenPulley} disabled={!hasChosenOnShelf}>
             Add this pulley to the parts
           </Button>
@@ -142,7 +182,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
           errors={errors.targetRpm?.message}
           hint={`The engine speed the customer was sold the boost at; the sheet's headline is read there. Empty: redline (${Math.round(combination.spec.engine.redlineRpm)} rpm).`}
         />
-        <PulleyHelp spec={combination.spec} shelf={pulleys} system={unitSystem} onChoose={choose} />
+        <PulleyHelp spec={combination.spec} shelf={fitting} system={unitSystem} onChoose={choose} />
       </section>
 
       <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
