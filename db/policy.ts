@@ -35,3 +35,8 @@ export const canManageUsers = (a: Actor) => a.role === "admin";
 export function assert(allowed: boolean, message?: string): asserts allowed {
   if (!allowed) throw new ForbiddenError(message);
 }
+
+/** Orders: the shop's staff follow them; refunds (money back) only the admin and sales. */
+export const canSeeOrders = isShopStaff;
+export const canRefundOrders = (a: Actor) => a.role === "admin" || a.role === "sales";
+export const canEditShopTerms = (a: Actor) => a.role === "admin";

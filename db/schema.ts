@@ -30,6 +30,17 @@ export const recommendationStatusEnum = pgEnum("recommendation_status", [
   "declined",
 ]);
 
+export const depositKindEnum = pgEnum("deposit_kind", ["percent", "fixed"]);
+export const orderStatusEnum = pgEnum("order_status", [
+  "awaiting-payment",
+  "paid",
+  "parts-reserved",
+  "back-ordered",
+  "fitted",
+  "cancelled",
+  "refunded",
+]);
+
 const created = () => timestamp("created_at", { withTimezone: true }).notNull().defaultNow();
 const updated = () => timestamp("updated_at", { withTimezone: true }).notNull().defaultNow();
 
@@ -248,8 +259,12 @@ export const recommendations = pgTable(
     authorId: uuid("author_id")
       .notNull()
       .references(() => users.id, { onDelete: "cascade" }),
+    /** The customer-facing title; the combination's internal name never reaches the customer. */
+    title: text("title").notNull().default(""),
     customerName: text("customer_name").notNull(),
     customerEmail: text("customer_email"),
+    /** The engine speed (rpm) the boost was sold at; the headline figures are read there. */
+    targetRpm: doublePrecision("target_rpm"),
     vehicleNotes: text("vehicle_notes").notNull().default(""),
     notes: text("notes").notNull().default(""),
     blowerPulleyDiameter: doublePrecision("blower_pulley_diameter").notNull(),
@@ -319,6 +334,109 @@ export const shopSettings = pgTable("shop_settings", {
   phone: text("phone").notNull().default(""),
   email: text("email").notNull().default(""),
   website: text("website").notNull().default(""),
+  /** ISO 4217 code of every price the shop shows and charges. */
+  currency: text("currency").notNull().default("USD"),
+  /** The deposit asked when a customer accepts a sheet: a percentage of its total, or a fixed amount. */
+  depositKind: depositKindEnum("deposit_kind").notNull().default("percent"),
+  depositValue: numeric("deposit_value", { precision: 12, scale: 2 }).notNull().default("25"),
+});
+
+/**
+ * What the customer was sent: a frozen copy of the sheet at each send. Share links name one
+ * version, so later edits never change what a link shows; staff can revoke a version.
+ */
+export const sheetVersions = pgTable(
+  "sheet_versions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    recommendationId: uuid("recommendation_id")
+      .notNull()
+      .references(() => recommendations.id, { onDelete: "cascade" }),
+    version: integer("version").notNull(),
+    snapshot: jsonb("snapshot").notNull(),
+    sentAt: timestamp("sent_at", { withTimezone: true }).notNull().defaultNow(),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+    declinedAt: timestamp("declined_at", { withTimezone: true }),
+    declineReason: text("decline_reason"),
+  },
+  (t) => [uniqueIndex("sheet_versions_number_idx").on(t.recommendationId, t.version)],
+);
+
+/** A customer's order: one accepted sheet version, its deposit, and where it stands. */
+export const orders = pgTable(
+  "orders",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    recommendationId: uuid("recommendation_id")
+      .notNull()
+      .references(() => recommendations.id, { onDelete: "cascade" }),
+    sheetVersionId: uuid("sheet_version_id")
+      .notNull()
+      .references(() => sheetVersions.id, { onDelete: "cascade" }),
+    customerName: text("customer_name").notNull(),
+    customerEmail: text("customer_email"),
+    currency: text("currency").notNull(),
+    total: numeric("total", { precision: 12, scale: 2 }).notNull(),
+    deposit: numeric("deposit", { precision: 12, scale: 2 }).notNull(),
+    status: orderStatusEnum("status").notNull().default("awaiting-payment"),
+    checkoutSessionId: text("checkout_session_id").unique(),
+    paymentIntentId: text("payment_intent_id"),
+    refundId: text("refund_id"),
+    paidAt: timestamp("paid_at", { withTimezone: true }),
+    fittedAt: timestamp("fitted_at", { withTimezone: true }),
+    fittedDatalogId: uuid("fitted_datalog_id").references(() => datalogs.id, { onDelete: "set null" }),
+    cancelledAt: timestamp("cancelled_at", { withTimezone: true }),
+    createdAt: created(),
+    updatedAt: updated(),
+  },
+  (t) => [
+    index("orders_status_idx").on(t.status, t.updatedAt),
+    // One live order per sent version: a second checkout reuses it.
+    uniqueIndex("orders_version_idx").on(t.sheetVersionId),
+  ],
+);
+
+/** Shelf stock held for an order, per part: what was taken off the shelf and what is back-ordered. */
+export const orderReservations = pgTable(
+  "order_reservations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    partNumber: text("part_number").notNull(),
+    description: text("description").notNull(),
+    quantity: integer("quantity").notNull(),
+    reserved: integer("reserved").notNull(),
+    backOrdered: integer("back_ordered").notNull(),
+    releasedAt: timestamp("released_at", { withTimezone: true }),
+  },
+  (t) => [index("order_reservations_order_idx").on(t.orderId)],
+);
+
+/** The payment trail of an order: what happened, when, and by whom or which event. */
+export const orderEvents = pgTable(
+  "order_events",
+  {
+    id: bigserial("id", { mode: "number" }).primaryKey(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    kind: text("kind").notNull(),
+    message: text("message").notNull(),
+    amount: numeric("amount", { precision: 12, scale: 2 }),
+    reference: text("reference"),
+    actorId: uuid("actor_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: created(),
+  },
+  (t) => [index("order_events_order_idx").on(t.orderId, t.id)],
+);
+
+/** Payment-service events already handled, so a replayed or duplicated delivery changes nothing. */
+export const paymentEvents = pgTable("payment_events", {
+  eventId: text("event_id").primaryKey(),
+  type: text("type").notNull(),
+  receivedAt: timestamp("received_at", { withTimezone: true }).notNull().defaultNow(),
 });
 
 export type User = typeof users.$inferSelect;
@@ -331,4 +449,9 @@ export type DatalogRow = typeof datalogs.$inferSelect;
 export type DatalogPointRow = typeof datalogPoints.$inferSelect;
 export type RecommendationRow = typeof recommendations.$inferSelect;
 export type LessonRow = typeof lessons.$inferSelect;
+export type SheetVersionRow = typeof sheetVersions.$inferSelect;
+export type OrderRow = typeof orders.$inferSelect;
+export type OrderStatus = (typeof orderStatusEnum.enumValues)[number];
+export type OrderReservationRow = typeof orderReservations.$inferSelect;
+export type OrderEventRow = typeof orderEvents.$inferSelect;
 export type LessonStepRow = typeof lessonSteps.$inferSelect;

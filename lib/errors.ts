@@ -27,3 +27,10 @@ export class FieldError extends Error {
   readonly status = 400;
   constructor(readonly field: string, message: string) { super(message); }
 }
+
+/** Another service the request needed failed (502) or is not set up (503); nothing was changed. */
+export class UpstreamError extends Error {
+  constructor(message: string, readonly status: 502 | 503 = 502) {
+    super(message);
+  }
+}

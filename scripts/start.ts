@@ -1,5 +1,5 @@
 // `npm start`: private PostgreSQL (unless DATABASE_URL) → migrate → demo seed → mail fake →
-// production build → serve. Ctrl-C stops the app, the mail fake and the database cleanly.
+// payment fake → production build → serve. Ctrl-C stops the app, the fakes and the database cleanly.
 import crypto from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
@@ -8,6 +8,7 @@ import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from "../db/seed";
 import { startMailFake, type MailFake } from "./mail-fake";
+import { startPaymentFake, type PaymentFake } from "./payment-fake";
 import { buildNext, ensureChromium, nextEnv, root, startNext, stopGroup } from "./proc";
 
 const dataDir = path.resolve(process.env.PW_DATA_DIR ?? path.join(root, ".data"));
@@ -17,6 +18,7 @@ const publicUrl = process.env.NEXTAUTH_URL ?? `http://localhost:${port}`;
 
 let cluster: Cluster | undefined;
 let mail: MailFake | undefined;
+let payments: PaymentFake | undefined;
 let app: ReturnType<typeof startNext> | undefined;
 let stopping = false;
 
@@ -27,6 +29,7 @@ async function shutdown(code = 0) {
   stopGroup(app);
   await new Promise((r) => setTimeout(r, 500));
   await mail?.stop();
+  await payments?.stop();
   cluster?.stop();
   console.log("Stopped. Your data is kept in", cluster ? cluster.dir : "your database");
   process.exit(code);
@@ -82,6 +85,14 @@ async function main() {
     console.log(`Local mail fake: SMTP ${mail.smtpUrl}; admins read it under Mailbox.`);
   }
 
+  let paymentEnv: Record<string, string> = {};
+  if (!process.env.STRIPE_SECRET_KEY) {
+    const appHost = host === "0.0.0.0" || host === "::" ? "127.0.0.1" : host;
+    payments = await startPaymentFake({ port: Number(process.env.PW_PAYMENT_PORT ?? 2527), webhookUrl: `http://${appHost}:${port}/api/payments/webhook` });
+    paymentEnv = { STRIPE_SECRET_KEY: payments.secretKey, STRIPE_WEBHOOK_SECRET: payments.webhookSecret, STRIPE_API_URL: payments.url };
+    console.log(`Local payment fake: ${payments.url} (no real money moves; set STRIPE_SECRET_KEY to use the real service).`);
+  }
+
   try {
     ensureChromium("PDF recommendation sheets");
   } catch (err) {
@@ -97,6 +108,7 @@ async function main() {
     SHARE_SECRET: keptSecret("SHARE_SECRET", "share-secret"),
     SMTP_URL: smtpUrl,
     ...(mailFakeUrl ? { MAIL_FAKE_URL: mailFakeUrl } : {}),
+    ...paymentEnv,
   });
   if (process.env.PW_SKIP_BUILD !== "1") {
     console.log("Building the app (next build) …");

@@ -1,4 +1,4 @@
-// `npm test`: lint and type-check, then a throwaway PostgreSQL cluster and mail fake for this run,
+// `npm test`: lint and type-check, then a throwaway PostgreSQL cluster, mail and payment fakes for this run,
 // unit + property + database integration tests, a production build served on loopback, HTTP and
 // browser (Chromium) tests against it; then it stops everything it started and prints one summary.
 //
@@ -17,6 +17,7 @@ import { connect } from "../db/connect";
 import { runMigrations } from "../db/migrate";
 import { seedDemo } from "../db/seed";
 import { startMailFake, type MailFake } from "./mail-fake";
+import { startPaymentFake, type PaymentFake } from "./payment-fake";
 import { buildNext, ensureChromium, nextEnv, root, run, startNext, stopGroup, waitForHttp, type Env } from "./proc";
 
 const argv = process.argv.slice(2);
@@ -33,6 +34,7 @@ const problems: string[] = [];
 
 let cluster: Cluster | undefined;
 let mail: MailFake | undefined;
+let payments: PaymentFake | undefined;
 let app: ReturnType<typeof startNext> | undefined;
 const workDir = fs.mkdtempSync(path.join(os.tmpdir(), "pw-test-"));
 // The database runs as the postgres user when we are root: it must be able to reach its folder.
@@ -41,6 +43,7 @@ fs.chmodSync(workDir, 0o711);
 async function cleanup() {
   stopGroup(app);
   await mail?.stop().catch(() => {});
+  await payments?.stop().catch(() => {});
   if (cluster) destroyCluster(cluster);
   fs.rmSync(workDir, { recursive: true, force: true });
 }
@@ -125,6 +128,7 @@ async function main() {
     mail = await startMailFake({ smtpPort: await freePort(), httpPort: await freePort() });
     const port = await freePort();
     const appUrl = `http://127.0.0.1:${port}`;
+    payments = await startPaymentFake({ port: await freePort(), webhookUrl: `${appUrl}/api/payments/webhook` });
     const secret = crypto.randomBytes(32).toString("base64url");
     const env = nextEnv({
       NEXT_DIST_DIR: distDir,
@@ -134,6 +138,9 @@ async function main() {
       NEXTAUTH_SECRET: secret,
       SMTP_URL: mail.smtpUrl,
       MAIL_FAKE_URL: mail.inboxUrl,
+      STRIPE_SECRET_KEY: payments.secretKey,
+      STRIPE_WEBHOOK_SECRET: payments.webhookSecret,
+      STRIPE_API_URL: payments.url,
     });
     if (!flags.has("--skip-build") || !fs.existsSync(path.join(root, distDir, "BUILD_ID"))) {
       console.log(`\n▶ next build (into ${distDir})`);
@@ -147,7 +154,7 @@ async function main() {
     app = startNext({ port, host: "127.0.0.1", env, quiet: true });
     await waitForHttp(`${appUrl}/api/health`);
     console.log(`\n▶ HTTP and browser tests against ${appUrl}`);
-    await vitest("vitest.e2e.config.ts", { ...testEnv, PW_BASE_URL: appUrl, MAIL_FAKE_URL: mail.inboxUrl, DATABASE_URL: e2eUrl, NEXT_DIST_DIR: distDir }, "e2e");
+    await vitest("vitest.e2e.config.ts", { ...testEnv, PW_BASE_URL: appUrl, MAIL_FAKE_URL: mail.inboxUrl, PW_PAYMENT_FAKE_URL: payments.url, DATABASE_URL: e2eUrl, NEXT_DIST_DIR: distDir }, "e2e");
   }
 }
 

@@ -2,8 +2,11 @@ import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { HeaderBar } from "@/components/ui/header-bar";
 import { NavLinks, type NavItem } from "@/components/nav-links";
+import { CurrencyProvider } from "@/components/price";
 import { SignOutButton } from "@/components/sign-out-button";
 import { ThemeSwitch } from "@/components/theme-switch";
+import { getDb } from "@/db/client";
+import { getShopTerms } from "@/db/repo/shop";
 import type { Role } from "@/db/schema";
 
 const ALL: Role[] = ["member", "tuner", "sales", "instructor", "admin"];
@@ -13,6 +16,7 @@ const NAV: (NavItem & { roles: Role[] })[] = [
   { href: "/datalogs", label: "Datalogs", roles: ALL },
   { href: "/shelf", label: "Parts shelf", roles: ALL },
   { href: "/recommendations", label: "Recommendations", roles: ["sales", "tuner", "admin"] },
+  { href: "/orders", label: "Orders", roles: ["sales", "tuner", "admin"] },
   { href: "/lessons", label: "Lessons", roles: ALL },
   { href: "/admin/users", label: "Accounts", roles: ["admin"] },
   { href: "/admin/mail", label: "Mailbox", roles: ["admin"] },
@@ -21,7 +25,7 @@ const NAV: (NavItem & { roles: Role[] })[] = [
 const roleNames: Record<Role, string> = { member: "Member", tuner: "Tuner", sales: "Sales", instructor: "Instructor", admin: "Admin" };
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
-  const user = await requirePageUser();
+  const [user, terms] = await Promise.all([requirePageUser(), getShopTerms(getDb())]);
   const items = NAV.filter((n) => n.roles.includes(user.role)).map(({ href, label }) => ({ href, label }));
   return (
     <div className="flex min-h-screen flex-col">
@@ -36,7 +40,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
         </div>
       </HeaderBar>
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
-        {children}
+        <CurrencyProvider currency={terms.currency}>{children}</CurrencyProvider>
       </main>
     </div>
   );

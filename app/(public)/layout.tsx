@@ -5,8 +5,8 @@ import { ThemeSwitch } from "@/components/theme-switch";
 export default function PublicLayout({ children }: { children: React.ReactNode }) {
   return (
     <div className="flex min-h-screen flex-col">
-      <HeaderBar className="no-print border-b border-line bg-panel" innerClassName="mx-auto flex max-w-5xl items-center justify-between px-4 py-3" logoHref="/" logoLabel="Pulleywright home">
-        <nav aria-label="Account" className="flex items-center gap-4 text-sm">
+      <HeaderBar className="no-print border-b border-line bg-panel" innerClassName="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-2 px-4 py-3" logoHref="/" logoLabel="Pulleywright home">
+        <nav aria-label="Account" className="flex flex-wrap items-center gap-x-4 gap-y-2 text-sm">
           <ThemeSwitch />
           <Link href="/sign-in" className="hover:underline">
             Sign in

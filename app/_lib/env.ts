@@ -13,6 +13,10 @@ const schema = z.object({
   MAIL_FAKE_URL: z.string().url().optional(),
   /** Secret for signed share links; defaults to a key derived from the auth secret. */
   SHARE_SECRET: z.string().min(16).optional(),
+  /** The payment service: secret API key, webhook signing secret, and its address (the local fake by default). */
+  STRIPE_SECRET_KEY: z.string().min(1).optional(),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1).optional(),
+  STRIPE_API_URL: z.string().url().optional(),
   /** How many proxies in front of the app append to X-Forwarded-For; 0 = use the socket address. */
   TRUSTED_PROXY_HOPS: z.coerce.number().int().min(0).max(5).default(0),
   /** Send Strict-Transport-Security; on by default when NEXTAUTH_URL is https. */

@@ -1,6 +1,6 @@
 import { ZodError } from "zod";
 import { isDatabaseUnavailable } from "@/db/errors";
-import { ConflictError, FieldError, ForbiddenError, NotFoundError, UnauthorizedError } from "@/lib/errors";
+import { ConflictError, FieldError, ForbiddenError, NotFoundError, UnauthorizedError, UpstreamError } from "@/lib/errors";
 
 /** What a client sees of a failure: a status, a message safe to show, and per-field messages (dotted paths). */
 export type Failure = { status: number; message: string; fieldErrors?: Record<string, string[]>; details?: Record<string, unknown> };
@@ -31,6 +31,7 @@ export function toFailure(err: unknown): Failure {
   if (err instanceof ForbiddenError) return { status: 403, message: err.message };
   if (err instanceof NotFoundError) return { status: 404, message: err.message };
   if (err instanceof ConflictError) return { status: 409, message: err.message, details: err.details };
+  if (err instanceof UpstreamError) return { status: err.status, message: err.message };
   // PostgreSQL's "data exception" class (22…): a value it cannot store or read, such as a NUL
   // character or a malformed id that got past the schemas. The request is at fault, not the server.
   const pgCode = (err as { code?: unknown; cause?: { code?: unknown } })?.code ?? (err as { cause?: { code?: unknown } })?.cause?.code;

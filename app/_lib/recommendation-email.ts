@@ -2,8 +2,9 @@
 // body with the same content. Every piece of text a person typed is escaped in the HTML.
 import { SAFETY_NOTICE, type UnitSystem } from "@/calc";
 import { quantityText } from "@/lib/units/format";
-import { formatMoney } from "@/lib/shelf/rules";
+import { defaultSheetTitle } from "@/lib/recommendations/rules";
 import type { ShopDetails } from "@/db/repo/shop";
+import { formatPrice } from "@/lib/orders/money";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
 import type { SheetRecord } from "@/components/recommendation/sheet-view";
 
@@ -16,13 +17,16 @@ export function escapeHtml(s: string): string {
 
 export type SheetEmail = { subject: string; text: string; html: string };
 
-export function buildSheetEmail(opts: { sheet: SheetRecord; shop: ShopDetails; unitSystem: UnitSystem; link: string; expiresAt: Date }): SheetEmail {
-  const { sheet, shop, unitSystem, link, expiresAt } = opts;
-  const f = computeSheet(sheet.spec).figures;
+export function buildSheetEmail(opts: { sheet: SheetRecord; shop: ShopDetails; currency: string; unitSystem: UnitSystem; link: string; expiresAt: Date }): SheetEmail {
+  const { sheet, shop, currency, unitSystem, link, expiresAt } = opts;
+  const f = computeSheet(sheet.spec, sheet.targetRpm).figures;
+  const formatMoney = (a: string) => formatPrice(a, currency);
+  const title = sheet.title || defaultSheetTitle(sheet.customerName);
   const pulley = quantityText("length-small", f.blowerPulleyDiameter, unitSystem);
   const until = expiresAt.toLocaleDateString("en-GB", { year: "numeric", month: "long", day: "numeric" });
   const summary = [
     `Recommended blower pulley: ${pulley}`,
+    f.headline ? `Predicted boost: ${quantityText("pressure", f.headline.boostGauge, unitSystem)} at ${Math.round(f.headline.rpm)} rpm${f.headline.sold ? "" : " (redline)"}` : null,
     f.peakPower ? `Predicted peak net power: ${quantityText("power", f.peakPower.netPower, unitSystem)} at ${Math.round(f.peakPower.rpm)} rpm, with ${quantityText("pressure", f.peakPower.boostGauge, unitSystem)} boost` : null,
     f.peakTorque ? `Predicted peak net torque: ${quantityText("torque", f.peakTorque.torque, unitSystem)} at ${Math.round(f.peakTorque.rpm)} rpm` : null,
   ].filter((s): s is string => s !== null);
@@ -32,7 +36,7 @@ export function buildSheetEmail(opts: { sheet: SheetRecord; shop: ShopDetails; u
   const text = [
     `Hello ${sheet.customerName},`,
     "",
-    `here is our recommendation for ${sheet.combinationName}.`,
+    `here is our recommendation: ${title}.`,
     "",
     ...summary,
     "",
@@ -50,7 +54,7 @@ export function buildSheetEmail(opts: { sheet: SheetRecord; shop: ShopDetails; u
   const e = escapeHtml;
   const html = `<!doctype html><html><body style="font-family:sans-serif;color:#111;line-height:1.45">
 <p>Hello ${e(sheet.customerName)},</p>
-<p>here is our recommendation for ${e(sheet.combinationName)}.</p>
+<p>here is our recommendation: ${e(title)}.</p>
 <ul>${summary.map((s) => `<li>${e(s)}</li>`).join("")}</ul>
 ${
   sheet.parts.length
@@ -65,5 +69,5 @@ ${sheet.notes ? `<p style="white-space:pre-line">${e(sheet.notes)}</p>` : ""}
 <p>${shopLines.map(e).join("<br>")}</p>
 </body></html>`;
 
-  return { subject: `Your blower pulley recommendation from ${shop.name}`, text, html };
+  return { subject: `Your recommendation from ${shop.name}: ${title}`, text, html };
 }

@@ -8,10 +8,10 @@ import { verifyShareToken, type ShareVerdict } from "@/app/_lib/share-link";
 import { getDb } from "@/db/client";
 import { NotFoundError } from "@/lib/errors";
 import { getRecommendation, getSharedRecommendation, type Recommendation } from "@/db/repo/recommendations";
-import { getShopDetails, type ShopDetails } from "@/db/repo/shop";
+import { getShopDetails, getShopTerms, type ShopDetails } from "@/db/repo/shop";
 import { toActor } from "@/db/repo/users";
 
-export type Loaded = { ok: true; sheet: Recommendation; shop: ShopDetails; unitSystem: UnitSystem; expiresAt?: Date };
+export type Loaded = { ok: true; sheet: Recommendation; shop: ShopDetails; currency: string; unitSystem: UnitSystem; expiresAt?: Date };
 export type Refused = { ok: false; reason: Extract<ShareVerdict, { ok: false }>["reason"] | "gone" | "revoked" };
 
 export const unitsParam = (v: unknown): UnitSystem => (v === "metric" ? "metric" : "imperial");
@@ -23,10 +23,10 @@ export async function loadByToken(token: string, units: unknown, id?: string): P
   if (id !== undefined && v.recommendationId !== id) return { ok: false, reason: "forged" };
   const db = getDb();
   try {
-    const [sheet, shop] = await Promise.all([getSharedRecommendation(db, v), getShopDetails(db)]);
+    const [sheet, shop, terms] = await Promise.all([getSharedRecommendation(db, v), getShopDetails(db), getShopTerms(db)]);
     // The shop stopped the links sent before (the sheet's share version moved on).
     if (sheet.shareVersion !== v.version) return { ok: false, reason: "revoked" };
-    return { ok: true, sheet, shop, unitSystem: unitsParam(units), expiresAt: v.expiresAt };
+    return { ok: true, sheet, shop, currency: terms.currency, unitSystem: unitsParam(units), expiresAt: v.expiresAt };
   } catch (e) {
     if (e instanceof NotFoundError) return { ok: false, reason: "gone" };
     throw e;
@@ -38,8 +38,8 @@ export async function loadForStaff(id: string): Promise<Loaded> {
   const user = await requirePageUser(["sales", "tuner", "admin"]);
   const db = getDb();
   try {
-    const [sheet, shop] = await Promise.all([getRecommendation(db, toActor(user), id), getShopDetails(db)]);
-    return { ok: true, sheet, shop, unitSystem: user.unitSystem };
+    const [sheet, shop, terms] = await Promise.all([getRecommendation(db, toActor(user), id), getShopDetails(db), getShopTerms(db)]);
+    return { ok: true, sheet, shop, currency: terms.currency, unitSystem: user.unitSystem };
   } catch (e) {
     if (e instanceof NotFoundError) notFound();
     throw e;

@@ -49,8 +49,10 @@ export function verifyShareToken(token: string, secret = shareSecret(), now = ne
   if (parts.length !== 4) return { ok: false, reason: "malformed" };
   const [id, versionText, expText, sig] = parts;
   if (!UUID.test(id) || !/^\d{1,9}$/.test(versionText) || !/^\d{1,12}$/.test(expText) || !/^[A-Za-z0-9_-]{43}$/.test(sig)) return { ok: false, reason: "malformed" };
-  const expected = Buffer.from(sign(`${id}.${versionText}.${expText}`, secret), "base64url");
-  const given = Buffer.from(sig, "base64url");
+  // Compared as text: decoding first would accept other spellings of the same bytes (the last
+  // character of a 43-character base64url string carries two unused bits).
+  const expected = Buffer.from(sign(`${id}.${versionText}.${expText}`, secret), "ascii");
+  const given = Buffer.from(sig, "ascii");
   if (given.length !== expected.length || !crypto.timingSafeEqual(given, expected)) return { ok: false, reason: "forged" };
   const expiresAt = new Date(Number(expText) * 1000);
   if (expiresAt.getTime() <= now.getTime()) return { ok: false, reason: "expired" };

@@ -121,13 +121,13 @@ export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onRpm, onA
           <ul className="text-sm">
             {(
               [
-                ["below", "Nearest stocked, smaller (more boost)", outcome.result.below],
-                ["above", "Nearest stocked, larger (less boost)", outcome.result.above],
+                ["below", "Nearest in stock, smaller (more boost)", outcome.result.below],
+                ["above", "Nearest in stock, larger (less boost)", outcome.result.above],
               ] as const
             ).map(([side, label, s]) => (
               <li key={side} data-testid={`finder-${side}`} data-diameter-m={s?.diameter ?? ""}>
                 {label}:{" "}
-                {s ? `${quantityText("length-small", s.diameter, system)}, ${quantityText("pressure", s.point.boostGauge, system)}` : stock.length ? "none on the shelf" : "the parts shelf has no blower pulleys"}
+                {s ? `${quantityText("length-small", s.diameter, system)}, ${quantityText("pressure", s.point.boostGauge, system)}` : stock.length ? "none in stock on that side" : "no blower pulley is in stock"}
               </li>
             ))}
           </ul>

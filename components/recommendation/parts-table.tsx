@@ -5,7 +5,7 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { TotalFoot } from "@/components/ui/data-table";
 import type { recommendationInputSchema } from "@/lib/recommendations/rules";
-import { formatMoney } from "@/lib/shelf/rules";
+import { usePrice } from "@/components/price";
 
 type FormIn = z.input<typeof recommendationInputSchema>;
 type FormOut = z.output<typeof recommendationInputSchema>;
@@ -21,6 +21,7 @@ type PartsTableProps = {
 };
 
 export function PartsTable({ form, lines, watched, amounts, total, lineError }: PartsTableProps) {
+  const price = usePrice();
   return (
     <table className="w-full text-sm">
       <caption className="sr-only">Parts list</caption>
@@ -105,7 +106,7 @@ export function PartsTable({ form, lines, watched, amounts, total, lineError }: 
                   </p>
                 ) : null}
               </td>
-              <td className="py-1 text-right num">{amounts[i] == null ? "–" : formatMoney(amounts[i]!)}</td>
+              <td className="py-1 text-right num">{amounts[i] == null ? "–" : price(amounts[i]!)}</td>
               <td className="py-1 text-right">
                 <Button type="button" variant="ghost" onClick={() => lines.remove(i)} aria-label={`Remove line ${i + 1}`}>
                   Remove
@@ -116,7 +117,7 @@ export function PartsTable({ form, lines, watched, amounts, total, lineError }: 
         })}
       </tbody>
       <TotalFoot labelSpan={3} testId="form-total" trailing={1}>
-        {total === null ? "–" : formatMoney(total)}
+        {total === null ? "–" : price(total)}
       </TotalFoot>
     </table>
   );

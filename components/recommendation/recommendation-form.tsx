@@ -13,7 +13,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { recommendationInputSchema } from "@/lib/recommendations/rules";
-import { formatMoney, lineTotal, sumMoney } from "@/lib/shelf/rules";
+import { usePrice } from "@/components/price";
+import { lineTotal, sumMoney } from "@/lib/shelf/rules";
 import { PulleyHelp } from "@/components/pulleys/pulley-help";
 import { PartsTable } from "./parts-table";
 import type { ShelfPulley } from "@/lib/planner/compute";
@@ -37,6 +38,7 @@ const same = (a: number, b: number) => Math.abs(a - b) < 1e-6;
 
 export function RecommendationForm({ mode, id, combination, pulleys, parts, unitSystem, initial }: RecommendationFormProps) {
   const router = useRouter();
+  const price = usePrice();
   const [pick, setPick] = useState("");
   const form = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(recommendationInputSchema),
@@ -50,9 +52,9 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
   const size = (m: number) => `${fromSI("length-small", m, unitSystem).toFixed(unitSystem === "metric" ? 1 : 2)} ${unit}`;
 
   const amounts = watched.map((l) => {
-    const price = String(l?.unitPrice ?? "").trim();
+    const unit = String(l?.unitPrice ?? "").trim();
     const qty = Number(l?.quantity);
-    return MONEY.test(price) && Number.isInteger(qty) && qty >= 1 && qty <= 999 ? lineTotal(price, qty) : null;
+    return MONEY.test(unit) && Number.isInteger(qty) && qty >= 1 && qty <= 999 ? lineTotal(unit, qty) : null;
   });
   const total = amounts.every((a) => a !== null) ? sumMoney(amounts as string[]) : null;
 
@@ -68,10 +70,17 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
     lines.append({ partNumber: p.partNumber, description: p.description, unitPrice: p.price, quantity: 1 });
   }
 
+  // Pulleys that fit the customer's belt (rib count); the ladder, finder and "add" use only these.
+  const ribCounts = [...new Set(pulleys.map((p) => p.ribCount))].sort((a, b) => b - a);
+  const [ribs, setRibs] = useState(ribCounts[0] ?? 0);
+  const fitting = pulleys.filter((p) => p.ribCount === ribs);
+  const candidates = fitting.filter((p) => same(p.diameter, chosen));
+  const [variant, setVariant] = useState("");
+
+  /** Adds the chosen size; when the shelf holds several variants of it, the one picked in "Which one?". */
   function addChosenPulley() {
-    const candidates = parts.filter((p) => p.position === "blower" && p.diameter !== undefined && same(p.diameter, chosen));
-    const best = candidates.find((p) => p.stock > 0) ?? candidates[0];
-    if (best) addShelfPart(best.partNumber);
+    const pick = candidates.length === 1 ? candidates[0] : candidates.find((p) => p.partNumber === variant);
+    if (pick) addShelfPart(pick.partNumber);
   }
 
   const submit = form.handleSubmit(async (values) => {
@@ -91,7 +100,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
   });
 
   const lineError = (i: number, k: "description" | "unitPrice" | "quantity" | "partNumber") => errors.parts?.[i]?.[k]?.message as string | undefined;
-  const hasChosenOnShelf = parts.some((p) => p.position === "blower" && p.diameter !== undefined && same(p.diameter, chosen));
+  const hasChosenOnShelf = candidates.length === 1 || candidates.some((p) => p.partNumber === variant);
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-6" aria-label="Recommendation">
@@ -126,15 +135,65 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
               </p>
             ) : null}
           </div>
+          {ribCounts.length > 1 ? (
+            <div className="flex flex-col gap-1">
+              <label htmlFor="f-ribs" className="text-sm font-medium">
+                Belt
+              </label>
+              <select id="f-ribs" value={ribs} onChange={(e) => (setRibs(Number(e.target.value)), setVariant(""))} className="rounded-md border border-line bg-panel px-2 py-1.5 text-sm">
+                {ribCounts.map((n) => (
+                  <option key={n} value={n}>
+                    {n}-rib
+                  </option>
+                ))}
+              </select>
+            </div>
+          ) : null}
+          {candidates.length > 1 ? (
+            <div className="flex flex-col gap-1">
+              <label htmlFor="f-variant" className="text-sm font-medium">
+                Which one?
+              </label>
+              <select id="f-variant" value={variant} onChange={(e) => setVariant(e.target.value)} className="rounded-md border border-line bg-panel px-2 py-1.5 text-sm">
+                <option value="">Choose the pulley…</option>
+                {candidates.map((p) => (
+                  <option key={p.partNumber} value={p.partNumber}>
+                    {p.partNumber}, {price(p.price)}, {p.stock > 0 ? `${p.stock} in stock` : "out of stock: it will be ordered in"}
+                  </option>
+                ))}
+              </select>
+            </div>
+          ) : candidates.length === 1 ? (
+            <p className="text-sm text-muted" data-testid="chosen-stock">
+              {candidates[0].partNumber}: {candidates[0].stock > 0 ? `${candidates[0].stock} in stock` : "out of stock: it will be ordered in"}
+            </p>
+          ) : null}
           <Button type="button" variant="secondary" onClick={addChosenPulley} disabled={!hasChosenOnShelf}>
             Add this pulley to the parts
           </Button>
         </div>
-        <PulleyHelp spec={combination.spec} shelf={pulleys} system={unitSystem} onChoose={choose} />
+        <Field
+          label="Boost quoted at"
+          unit="rpm"
+          type="number"
+          inputMode="numeric"
+          className="max-w-xs"
+          {...form.register("targetRpm", { setValueAs: (v) => (v === "" || v === null || v === undefined ? null : Number(v)) })}
+          errors={errors.targetRpm?.message}
+          hint={`The engine speed the customer was sold the boost at; the sheet's headline is read there. Empty: redline (${Math.round(combination.spec.engine.redlineRpm)} rpm).`}
+        />
+        <PulleyHelp spec={combination.spec} shelf={fitting} system={unitSystem} onChoose={choose} />
       </section>
 
       <section className="flex flex-col gap-3 rounded-md border border-line bg-panel p-4">
         <h2 className="text-lg font-semibold">2. Customer and vehicle</h2>
+        <Field
+          label="Title on the sheet"
+          autoComplete="off"
+          {...form.register("title")}
+          errors={errors.title?.message}
+          hint="What the customer reads at the top of the sheet, the e-mail and the link (the combination's own name stays internal). Empty: “Blower pulley recommendation for” the customer's name."
+        />
         <div className="grid gap-3 sm:grid-cols-2">
           <Field label="Customer name" autoComplete="off" {...form.register("customerName")} errors={errors.customerName?.message} />
           <Field label="Customer e-mail" type="email" autoComplete="off" {...form.register("customerEmail")} errors={errors.customerEmail?.message} hint="Needed to send the sheet." />
@@ -155,7 +214,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
               <option value="">Choose a part…</option>
               {parts.map((p) => (
                 <option key={p.partNumber} value={p.partNumber}>
-                  {p.partNumber}: {p.description}, {formatMoney(p.price)}
+                  {p.partNumber}: {p.description}, {price(p.price)}
                   {p.stock === 0 ? " (out of stock)" : ""}
                 </option>
               ))}

@@ -9,10 +9,11 @@ import { EmptyRow } from "@/components/ui/data-table";
 import { Pager } from "@/components/ui/pager";
 import { SelectField } from "@/components/ui/select-field";
 import { Notice } from "@/components/ui/notice";
-import { formatMoney } from "@/lib/shelf/rules";
+import { usePrice } from "@/components/price";
 
 type Row = {
   id: string;
+  title: string;
   customerName: string;
   customerEmail: string | null;
   status: string;
@@ -26,6 +27,7 @@ type Row = {
 };
 
 export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) {
+  const price = usePrice();
   const [search, setSearch] = useState("");
   const [status, setStatus] = useState("");
   const [page, setPage] = useState(1);
@@ -47,7 +49,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
             id="rec-search"
             type="search"
             value={search}
-            placeholder="Customer or combination"
+            placeholder="Customer, title or combination"
             onChange={(e) => {
               setSearch(e.target.value);
               setPage(1);
@@ -90,6 +92,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
                   <Link href={`/recommendations/${r.id}`} className="font-medium underline">
                     {r.customerName}
                   </Link>
+                  {r.title ? <span className="block text-xs">{r.title}</span> : null}
                   {r.customerEmail ? <span className="block text-xs text-muted">{r.customerEmail}</span> : null}
                 </td>
                 <td className="px-2 py-1.5">
@@ -97,7 +100,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
                 </td>
                 <td className="px-2 py-1.5 text-right">{fromSI("length-small", r.blowerPulleyDiameter, unitSystem).toFixed(unitSystem === "metric" ? 1 : 2)}</td>
                 <td className="px-2 py-1.5 capitalize">{r.status}</td>
-                <td className="px-2 py-1.5 text-right">{formatMoney(r.total)}</td>
+                <td className="px-2 py-1.5 text-right">{price(r.total)}</td>
                 <td className="px-2 py-1.5">{new Date(r.updatedAt).toLocaleDateString("en-GB", { dateStyle: "medium" })}</td>
                 <td className="px-2 py-1.5">{r.authorName}</td>
               </tr>

@@ -4,14 +4,16 @@ import type { Combination, UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { CurveChart } from "@/components/charts/curve-chart";
 import { quantityText } from "@/lib/units/format";
-import type { PartLine } from "@/lib/recommendations/rules";
-import { formatMoney } from "@/lib/shelf/rules";
+import { defaultSheetTitle, type PartLine } from "@/lib/recommendations/rules";
 import type { ShopDetails } from "@/db/repo/shop";
+import { formatPrice } from "@/lib/orders/money";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
 import { TotalFoot } from "@/components/ui/data-table";
 
 export type SheetRecord = {
   id: string;
+  /** The customer-facing title (empty: a default built from the customer's name). */
+  title: string;
   customerName: string;
   customerEmail: string | null;
   vehicleNotes: string;
@@ -20,19 +22,22 @@ export type SheetRecord = {
   sentAt: Date | null;
   createdAt: Date;
   revision: number;
-  combinationName: string;
+  /** The engine speed the boost was sold at (rpm), or null for redline. */
+  targetRpm: number | null;
   parts: PartLine[];
   total: string;
   spec: Combination;
 };
 
-export type SheetViewProps = { sheet: SheetRecord; shop: ShopDetails; unitSystem: UnitSystem; print?: boolean };
+/** `currency`: ISO 4217 code of the prices (the shop's, or the one frozen with a sent version). */
+export type SheetViewProps = { sheet: SheetRecord; shop: ShopDetails; currency: string; unitSystem: UnitSystem; print?: boolean };
 
 const rpm = (n: number) => `${Math.round(n).toLocaleString("en-US")} rpm`;
 const date = (d: Date) => d.toLocaleDateString("en-GB", { year: "numeric", month: "short", day: "numeric" });
 
-export function SheetView({ sheet, shop, unitSystem, print = false }: SheetViewProps) {
-  const { points, cautions, figures: f } = computeSheet(sheet.spec);
+export function SheetView({ sheet, shop, currency, unitSystem, print = false }: SheetViewProps) {
+  const { points, cautions, figures: f } = computeSheet(sheet.spec, sheet.targetRpm);
+  const price = (a: string) => formatPrice(a, currency);
   const q = (kind: Parameters<typeof quantityText>[0], si: number) => quantityText(kind, si, unitSystem);
   const overLimit = f.blowerRpmAtRedline > f.blowerMaxRpm;
   const rows: [string, string][] = [
@@ -40,6 +45,7 @@ export function SheetView({ sheet, shop, unitSystem, print = false }: SheetViewP
     ["Blower pulley / crank pulley", `${q("length-small", f.blowerPulleyDiameter)} / ${q("length-small", f.crankPulleyDiameter)}`],
     ["Drive ratio", `${f.driveRatio.toFixed(2)} : 1 (${(f.overdrive * 100).toFixed(0)} % overdrive)`],
     ["Boost at peak power", f.peakPower ? `${q("pressure", f.peakPower.boostGauge)} at ${rpm(f.peakPower.rpm)}` : "–"],
+    ...(f.headline?.sold ? [["Boost where it was sold", `${q("pressure", f.headline.boostGauge)} at ${rpm(f.headline.rpm)}`] as [string, string]] : []),
     ["Boost at redline", f.atRedline ? `${q("pressure", f.atRedline.boostGauge)} at ${rpm(f.redlineRpm)}` : "–"],
     [
       "Blower speed at redline",
@@ -51,15 +57,15 @@ export function SheetView({ sheet, shop, unitSystem, print = false }: SheetViewP
   ];
   const small = print ? "text-[10.5px] leading-snug" : "text-sm";
   return (
-    <article className={`flex flex-col ${print ? "gap-2.5" : "gap-5"}`} data-testid="recommendation-sheet" aria-labelledby="sheet-title">
-      <header className="flex flex-wrap items-start justify-between gap-3 border-b border-line pb-2">
+    <article className={`flex min-w-0 flex-col ${print ? "gap-2.5" : "gap-5"}`} data-testid="recommendation-sheet" aria-labelledby="sheet-title">
+      <header className="flex flex-wrap items-start justify-between gap-3 border-b border-line pb-2 [overflow-wrap:anywhere]">
         <div>
           <p className="text-xs uppercase tracking-wide text-muted">Recommendation sheet</p>
           <h1 id="sheet-title" className={print ? "text-lg font-semibold" : "text-2xl font-semibold"}>
-            {sheet.customerName}
+            {sheet.title || defaultSheetTitle(sheet.customerName)}
           </h1>
           <p className={`${small} text-muted`}>
-            {sheet.combinationName} · revision {sheet.revision} · {date(sheet.sentAt ?? sheet.createdAt)}
+            For <span data-testid="sheet-customer">{sheet.customerName}</span> · {date(sheet.sentAt ?? sheet.createdAt)}
           </p>
         </div>
         <address className={`not-italic ${small} text-right`} aria-label="Shop">
@@ -76,6 +82,12 @@ export function SheetView({ sheet, shop, unitSystem, print = false }: SheetViewP
           <p className={print ? "text-base font-semibold" : "text-xl font-semibold"} data-testid="recommended-pulley">
             {q("length-small", f.blowerPulleyDiameter)}
           </p>
+          {f.headline ? (
+            <p data-testid="headline-boost">
+              <span className="font-semibold">{q("pressure", f.headline.boostGauge)} boost</span> at {rpm(f.headline.rpm)}
+              {f.headline.sold ? "" : " (redline)"}, predicted
+            </p>
+          ) : null}
         </div>
         <div>
           {sheet.vehicleNotes ? (
@@ -111,7 +123,7 @@ export function SheetView({ sheet, shop, unitSystem, print = false }: SheetViewP
                   <th scope="row" className="py-0.5 pr-2 text-left font-normal text-muted">
                     {label}
                   </th>
-                  <td className={`py-0.5 text-right ${label.startsWith("Blower speed") && overLimit ? "font-semibold text-danger" : ""}`}>{value}</td>
+                  <td className={`py-0.5 text-right [overflow-wrap:anywhere] ${label.startsWith("Blower speed") && overLimit ? "font-semibold text-danger" : ""}`}>{value}</td>
                 </tr>
               ))}
             </tbody>
@@ -128,26 +140,28 @@ export function SheetView({ sheet, shop, unitSystem, print = false }: SheetViewP
               <thead>
                 <tr className="border-b border-line text-left text-muted">
                   <th scope="col" className="py-0.5 font-normal">Part</th>
-                  <th scope="col" className="py-0.5 text-right font-normal">Qty</th>
-                  <th scope="col" className="py-0.5 text-right font-normal">Each</th>
-                  <th scope="col" className="py-0.5 text-right font-normal">Amount</th>
+                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Qty</th>
+                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Each</th>
+                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Amount</th>
                 </tr>
               </thead>
               <tbody>
                 {sheet.parts.map((p, i) => (
                   <tr key={i} className="border-b border-line">
-                    <td className="py-0.5 pr-2">
+                    <td className="py-0.5 pr-2 [overflow-wrap:anywhere]">
                       {p.description}
                       {p.partNumber ? <span className="block text-xs text-muted">{p.partNumber}</span> : null}
                     </td>
-                    <td className="py-0.5 text-right">{p.quantity}</td>
-                    <td className="py-0.5 text-right">{formatMoney(p.unitPrice)}</td>
-                    <td className="py-0.5 text-right">{formatMoney(p.lineTotal)}</td>
+                    <td className="py-0.5 pl-3 text-right tabular-nums" data-testid="part-qty">
+                      {p.quantity}
+                    </td>
+                    <td className="whitespace-nowrap py-0.5 pl-3 text-right tabular-nums">{price(p.unitPrice)}</td>
+                    <td className="whitespace-nowrap py-0.5 pl-3 text-right tabular-nums">{price(p.lineTotal)}</td>
                   </tr>
                 ))}
               </tbody>
               <TotalFoot labelSpan={3} testId="sheet-total">
-                {formatMoney(sheet.total)}
+                {price(sheet.total)}
               </TotalFoot>
             </table>
           )}

@@ -2,7 +2,7 @@
 // The shelf's blowers: their columns and the kind filter; the rest is the shared shelf list.
 import { useState } from "react";
 import { fromSI, type UnitSystem } from "@/calc";
-import { formatMoney } from "@/lib/shelf/rules";
+import { usePrice } from "@/components/price";
 import { BlowerForm, type BlowerJson } from "./blower-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
 import { stockCell, stockClass } from "@/lib/shelf/stock";
@@ -13,7 +13,7 @@ type Sort = "partNumber" | "name" | "displacementPerRev" | "maxRpm" | "price" | 
 const pct = (f: number) => `${Math.round(f * 100)} %`;
 const rpm = (n: number) => Math.round(n).toLocaleString("en-US");
 
-function columns(system: UnitSystem): ShelfColumn<BlowerJson, Sort>[] {
+function columns(system: UnitSystem, price: (amount: string) => string): ShelfColumn<BlowerJson, Sort>[] {
   return [
     { label: "Part number", sortBy: "partNumber", cell: (b) => b.partNumber, cellClassName: () => "font-mono text-xs" },
     {
@@ -43,13 +43,14 @@ function columns(system: UnitSystem): ShelfColumn<BlowerJson, Sort>[] {
       align: "right",
       cell: (b) => `${pct(b.volumetricEfficiencyRef)} @ ${rpm(b.referenceRpm)} / ${pct(b.internalEfficiency)} / ${pct(b.mechanicalEfficiency)}`,
     },
-    { label: "Price", sortBy: "price", align: "right", cell: (b) => formatMoney(b.price), testId: "price" },
+    { label: "Price", sortBy: "price", align: "right", cell: (b) => price(b.price), testId: "price" },
     { label: "Stock", sortBy: "stock", align: "right", cell: stockCell, cellClassName: stockClass },
   ];
 }
 
 export function BlowerTable({ system, isAdmin }: { system: UnitSystem; isAdmin: boolean }) {
   const [kind, setKind] = useState("");
+  const price = usePrice();
   return (
     <ShelfList<BlowerJson, Sort>
       kind="blowers"
@@ -58,7 +59,7 @@ export function BlowerTable({ system, isAdmin }: { system: UnitSystem; isAdmin: 
       filters={<SelectField id="blower-kind" label="Kind" value={kind} onChange={setKind} options={[["", "Roots and twin-screw"], ["roots", "Roots"], ["twin-screw", "Twin-screw"]]} />}
       filterParams={{ kind }}
       defaultSort={{ sort: "displacementPerRev", dir: "asc" }}
-      columns={columns(system)}
+      columns={columns(system, price)}
       rowClassName="align-top"
       form={(p) => <BlowerForm system={system} {...p} />}
       isAdmin={isAdmin}

@@ -2,7 +2,7 @@
 // The shelf's pulleys: their columns and the position and rib filters; the rest is the shared shelf list.
 import { useState } from "react";
 import { fromSI, type UnitSystem } from "@/calc";
-import { formatMoney } from "@/lib/shelf/rules";
+import { usePrice } from "@/components/price";
 import { PulleyForm, type PulleyJson } from "./pulley-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
 import { stockCell, stockClass } from "@/lib/shelf/stock";
@@ -10,7 +10,7 @@ import { SelectField } from "@/components/ui/select-field";
 
 type Sort = "partNumber" | "diameter" | "ribCount" | "price" | "stock";
 
-function columns(system: UnitSystem): ShelfColumn<PulleyJson, Sort>[] {
+function columns(system: UnitSystem, price: (amount: string) => string): ShelfColumn<PulleyJson, Sort>[] {
   const unit = system === "metric" ? "mm" : "in";
   const len = (m: number) => fromSI("length-small", m, system).toFixed(system === "metric" ? 1 : 2);
   return [
@@ -19,7 +19,7 @@ function columns(system: UnitSystem): ShelfColumn<PulleyJson, Sort>[] {
     { label: "Diameter", unit, sortBy: "diameter", align: "right", cell: (p) => len(p.diameter) },
     { label: "Ribs", sortBy: "ribCount", align: "right", cell: (p) => p.ribCount },
     { label: "Belt minimum", unit, align: "right", cell: (p) => (p.minBeltDiameter === null ? "–" : len(p.minBeltDiameter)) },
-    { label: "Price", sortBy: "price", align: "right", cell: (p) => formatMoney(p.price), testId: "price" },
+    { label: "Price", sortBy: "price", align: "right", cell: (p) => price(p.price), testId: "price" },
     { label: "Stock", sortBy: "stock", align: "right", cell: stockCell, cellClassName: stockClass },
   ];
 }
@@ -27,6 +27,7 @@ function columns(system: UnitSystem): ShelfColumn<PulleyJson, Sort>[] {
 export function PulleyTable({ system, isAdmin }: { system: UnitSystem; isAdmin: boolean }) {
   const [position, setPosition] = useState("");
   const [ribCount, setRibCount] = useState("");
+  const price = usePrice();
   return (
     <ShelfList<PulleyJson, Sort>
       kind="pulleys"
@@ -40,7 +41,7 @@ export function PulleyTable({ system, isAdmin }: { system: UnitSystem; isAdmin: 
       }
       filterParams={{ position, ribCount }}
       defaultSort={{ sort: "diameter", dir: "asc" }}
-      columns={columns(system)}
+      columns={columns(system, price)}
       form={(p) => <PulleyForm system={system} {...p} />}
       isAdmin={isAdmin}
     />

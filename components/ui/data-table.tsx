@@ -44,7 +44,7 @@ export function TotalFoot({ labelSpan, testId, trailing = 0, children }: { label
         <th scope="row" colSpan={labelSpan} className="py-1 text-right">
           Total
         </th>
-        <td className="py-1 text-right font-semibold" data-testid={testId}>
+        <td className="whitespace-nowrap py-1 pl-3 text-right font-semibold tabular-nums" data-testid={testId}>
           {children}
         </td>
         {Array.from({ length: trailing }, (_, i) => (

@@ -12,7 +12,7 @@ export async function readPlannerShelf(db: DbOrTx, actor: Actor): Promise<Shelf>
   assert(canSeeShelf(actor));
   const [blowerPulleys, blowerRows] = await Promise.all([
     db
-      .select({ id: pulleys.id, partNumber: pulleys.partNumber, diameter: pulleys.diameter, price: pulleys.price, stock: pulleys.stock })
+      .select({ id: pulleys.id, partNumber: pulleys.partNumber, diameter: pulleys.diameter, ribCount: pulleys.ribCount, price: pulleys.price, stock: pulleys.stock })
       .from(pulleys)
       .where(eq(pulleys.position, "blower"))
       .orderBy(asc(pulleys.diameter)),

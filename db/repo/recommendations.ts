@@ -3,15 +3,15 @@
 // them (db/policy.ts canWriteRecommendations); a customer reaches one sheet only through a signed
 // link, which the route verifies before calling getSharedRecommendation. The spec is copied into
 // the sheet so later edits to the combination never change what a customer was sent.
-import { and, count, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
+import { and, count, desc, eq, ilike, isNull, or, sql, type SQL } from "drizzle-orm";
 import { z } from "zod";
 import { combinationSchema, type Combination } from "@/calc";
 import type { DbOrTx } from "../connect";
 import { ConflictError, FieldError, NotFoundError } from "@/lib/errors";
 import { assert, canWriteRecommendations, type Actor } from "../policy";
-import { combinations, recommendations, users, type RecommendationRow } from "../schema";
+import { combinations, recommendations, sheetVersions, users, type RecommendationRow } from "../schema";
 import { partLineSchema, recommendationInputSchema, updateRecommendationSchema, statusChangeSchema, recommendationListQuerySchema, type RecommendationInput, type PartLine } from "@/lib/recommendations/rules";
-import { getCombination } from "@/db/repo/combinations";
+import { getCombination, getRevision } from "@/db/repo/combinations";
 import { findParts } from "@/db/repo/shelf";
 import { lineTotal, sumMoney } from "@/lib/shelf/rules";
 
@@ -44,6 +44,13 @@ function withPulley(spec: unknown, diameter: number): Combination {
   return { ...c, drive: { ...c.drive, blowerPulleyDiameter: diameter } };
 }
 
+/** The speed the boost was sold at must lie on the engine's curve (up to its redline). */
+function checkTarget(spec: Combination, targetRpm: number | null) {
+  if (targetRpm !== null && targetRpm > spec.engine.redlineRpm) {
+    throw new FieldError("targetRpm", `The target engine speed must be at most the redline, ${Math.round(spec.engine.redlineRpm)} rpm.`);
+  }
+}
+
 export async function createRecommendation(db: DbOrTx, actor: Actor, input: RecommendationInput): Promise<Recommendation> {
   assert(canWriteRecommendations(actor), "Only the shop's sales, tuners and admin write recommendations.");
   const v = recommendationInputSchema.parse(input);
@@ -51,14 +58,25 @@ export async function createRecommendation(db: DbOrTx, actor: Actor, input: Reco
     if (e instanceof NotFoundError) throw new FieldError("combinationId", "That combination does not exist or is not yours to see.");
     throw e;
   });
-  const spec = withPulley(combo.spec, v.blowerPulleyDiameter);
+  let source: { spec: unknown; revision: number } = { spec: combo.spec, revision: combo.revision };
+  if (v.revision !== undefined && v.revision !== combo.revision) {
+    const rev = await getRevision(db, actor, combo.id, v.revision).catch((e) => {
+      if (e instanceof NotFoundError) throw new FieldError("revision", `The combination has no revision ${v.revision}.`);
+      throw e;
+    });
+    source = { spec: rev.spec, revision: rev.number };
+  }
+  const spec = withPulley(source.spec, v.blowerPulleyDiameter);
+  checkTarget(spec, v.targetRpm);
   const { parts, total } = await resolveLines(db, actor, v.parts);
   const [row] = await db
     .insert(recommendations)
     .values({
       combinationId: combo.id,
-      revision: combo.revision,
+      revision: source.revision,
       authorId: actor.id,
+      title: v.title,
+      targetRpm: v.targetRpm,
       customerName: v.customerName,
       customerEmail: v.customerEmail,
       vehicleNotes: v.vehicleNotes,
@@ -107,13 +125,14 @@ export async function listRecommendations(db: DbOrTx, actor: Actor, query: z.inp
   if (q.status) conds.push(eq(recommendations.status, q.status));
   if (q.search) {
     const like = `%${q.search.replace(/[%_\\]/g, (c) => "\\" + c)}%`;
-    conds.push(or(ilike(recommendations.customerName, like), ilike(recommendations.customerEmail, like), ilike(combinations.name, like)));
+    conds.push(or(ilike(recommendations.title, like), ilike(recommendations.customerName, like), ilike(recommendations.customerEmail, like), ilike(combinations.name, like)));
   }
   const where = and(...conds);
   const [rows, [{ n }]] = await Promise.all([
     db
       .select({
         id: recommendations.id,
+        title: recommendations.title,
         customerName: recommendations.customerName,
         customerEmail: recommendations.customerEmail,
         status: recommendations.status,
@@ -144,10 +163,11 @@ export async function updateRecommendation(db: DbOrTx, actor: Actor, id: string,
   const v = updateRecommendationSchema.parse(input);
   if (current.status !== "draft") throw new ConflictError(`This sheet is ${current.status}; set it back to draft before you change it.`, { field: "status" });
   const spec = withPulley(current.spec, v.blowerPulleyDiameter);
+  checkTarget(spec, v.targetRpm);
   const { parts, total } = await resolveLines(db, actor, v.parts);
   const [row] = await db
     .update(recommendations)
-    .set({ customerName: v.customerName, customerEmail: v.customerEmail, vehicleNotes: v.vehicleNotes, notes: v.notes, blowerPulleyDiameter: v.blowerPulleyDiameter, spec, parts, total, updatedAt: new Date() })
+    .set({ title: v.title, targetRpm: v.targetRpm, customerName: v.customerName, customerEmail: v.customerEmail, vehicleNotes: v.vehicleNotes, notes: v.notes, blowerPulleyDiameter: v.blowerPulleyDiameter, spec, parts, total, updatedAt: new Date() })
     .where(and(eq(recommendations.id, id), eq(recommendations.status, "draft")))
     .returning();
   if (!row) throw new ConflictError("This sheet changed status while you were editing it; reload it.", { field: "status" });
@@ -195,10 +215,15 @@ export async function settleRecommendationMail(db: DbOrTx, id: string, error: st
 /** Stops every share link sent so far for a sheet (its share version moves on); a new send makes a new link. */
 export async function revokeShareLinks(db: DbOrTx, actor: Actor, id: string) {
   await getRecommendation(db, actor, id);
-  const [row] = await db
-    .update(recommendations)
-    .set({ shareVersion: sql`${recommendations.shareVersion} + 1`, updatedAt: new Date() })
-    .where(eq(recommendations.id, id))
-    .returning({ shareVersion: recommendations.shareVersion });
-  return row;
+  const at = new Date();
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(recommendations)
+      .set({ shareVersion: sql`${recommendations.shareVersion} + 1`, updatedAt: at })
+      .where(eq(recommendations.id, id))
+      .returning({ shareVersion: recommendations.shareVersion });
+    // The frozen copies behind those links are withdrawn too (db/repo/sheet-versions.ts).
+    await tx.update(sheetVersions).set({ revokedAt: at }).where(and(eq(sheetVersions.recommendationId, id), isNull(sheetVersions.revokedAt)));
+    return row;
+  });
 }

@@ -55,7 +55,7 @@ export async function seedCombinations(db: Db, people: DemoUsers): Promise<DemoC
     customerContact: "riley@example.com",
     revisions: [
       [workTruckV6, "As it came in: 3.4 in blower pulley, catalogue blower figures"],
-      [workTruckV6SmallerPulley, "3.1 in blower pulley after the first dyno log read low"],
+      [workTruckV6SmallerPulley, "3.0 in blower pulley after the first dyno log read low"],
     ],
   }, true);
   // Hot charge and high injector duty: an intercooler first, then larger injectors.

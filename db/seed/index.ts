@@ -9,6 +9,7 @@ import { shopSettings, users, type Role } from "../schema";
 import { seedCombinations } from "./combinations";
 import { seedDatalogs } from "./datalogs";
 import { seedLessons } from "./lessons";
+import { seedOrders } from "./orders";
 import { seedRecommendations } from "./recommendations";
 import { seedShelf } from "./shelf";
 
@@ -57,5 +58,6 @@ export async function seedDemo(db: Db) {
   const combos = await seedCombinations(db, people);
   await seedDatalogs(db, people, combos);
   await seedRecommendations(db, people, combos);
+  await seedOrders(db, people, combos);
   await seedLessons(db, people, combos);
 }

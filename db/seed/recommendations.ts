@@ -14,6 +14,8 @@ export async function seedRecommendations(db: Db, people: DemoUsers, combos: Dem
   if (existing) return;
   await createRecommendation(db, people.sales, {
     combinationId: combos.workTruck,
+    title: "A smaller blower pulley for the work truck",
+    targetRpm: 4500,
     customerName: "Riley Example",
     customerEmail: "riley@example.com",
     vehicleNotes: "Work truck, pump fuel, tows a trailer most weeks. The first dyno log read below the prediction.",

@@ -19,7 +19,7 @@ import {
 import { quantityText } from "@/lib/units/format";
 
 /** A blower pulley on the parts shelf (diameter in m; price a decimal string). */
-export type ShelfPulley = { id: string; partNumber: string; diameter: number; price: string; stock: number };
+export type ShelfPulley = { id: string; partNumber: string; diameter: number; ribCount: number; price: string; stock: number };
 /** A blower on the parts shelf with the fields calc needs (SI). */
 export type ShelfBlower = Combination["blower"] & { id: string; partNumber: string; name: string; price: string; stock: number };
 export type Shelf = { blowerPulleys: ShelfPulley[]; blowers: ShelfBlower[] };
@@ -146,10 +146,9 @@ export function ladder(spec: Combination, rpm: number, shelf: readonly ShelfPull
 /** The ladder and finder's default speed: the finder's target speed when given, else peak power speed. */
 export const ladderSpeed = (chosen: number | null, peakRpm: number): number => chosen ?? peakRpm;
 
-/** Stock sizes the finder reports: in-stock shelf pulleys, else every shelf size. */
+/** Sizes the finder offers as "nearest in stock": only pulleys with stock on the shelf (an empty shelf offers none). */
 export function finderStock(shelf: readonly ShelfPulley[]): number[] {
-  const inStock = shelf.filter((p) => p.stock > 0);
-  return [...new Set((inStock.length ? inStock : shelf).map((p) => p.diameter))];
+  return [...new Set(shelf.filter((p) => p.stock > 0).map((p) => p.diameter))];
 }
 
 export type FinderOutcome = { ok: true; result: PulleyForBoostResult } | { ok: false; message: string };

@@ -2,7 +2,7 @@
 // in (shared by the form in the browser and the API) and the statuses.
 import { z } from "zod";
 import { plainText } from "@/lib/validation/text";
-import { pulleyDiameterSchema } from "@/calc";
+import { pulleyDiameterSchema, rpmSchema } from "@/calc";
 import { moneySchema, partNumberSchema } from "@/lib/shelf/rules";
 
 // Multi-line: notes keep their line breaks; names refuse control and direction-override characters alike.
@@ -24,6 +24,10 @@ export const partLineSchema = z.object({
 /** What a person fills in; the server adds the spec snapshot, line totals and the total. */
 export const recommendationInputSchema = z.object({
   combinationId: z.uuid({ error: "Choose a combination." }),
+  /** Which saved revision of the combination the sheet is for; the newest when left out. */
+  revision: z.coerce.number({ error: "Revision must be a whole number." }).int("Revision must be a whole number.").min(1, "Revision must be 1 or more.").optional(),
+  /** What the customer reads at the top of the sheet, e-mail and link; the combination's own name stays internal. */
+  title: plainText("Title", 160).default(""),
   customerName: text("Customer name", 120).min(1, "Give the customer's name."),
   customerEmail: z
     .union([z.literal(""), z.null(), z.email({ error: "Customer e-mail must be an e-mail address like name@example.com." }).trim().toLowerCase().max(200)])
@@ -33,10 +37,15 @@ export const recommendationInputSchema = z.object({
   notes: text("Notes", 4000).default(""),
   /** The recommended blower pulley (m). */
   blowerPulleyDiameter: pulleyDiameterSchema,
+  /** The engine speed (rpm) the boost was sold at: the sheet's headline boost is read there; redline when left out. */
+  targetRpm: z.union([rpmSchema, z.literal(""), z.null()]).optional().transform((v) => (typeof v === "number" ? v : null)),
   parts: z.array(partLineSchema, { error: "Parts must be a list of lines." }).max(MAX_PART_LINES, `A sheet may have at most ${MAX_PART_LINES} part lines.`).default([]),
 });
 
-export const updateRecommendationSchema = recommendationInputSchema.omit({ combinationId: true });
+export const updateRecommendationSchema = recommendationInputSchema.omit({ combinationId: true, revision: true });
+
+/** The title a sheet shows when none was given: never the combination's internal name. */
+export const defaultSheetTitle = (customerName: string) => `Blower pulley recommendation for ${customerName}`;
 
 export const STATUSES = ["draft", "sent", "accepted", "declined"] as const;
 export type RecommendationStatus = (typeof STATUSES)[number];

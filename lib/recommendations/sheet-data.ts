@@ -11,6 +11,8 @@ export type KeyFigures = {
   peakPower: { rpm: number; netPower: number; boostGauge: number } | null;
   peakTorque: { rpm: number; torque: number } | null;
   atRedline: { boostGauge: number; manifoldTemperature: number } | null;
+  /** The headline: boost where it was sold (the target speed), or at redline when none was given. */
+  headline: { rpm: number; boostGauge: number; netPower: number; sold: boolean } | null;
   blowerRpmAtRedline: number;
   blowerMaxRpm: number;
   maxChargeTemperature: { rpm: number; manifoldTemperature: number } | null;
@@ -28,7 +30,8 @@ export function sheetRpms(spec: Combination): number[] {
   return out;
 }
 
-export function computeSheet(spec: Combination): SheetData {
+/** `targetRpm`: the engine speed the boost was sold at (rpm); the headline figures are read there. */
+export function computeSheet(spec: Combination, targetRpm: number | null = null): SheetData {
   const points: OperatingPoint[] = [];
   const skipped: number[] = [];
   // A slow, leaky blower can fail to balance at the lowest speeds; the sheet shows the rest.
@@ -44,6 +47,8 @@ export function computeSheet(spec: Combination): SheetData {
   const torque = best("torque");
   const hot = best("manifoldTemperature");
   const top = points.find((p) => p.rpm === redline) ?? null;
+  const sold = targetRpm === null ? null : (points.find((p) => p.rpm === targetRpm) ?? trySolvePoint(spec, targetRpm));
+  const head = sold ?? top;
   const ratio = driveRatio(spec.drive.crankPulleyDiameter, spec.drive.blowerPulleyDiameter);
   return {
     points,
@@ -58,6 +63,7 @@ export function computeSheet(spec: Combination): SheetData {
       peakPower: power && { rpm: power.rpm, netPower: power.netPower, boostGauge: power.boostGauge },
       peakTorque: torque && { rpm: torque.rpm, torque: torque.torque },
       atRedline: top && { boostGauge: top.boostGauge, manifoldTemperature: top.manifoldTemperature },
+      headline: head && { rpm: head.rpm, boostGauge: head.boostGauge, netPower: head.netPower, sold: sold !== null },
       blowerRpmAtRedline: blowerSpeed(spec, redline),
       blowerMaxRpm: spec.blower.maxRpm,
       maxChargeTemperature: hot && { rpm: hot.rpm, manifoldTemperature: hot.manifoldTemperature },

@@ -62,12 +62,13 @@ async function demoIds() {
   const tuner = await signedIn("tuner@example.com");
   const list = await tuner.json("/api/combinations?search=Work%20truck&pageSize=5");
   const demo = (list.data.items as { id: string; name: string }[]).find((c) => c.name.startsWith("Work truck"));
-  return { demo: demo!.id };
+  const orders = await tuner.json("/api/orders?search=Casey");
+  return { demo: demo!.id, order: (orders.data.rows as { id: string }[])[0].id };
 }
 
 describe("accessibility", () => {
   let browser: Browser;
-  let ids: { demo: string };
+  let ids: { demo: string; order: string };
   beforeAll(async () => {
     browser = await launchBrowser();
     ids = await demoIds();
@@ -84,9 +85,9 @@ describe("accessibility", () => {
     await page.close();
   });
 
-  const pagesFor = (role: string, demo: string): string[] => {
+  const pagesFor = (role: string, demo: string, order: string): string[] => {
     const common = ["/combinations", "/combinations/new", "/compare", "/datalogs", "/shelf", "/lessons", "/settings"];
-    const staff = [`/combinations/${demo}`, `/combinations/${demo}/revisions`, `/compare?items=${demo}:1,${demo}:2`, "/recommendations"];
+    const staff = [`/combinations/${demo}`, `/combinations/${demo}/revisions`, `/compare?items=${demo}:1,${demo}:2`, "/recommendations", "/recommendations/new", `/recommendations/new?combination=${demo}`, "/orders", `/orders/${order}`];
     if (role === "member") return common;
     if (role === "instructor") return [...common, `/combinations/${demo}`];
     if (role === "admin") return [...common, ...staff, "/admin/users", "/admin/mail"];
@@ -98,7 +99,7 @@ describe("accessibility", () => {
       const context = await browser.newContext();
       const page = await signIn(context, `${role}@example.com`);
       const failures: string[] = [];
-      for (const path of pagesFor(role, ids.demo)) {
+      for (const path of pagesFor(role, ids.demo, ids.order)) {
         const res = await page.goto(BASE_URL + path, { waitUntil: "networkidle" });
         expect(res?.status(), path).toBeLessThan(400);
         for (const v of await axe(page)) failures.push(`${path}: ${v}`);

@@ -119,11 +119,17 @@ describe("route handlers under fuzzing", () => {
   it("answers 401 to every route when signed out", async () => {
     const { Client } = await import("../support/http");
     const anon = new Client();
-    for (const r of routes.filter((x) => !x.template.startsWith("/api/health") && !x.template.startsWith("/api/share"))) {
+    // Public on purpose: the health probe, the customer's token-checked share routes, and the
+    // payment webhook, whose credential is its signature (an unsigned call is a 400).
+    const open = ["/api/health", "/api/share", "/api/payments/webhook"];
+    for (const r of routes.filter((x) => !open.some((p) => x.template.startsWith(p)))) {
       for (const method of r.methods) {
         const res = await anon.fetch(fill(r.template, "00000000-0000-4000-8000-000000000000"), { method, headers: { "content-type": "application/json" }, body: method === "GET" ? undefined : "{}" });
         expect([401, 404], `${method} ${r.template}`).toContain(res.status);
       }
     }
+    const unsigned = await anon.fetch("/api/payments/webhook", { method: "POST", headers: { "content-type": "application/json" }, body: "{}" });
+    expect(unsigned.status).toBe(400);
+    expect(await unsigned.json()).toMatchObject({ fieldErrors: { "stripe-signature": [expect.any(String)] } });
   });
 });

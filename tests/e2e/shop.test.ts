@@ -5,8 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { signedIn } from "../support/http";
-
-const MAIL = process.env.MAIL_FAKE_URL ?? "";
+import { inbox } from "../support/inbox";
 
 /** Pages in a PDF: the page tree's /Count (ISO 32000-1 §7.7.3.2), cross-checked by the /Type /Page objects. */
 function pdfPages(pdf: Buffer) {
@@ -22,15 +21,6 @@ const cents = (s: string) => {
   return Number(w) * 100 + Number((f + "0").slice(0, 2));
 };
 const money = (c: number) => `${Math.floor(c / 100).toLocaleString("en-US")}.${String(c % 100).padStart(2, "0")}`;
-
-async function inbox(to: string, wait = 15_000) {
-  const until = Date.now() + wait;
-  for (;;) {
-    const list = (await (await fetch(`${MAIL}/messages?to=${encodeURIComponent(to)}`)).json()) as { subject: string; text: string; html: string }[];
-    if (list.length || Date.now() > until) return list;
-    await new Promise((r) => setTimeout(r, 300));
-  }
-}
 
 async function sheetReady(page: Page) {
   await page.getByTestId("recommendation-sheet").locator("canvas").waitFor({ timeout: 20_000 });
@@ -53,12 +43,14 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const email = `e2e-${Date.now()}@example.com`;
 
     await page.goto(`${BASE_URL}/recommendations/new`);
-    const select = page.getByLabel("Combination", { exact: true });
-    const label = (await select.locator("option").allTextContents()).find((t) => t.startsWith("Work truck V6 4.3 L, Roots"));
-    expect(label).toBeDefined();
-    await select.selectOption({ label: label! });
-    await page.getByRole("button", { name: "Continue" }).click();
+    // The searchable picker: find the combination by a word of its name, then open it.
+    await page.getByLabel("Find the combination").fill("Work truck");
+    await page.getByRole("button", { name: "Search" }).click();
+    await page.waitForURL(/search=Work/);
+    await page.getByTestId("combination-choices").getByRole("link", { name: /^Work truck V6 4\.3 L, Roots/ }).click();
     await page.waitForURL(/\/recommendations\/new\?combination=/);
+    // It has three revisions; the newest is preselected.
+    await expect(page.getByLabel("Revision to use").inputValue()).resolves.toBe("3");
 
     // The ladder (the planner's own) lists the shelf's blower pulleys; use 3.00 in from it.
     await page.getByRole("button", { name: "Use the 3.00 in pulley" }).click();
@@ -68,7 +60,11 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await page.getByRole("button", { name: "Find pulley" }).click();
     await expect(page.getByTestId("finder-result").textContent()).resolves.toMatch(/For 8\.0 psi at [\d,]+ rpm the blower pulley is [\d.]+ in/);
 
-    await expect(page.getByLabel("Customer name").inputValue()).resolves.toBe("Riley Example");
+    // A new customer's fields start empty: nothing of the combination's own customer carries over.
+    await expect(page.getByLabel("Customer name").inputValue()).resolves.toBe("");
+    await page.getByLabel("Customer name").fill("Riley Example");
+    await page.getByLabel("Title on the sheet").fill("A smaller pulley for your work truck");
+    await page.getByLabel(/Boost quoted at/).fill("4500");
     await page.getByLabel("Customer e-mail").fill(email);
     await page.getByLabel("Vehicle notes").fill("Street car <on pump fuel> & weekends");
     await page.getByRole("button", { name: "Add this pulley to the parts" }).click();
@@ -79,14 +75,15 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const pulleyPrice = await page.getByLabel("Price each, line 1").inputValue();
     // source: integer-cents arithmetic, the reference for money.
     const expectedTotal = money(cents(pulleyPrice) + 3 * 1999);
-    await expect(page.getByTestId("form-total").textContent()).resolves.toBe(expectedTotal);
+    await expect(page.getByTestId("form-total").textContent()).resolves.toBe(`$${expectedTotal}`);
     await page.getByRole("button", { name: "Save draft sheet" }).click();
     await page.waitForURL(/\/recommendations\/[0-9a-f-]{36}$/, { timeout: 30_000 });
     const id = page.url().split("/").pop()!;
 
     await sheetReady(page);
     await expect(page.getByTestId("recommended-pulley").textContent()).resolves.toBe("3.00 in");
-    await expect(page.getByTestId("sheet-total").textContent()).resolves.toBe(expectedTotal);
+    // The shop's currency (USD in the demo) is shown with its symbol.
+    await expect(page.getByTestId("sheet-total").textContent()).resolves.toBe(`$${expectedTotal}`);
     await expect(page.getByTestId("sheet-status").textContent()).resolves.toBe("Draft");
     await expect(page.getByTestId("cautions-panel").isVisible()).resolves.toBe(true);
     expect(await page.getByText("Street car <on pump fuel> & weekends").count()).toBe(1);
@@ -110,14 +107,18 @@ describe("shop: recommendation sheet and parts shelf", () => {
     expect(pdfPages(await res.body())).toEqual({ count: 1, objects: 1 });
 
     // E-mail it.
+    // The e-mail is previewed before it goes; the PDF goes attached; the link then shows on the page.
+    await page.getByRole("button", { name: "Preview the e-mail" }).click();
+    await expect(page.getByTestId("email-preview").textContent()).resolves.toContain(`Total: $${expectedTotal}`);
     await page.getByRole("button", { name: "Send to customer" }).click();
-    await page.getByTestId("sheet-status").filter({ hasText: "Sent" }).waitFor({ timeout: 20_000 });
+    await page.getByTestId("sheet-status").filter({ hasText: "Sent" }).waitFor({ timeout: 60_000 });
+    await expect(page.getByLabel(/The customer's link/).inputValue()).resolves.toMatch(/\/share\//);
     const mails = await inbox(email);
     expect(mails).toHaveLength(1);
     const [mail] = mails;
     expect(mail.subject).toMatch(/recommendation/i);
     expect(mail.text).toContain("Recommended blower pulley: 3.00 in");
-    expect(mail.text).toContain(`Total: ${expectedTotal}`);
+    expect(mail.text).toContain(`Total: $${expectedTotal}`);
     expect(mail.html).toContain("Open the recommendation sheet");
     const link = mail.text.match(/https?:\/\/\S+\/share\/\S+/)?.[0];
     expect(link).toBeDefined();
@@ -130,8 +131,11 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const sharedErrors = watchErrors(shared);
     await shared.goto(link!);
     await sheetReady(shared);
-    await expect(shared.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Riley Example");
-    await expect(shared.getByTestId("sheet-total").textContent()).resolves.toBe(expectedTotal);
+    await expect(shared.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("A smaller pulley for your work truck");
+    await expect(shared.getByTestId("headline-boost").textContent()).resolves.toMatch(/psi boost at 4,500 rpm, predicted$/);
+    // The combination's internal name (and its customer's surname in it) never reaches the customer.
+    expect(await shared.getByText("Work truck V6 4.3 L, Roots").count()).toBe(0);
+    await expect(shared.getByTestId("sheet-total").textContent()).resolves.toBe(`$${expectedTotal}`);
     expect(await shared.getByRole("button", { name: /send|edit|mark/i }).count()).toBe(0);
     expect(sharedErrors).toEqual([]);
     // Change one character of the signature: the page refuses, plainly.
@@ -197,7 +201,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await page.getByText("Added PW-BL-E2E1.").waitFor();
     const row = page.locator('tr[data-part="PW-BL-E2E1"]');
     await row.waitFor();
-    await expect(row.getByTestId("price").textContent()).resolves.toBe("3,999.50");
+    await expect(row.getByTestId("price").textContent()).resolves.toBe("$3,999.50");
     page.once("dialog", (d) => void d.accept());
     await row.getByRole("button", { name: "Remove PW-BL-E2E1" }).click();
     await page.getByText("Removed PW-BL-E2E1.").waitFor();
@@ -219,7 +223,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await price.fill("123.4");
     await page.getByRole("button", { name: "Save pulley" }).click();
     await page.getByText("Saved PW-BP-0320-8.").waitFor();
-    await expect(row.getByTestId("price").textContent()).resolves.toBe("123.40");
+    await expect(row.getByTestId("price").textContent()).resolves.toBe("$123.40");
     // A bad price is refused in the form, naming the field.
     await row.getByRole("button", { name: "Edit PW-BP-0320-8" }).click();
     await price.fill("12.345");

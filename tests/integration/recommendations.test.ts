@@ -137,7 +137,7 @@ describe("recommendation sheets", () => {
   it("the e-mail escapes everything a person typed in its HTML and carries the link in both bodies", async () => {
     const rec = await createRecommendation(t.db, sales, input({ customerName: `<img src=x onerror="alert(1)">`, notes: "Fits & runs <b>well</b>" }));
     const link = "https://shop.example/share/abc.123.def";
-    const mail = buildSheetEmail({ sheet: rec, shop: { name: "Shop & Co <demo>", address: "", phone: "", email: "", website: "" }, unitSystem: "imperial", link, expiresAt: new Date("2030-05-01T00:00:00Z") });
+    const mail = buildSheetEmail({ sheet: rec, shop: { name: "Shop & Co <demo>", address: "", phone: "", email: "", website: "" }, currency: "USD", unitSystem: "imperial", link, expiresAt: new Date("2030-05-01T00:00:00Z") });
     expect(mail.html).not.toContain("<img");
     expect(mail.html).toContain("&lt;img src=x onerror=&quot;alert(1)&quot;&gt;");
     expect(mail.html).toContain("Fits &amp; runs &lt;b&gt;well&lt;/b&gt;");
@@ -145,5 +145,39 @@ describe("recommendation sheets", () => {
     expect(mail.text).toContain(link);
     expect(mail.html).toContain(`href="${link}"`);
     expect(mail.text).toContain("Predictions are estimates");
+  });
+
+  it("the headline boost is the one at the speed that was sold, not the redline figure", () => {
+    const f = computeSheet(spec, 4000).figures;
+    const pointAt4000 = computeSheet(spec).points.find((p) => p.rpm === 4000)!;
+    expect(f.headline).toEqual({ rpm: 4000, boostGauge: pointAt4000.boostGauge, netPower: pointAt4000.netPower, sold: true });
+    // Common practice, no published source: a Roots blower's boost rises with engine speed, so
+    // the sold figure below redline is the smaller one.
+    expect(f.headline!.boostGauge).toBeLessThan(f.atRedline!.boostGauge);
+    expect(computeSheet(spec).figures.headline).toMatchObject({ rpm: spec.engine.redlineRpm, sold: false });
+  });
+
+  it("a new customer's sheet carries its own title; the combination's internal name reaches neither e-mail nor sheet", async () => {
+    const internal = (await createCombination(t.db, tuner, { name: "Smith small-block (internal)", spec, customerName: "Smith" })).id;
+    const rec = await createRecommendation(t.db, sales, { ...input({ customerName: "Alex New" }), combinationId: internal, title: "Street pulley for the red coupe", targetRpm: 4500 });
+    expect(rec.title).toBe("Street pulley for the red coupe");
+    const mail = buildSheetEmail({ sheet: rec, shop: { name: "Shop", address: "", phone: "", email: "", website: "" }, currency: "EUR", unitSystem: "metric", link: "https://x.example/s", expiresAt: new Date("2030-01-01T00:00:00Z") });
+    expect(mail.text).not.toContain("Smith");
+    expect(mail.html).not.toContain("Smith");
+    expect(mail.subject).toContain("Street pulley for the red coupe");
+    expect(mail.text).toMatch(/Predicted boost: [\d.]+ kPa at 4500 rpm\n/);
+    expect(mail.text).toContain("Total: €");
+    await expect(createRecommendation(t.db, sales, { ...input(), targetRpm: spec.engine.redlineRpm + 500 })).rejects.toMatchObject({ field: "targetRpm" });
+  });
+
+  it("a sheet can be made from an older revision of the combination, whose spec it then keeps", async () => {
+    const id = (await createCombination(t.db, tuner, { name: "Revised engine", spec })).id;
+    await saveCombination(t.db, tuner, id, { spec: { ...spec, engine: { ...spec.engine, redlineRpm: spec.engine.redlineRpm + 500 } }, baseRevision: 1 });
+    const old = await createRecommendation(t.db, sales, { ...input(), combinationId: id, revision: 1 });
+    expect(old.revision).toBe(1);
+    expect(old.spec.engine.redlineRpm).toBe(spec.engine.redlineRpm);
+    const newest = await createRecommendation(t.db, sales, { ...input(), combinationId: id });
+    expect(newest.revision).toBe(2);
+    await expect(createRecommendation(t.db, sales, { ...input(), combinationId: id, revision: 7 })).rejects.toMatchObject({ field: "revision" });
   });
 });

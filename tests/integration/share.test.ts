@@ -46,6 +46,11 @@ describe("share tokens", () => {
     expect(verifyShareToken(signShareToken(id, 0, new Date(Date.now() + 1000_000), "another-secret-0123456789abcdef"), SECRET)).toEqual({ ok: false, reason: "forged" });
     const flipped = sig.slice(0, -2) + (sig.at(-2) === "A" ? "B" : "A") + sig.at(-1);
     expect(verifyShareToken(`${id}.${ver}.${exp}.${flipped}`, SECRET)).toEqual({ ok: false, reason: "forged" });
+    // Another spelling of the same bytes: the last character's two unused bits flipped (RFC 4648 §3.5).
+    const last = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-_".indexOf(sig.at(-1)!);
+    const respelled = sig.slice(0, -1) + "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789-_"[last ^ 1];
+    expect(Buffer.from(respelled, "base64url")).toEqual(Buffer.from(sig, "base64url"));
+    expect(verifyShareToken(`${id}.${ver}.${exp}.${respelled}`, SECRET)).toEqual({ ok: false, reason: "forged" });
     for (const bad of ["", "abc", `${id}.${exp}.${sig}`, `${id}.${ver}.${exp}.${sig}.x`, `not-a-uuid.${ver}.${exp}.${sig}`, `${id}.${ver}.soon.${sig}`, `${id}.-1.${exp}.${sig}`, `${id}.${ver}.${exp}.${sig.slice(1)}`]) {
       expect(verifyShareToken(bad, SECRET), bad).toEqual({ ok: false, reason: "malformed" });
     }

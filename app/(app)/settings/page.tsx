@@ -1,5 +1,8 @@
 import type { Metadata } from "next";
 import { requirePageUser } from "@/app/_lib/session";
+import { getDb } from "@/db/client";
+import { getShopTerms } from "@/db/repo/shop";
+import { ShopTermsForm } from "./shop-terms-form";
 import { SignOutEverywhere } from "./sign-out-everywhere";
 import { UnitsForm } from "./units-form";
 
@@ -19,7 +22,13 @@ export default async function SettingsPage() {
         <dd>{user.role}</dd>
       </dl>
       <UnitsForm current={user.unitSystem} />
+      {user.role === "admin" ? <ShopTerms /> : null}
       <SignOutEverywhere />
     </div>
   );
+}
+
+async function ShopTerms() {
+  const t = await getShopTerms(getDb());
+  return <ShopTermsForm initial={{ currency: t.currency, depositKind: t.deposit.kind, depositValue: t.deposit.value }} />;
 }

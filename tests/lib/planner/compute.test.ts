@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { cautions, combinationSchema, inToM, solvePoint, type Combination } from "@/calc";
 import { compareQuery, parseItems, parseSpeeds } from "@/app/(app)/compare/items";
 import { exposeSeries } from "@/lib/charts/metrics";
-import { findPulley, ladder, ladderDiameters, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, withPulley, type ShelfPulley } from "@/lib/planner/compute";
+import { findPulley, ladder, finderStock, ladderDiameters, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, withPulley, type ShelfPulley } from "@/lib/planner/compute";
 import { explainSentence } from "@/lib/planner/explain-words";
 import { outsideRangeText } from "@/lib/planner/range-words";
 import { DELTA_QUANTITIES, deltaRows, deltaTone } from "@/lib/planner/side-by-side";
@@ -14,9 +14,14 @@ import { deltaText, displayValue } from "@/lib/units/format";
 import { vintageV8Cam, vintageV8DrawThrough, workTruckV6 } from "@/lib/combinations/demo-specs";
 
 const base: Combination = combinationSchema.parse(workTruckV6);
-const shelfPulley = (inches: number, stock: number): ShelfPulley => ({ id: `p${inches}`, partNumber: `BP-${inches}`, diameter: inToM(inches), price: "49.00", stock });
+const shelfPulley = (inches: number, stock: number): ShelfPulley => ({ id: `p${inches}`, partNumber: `BP-${inches}`, diameter: inToM(inches), ribCount: 8, price: "49.00", stock });
 
 describe("curves and the ladder", () => {
+  it("the finder's nearest sizes are only pulleys in stock: an out-of-stock size is never offered as available", () => {
+    expect(finderStock([shelfPulley(3.0, 0), shelfPulley(3.2, 2), shelfPulley(3.4, 0)])).toEqual([inToM(3.2)]);
+    expect(finderStock([shelfPulley(3.0, 0)])).toEqual([]);
+  });
+
   it("runs the curve from low speed to exactly redline", () => {
     const rpms = rpmGrid(base);
     expect(rpms[0]).toBe(1500);

@@ -1,9 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { LinkRefused } from "@/components/recommendation/link-refused";
-import { loadByToken } from "@/app/_lib/recommendation-load";
 import { PrintButton } from "@/components/recommendation/print-button";
 import { SheetView } from "@/components/recommendation/sheet-view";
+import { Notice } from "@/components/ui/notice";
+import { formatPrice } from "@/lib/orders/money";
+import { ORDER_STATUS_LABELS } from "@/lib/orders/status";
+import { AnswerSheet } from "./answer-sheet";
+import { loadSentSheet, type CustomerAnswer } from "./sent-sheet";
 
 /** A token with a broken %-escape is simply not a token (refused below), never an error. */
 function safeDecode(s: string): string {
@@ -18,24 +22,53 @@ export const metadata: Metadata = { title: "Your recommendation", robots: { inde
 
 type Props = { params: Promise<{ token: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
-/** A customer's read-only view of one sheet, opened from the e-mailed link; no account needed. */
+function AnswerState({ answer, token, justPaid, cancelled }: { answer: CustomerAnswer; token: string; justPaid: boolean; cancelled: boolean }) {
+  switch (answer.kind) {
+    case "open":
+      return (
+        <>
+          {justPaid ? <Notice tone="info">Thank you: the payment service is confirming your payment. This page shows it once it arrives; reload in a moment.</Notice> : null}
+          {cancelled ? <Notice tone="info">The checkout was cancelled; nothing was charged. You can accept again below whenever you like.</Notice> : null}
+          <AnswerSheet token={token} deposit={formatPrice(answer.deposit, answer.currency)} />
+        </>
+      );
+    case "ordered":
+      return (
+        <Notice tone="ok" title={answer.paid ? "Accepted: deposit received" : "Accepted"}>
+          <span data-testid="customer-order-status">
+            {answer.paid ? `Your deposit of ${formatPrice(answer.deposit, answer.currency)} was received. ` : ""}Your order: {ORDER_STATUS_LABELS[answer.status].toLowerCase()}. A receipt was e-mailed to you.
+          </span>
+        </Notice>
+      );
+    case "superseded":
+      return <Notice tone="warning" title="A newer version was sent">The shop sent you an updated version of this sheet; open the link in the newest e-mail to accept it. This copy stays as it was sent.</Notice>;
+    case "declined":
+      return <Notice tone="info" title="Declined">You declined this recommendation. Thank you for letting us know; ask the shop if you change your mind.</Notice>;
+    default:
+      return null;
+  }
+}
+
+/** A customer's view of one sheet as it was sent, opened from the e-mailed link; no account needed. */
 export default async function SharedSheetPage({ params, searchParams }: Props) {
-  const [{ token }, sp] = await Promise.all([params, searchParams]);
-  const loaded = await loadByToken(safeDecode(token), sp.units);
+  const [{ token: raw }, sp] = await Promise.all([params, searchParams]);
+  const token = safeDecode(raw);
+  const loaded = await loadSentSheet(token, sp.units);
   if (!loaded.ok) return <LinkRefused reason={loaded.reason} />;
   const other = loaded.unitSystem === "metric" ? "imperial" : "metric";
   return (
-    <div className="flex flex-col gap-4">
+    <div className="flex min-w-0 flex-col gap-4">
       <div className="no-print flex flex-wrap items-center gap-3 text-sm">
         <PrintButton />
         <Link href={`/share/${encodeURIComponent(token)}?units=${other}`} className="underline">
           Show in {other} units
         </Link>
-        {loaded.expiresAt ? (
-          <span className="text-muted">Read-only copy; this link works until {loaded.expiresAt.toLocaleDateString("en-GB", { year: "numeric", month: "long", day: "numeric" })}.</span>
-        ) : null}
+        <span className="text-muted">
+          {loaded.version ? `Version ${loaded.version}, as sent. ` : ""}This link works until {loaded.expiresAt.toLocaleDateString("en-GB", { year: "numeric", month: "long", day: "numeric" })}.
+        </span>
       </div>
-      <SheetView sheet={loaded.sheet} shop={loaded.shop} unitSystem={loaded.unitSystem} />
+      <AnswerState answer={loaded.answer} token={token} justPaid={sp.paid === "1"} cancelled={sp.checkout === "cancelled"} />
+      <SheetView sheet={loaded.sheet} shop={loaded.shop} currency={loaded.currency} unitSystem={loaded.unitSystem} />
     </div>
   );
 }

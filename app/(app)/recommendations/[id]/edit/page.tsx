@@ -32,6 +32,8 @@ export default async function EditRecommendationPage({ params }: { params: Promi
         parts={shelf.parts}
         unitSystem={unitSystem}
         initial={{
+          title: sheet.title,
+          targetRpm: sheet.targetRpm,
           customerName: sheet.customerName,
           customerEmail: sheet.customerEmail ?? "",
           vehicleNotes: sheet.vehicleNotes,

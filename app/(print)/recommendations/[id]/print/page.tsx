@@ -26,7 +26,7 @@ export default async function PrintRecommendationPage({ params, searchParams }: 
           <span className="text-xs text-muted">Fits one A4 or Letter page.</span>
         </div>
       )}
-      <SheetView sheet={loaded.sheet} shop={loaded.shop} unitSystem={loaded.unitSystem} print />
+      <SheetView sheet={loaded.sheet} shop={loaded.shop} currency={loaded.currency} unitSystem={loaded.unitSystem} print />
     </div>
   );
 }
