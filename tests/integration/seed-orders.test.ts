@@ -17,7 +17,7 @@ describe("the demo order", () => {
 
   it("is a paid order whose pulley came off the shelf; a second seed changes nothing", async () => {
     await seedDemo(t.db);
-    const part = demoPartNumber("blower", 3.6, 8);
+    const part = demoPartNumber("blower", 4.0, 8);
     const [{ stock: after }] = await t.db.select({ stock: pulleys.stock }).from(pulleys).where(eq(pulleys.partNumber, part));
     await seedDemo(t.db);
     const all = await t.db.select().from(orders);
