@@ -6,6 +6,7 @@ import { defaultSheetTitle } from "@/lib/recommendations/rules";
 import type { ShopDetails } from "@/db/repo/shop";
 import { formatPrice } from "@/lib/orders/money";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
+import { figureOrRange } from "@/lib/planner/range-words";
 import type { SheetRecord } from "@/components/recommendation/sheet-view";
 
 const ENTITIES: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
@@ -26,7 +27,9 @@ export function buildSheetEmail(opts: { sheet: SheetRecord; shop: ShopDetails; c
   const until = expiresAt.toLocaleDateString("en-GB", { year: "numeric", month: "long", day: "numeric" });
   const summary = [
     `Recommended blower pulley: ${pulley}`,
-    f.headline ? `Predicted boost: ${quantityText("pressure", f.headline.boostGauge, unitSystem)} at ${Math.round(f.headline.rpm)} rpm${f.headline.sold ? "" : " (redline)"}` : null,
+    f.headline
+      ? `Predicted boost: ${figureOrRange(f.headline, unitSystem, (h) => quantityText("pressure", h.boostGauge, unitSystem))} at ${Math.round(f.headline.rpm)} rpm${f.headline.sold ? "" : " (redline)"}`
+      : null,
     f.peakPower ? `Predicted peak net power: ${quantityText("power", f.peakPower.netPower, unitSystem)} at ${Math.round(f.peakPower.rpm)} rpm, with ${quantityText("pressure", f.peakPower.boostGauge, unitSystem)} boost` : null,
     f.peakTorque ? `Predicted peak net torque: ${quantityText("torque", f.peakTorque.torque, unitSystem)} at ${Math.round(f.peakTorque.rpm)} rpm` : null,
   ].filter((s): s is string => s !== null);

@@ -3,6 +3,7 @@
 import type { UnitSystem } from "@/calc";
 import { deltaText, quantityText } from "@/lib/units/format";
 import { deltaSpeeds, pointAt, type ItemCurve } from "@/lib/lessons/curves";
+import { figureOrRange } from "@/lib/planner/range-words";
 
 type DeltasTableProps = { curves: ItemCurve[]; unitSystem: UnitSystem };
 
@@ -43,9 +44,10 @@ export function DeltasTable({ curves, unitSystem }: DeltasTableProps) {
                 const p = pointAt(curve.points, rpm);
                 const base = pointAt(ref.points, rpm);
                 return (
-                  <td key={`${rpm}-${c.key}`} className="py-1.5 pr-3 text-right">
-                    {p ? quantityText(c.kind, p[c.key], unitSystem) : "–"}
-                    {i > 0 && p && base ? <span className="block text-base text-muted">{deltaText(c.kind, p[c.key] - base[c.key], unitSystem)}</span> : null}
+                  <td key={`${rpm}-${c.key}`} className={`py-1.5 pr-3 text-right ${p && !p.withinRange ? "text-base text-warn" : ""}`}>
+                    {p ? figureOrRange(p, unitSystem, (q) => quantityText(c.kind, q[c.key], unitSystem)) : "–"}
+                    {/* No change is worked out against or from a point outside the model's range. */}
+                    {i > 0 && p?.withinRange && base?.withinRange ? <span className="block text-base text-muted">{deltaText(c.kind, p[c.key] - base[c.key], unitSystem)}</span> : null}
                   </td>
                 );
               }),

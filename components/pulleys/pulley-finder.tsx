@@ -11,6 +11,7 @@ import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { figure, quantityText } from "@/lib/units/format";
 import { findPulley, safeCurve, withPulley } from "@/lib/planner/compute";
+import { figureOrRange } from "@/lib/planner/range-words";
 
 export type PulleyFinderProps = {
   spec: Combination;
@@ -127,7 +128,7 @@ export function PulleyFinder({ spec, system, rpms, stock, defaultRpm, onRpm, onA
             ).map(([side, label, s]) => (
               <li key={side} data-testid={`finder-${side}`} data-diameter-m={s?.diameter ?? ""}>
                 {label}:{" "}
-                {s ? `${quantityText("length-small", s.diameter, system)}, ${quantityText("pressure", s.point.boostGauge, system)}` : stock.length ? "none in stock on that side" : "no blower pulley is in stock"}
+                {s ? `${quantityText("length-small", s.diameter, system)}, ${figureOrRange(s.point, system, (p) => quantityText("pressure", p.boostGauge, system))}` : stock.length ? "none in stock on that side" : "no blower pulley is in stock"}
               </li>
             ))}
           </ul>

@@ -8,6 +8,7 @@ import { defaultSheetTitle, type PartLine } from "@/lib/recommendations/rules";
 import type { ShopDetails } from "@/db/repo/shop";
 import { formatPrice } from "@/lib/orders/money";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
+import { figureOrRange, outsideRangeText, type RangeOf } from "@/lib/planner/range-words";
 import { TotalFoot } from "@/components/ui/data-table";
 
 export type SheetRecord = {
@@ -40,18 +41,20 @@ export function SheetView({ sheet, shop, currency, unitSystem, print = false }: 
   const price = (a: string) => formatPrice(a, currency);
   const q = (kind: Parameters<typeof quantityText>[0], si: number) => quantityText(kind, si, unitSystem);
   const overLimit = f.blowerRpmAtRedline > f.blowerMaxRpm;
+  // Figures read at one speed: the model's words instead where that point is outside its range.
+  const at: <P extends RangeOf>(point: P, text: (p: P) => string) => string = (point, text) => figureOrRange(point, unitSystem, text);
   const rows: [string, string][] = [
     ["Blower", `${sheet.spec.blower.kind === "roots" ? "Roots" : "Twin-screw"}, ${q("blower-displacement", sheet.spec.blower.displacementPerRev)}`],
     ["Blower pulley / crank pulley", `${q("length-small", f.blowerPulleyDiameter)} / ${q("length-small", f.crankPulleyDiameter)}`],
     ["Drive ratio", `${f.driveRatio.toFixed(2)} : 1 (${(f.overdrive * 100).toFixed(0)} % overdrive)`],
     ["Boost at peak power", f.peakPower ? `${q("pressure", f.peakPower.boostGauge)} at ${rpm(f.peakPower.rpm)}` : "–"],
-    ...(f.headline?.sold ? [["Boost where it was sold", `${q("pressure", f.headline.boostGauge)} at ${rpm(f.headline.rpm)}`] as [string, string]] : []),
-    ["Boost at redline", f.atRedline ? `${q("pressure", f.atRedline.boostGauge)} at ${rpm(f.redlineRpm)}` : "–"],
+    ...(f.headline?.sold ? [["Boost where it was sold", at(f.headline, (h) => `${q("pressure", h.boostGauge)} at ${rpm(h.rpm)}`)] as [string, string]] : []),
+    ["Boost at redline", f.atRedline ? at(f.atRedline, (r) => `${q("pressure", r.boostGauge)} at ${rpm(f.redlineRpm)}`) : "–"],
     [
       "Blower speed at redline",
       `${rpm(f.blowerRpmAtRedline)} of ${rpm(f.blowerMaxRpm)} limit (${Math.round((f.blowerRpmAtRedline / f.blowerMaxRpm) * 100)} %)${overLimit ? ": OVER THE LIMIT" : ""}`,
     ],
-    ["Highest charge temperature", f.maxChargeTemperature ? `${q("temperature", f.maxChargeTemperature.manifoldTemperature)} at ${rpm(f.maxChargeTemperature.rpm)}` : "–"],
+    ["Highest charge temperature", f.maxChargeTemperature ? at(f.maxChargeTemperature, (hot) => `${q("temperature", hot.manifoldTemperature)} at ${rpm(hot.rpm)}`) : "–"],
     ["Peak net power", f.peakPower ? `${q("power", f.peakPower.netPower)} at ${rpm(f.peakPower.rpm)}` : "–"],
     ["Peak net torque", f.peakTorque ? `${q("torque", f.peakTorque.torque)} at ${rpm(f.peakTorque.rpm)}` : "–"],
   ];
@@ -84,8 +87,16 @@ export function SheetView({ sheet, shop, currency, unitSystem, print = false }: 
           </p>
           {f.headline ? (
             <p data-testid="headline-boost">
-              <span className="font-semibold">{q("pressure", f.headline.boostGauge)} boost</span> at {rpm(f.headline.rpm)}
-              {f.headline.sold ? "" : " (redline)"}, predicted
+              {f.headline.withinRange ? (
+                <>
+                  <span className="font-semibold">{q("pressure", f.headline.boostGauge)} boost</span> at {rpm(f.headline.rpm)}
+                  {f.headline.sold ? "" : " (redline)"}, predicted
+                </>
+              ) : (
+                <span className="font-semibold text-warn">
+                  At {rpm(f.headline.rpm)}: {outsideRangeText(f.headline.rangeReasons, unitSystem)}
+                </span>
+              )}
             </p>
           ) : null}
         </div>

@@ -1,6 +1,7 @@
 // What a recommendation sheet shows, computed from its frozen spec: the curves, the key figures
 // and the cautions. Pure, so the sheet, the print view, the share page and the e-mail agree.
 import { blowerSpeed, cautions, driveRatio, overdrive, trySolvePoint, type Caution, type Combination, type OperatingPoint } from "@/calc";
+import type { RangeOf } from "@/lib/planner/range-words";
 
 export type KeyFigures = {
   crankPulleyDiameter: number;
@@ -8,14 +9,17 @@ export type KeyFigures = {
   driveRatio: number;
   overdrive: number;
   redlineRpm: number;
+  /** Peaks are read among the points within the model's range only. */
   peakPower: { rpm: number; netPower: number; boostGauge: number } | null;
   peakTorque: { rpm: number; torque: number } | null;
-  atRedline: { boostGauge: number; manifoldTemperature: number } | null;
+  /** Figures read at a fixed speed carry that point's range: not to be shown outside it. */
+  atRedline: ({ boostGauge: number; manifoldTemperature: number } & RangeOf) | null;
   /** The headline: boost where it was sold (the target speed), or at redline when none was given. */
-  headline: { rpm: number; boostGauge: number; netPower: number; sold: boolean } | null;
+  headline: ({ rpm: number; boostGauge: number; netPower: number; sold: boolean } & RangeOf) | null;
   blowerRpmAtRedline: number;
   blowerMaxRpm: number;
-  maxChargeTemperature: { rpm: number; manifoldTemperature: number } | null;
+  /** Read among all points: the hottest may be the one outside the range, and then it says so. */
+  maxChargeTemperature: ({ rpm: number; manifoldTemperature: number } & RangeOf) | null;
 };
 
 export type SheetData = { points: OperatingPoint[]; cautions: Caution[]; figures: KeyFigures; skipped: number[] };
@@ -41,11 +45,14 @@ export function computeSheet(spec: Combination, targetRpm: number | null = null)
     else skipped.push(rpm);
   }
   const redline = spec.engine.redlineRpm;
-  const best = <K extends keyof OperatingPoint>(key: K) =>
-    points.reduce<OperatingPoint | null>((m, p) => (m === null || (p[key] as number) > (m[key] as number) ? p : m), null);
-  const power = best("netPower");
-  const torque = best("torque");
-  const hot = best("manifoldTemperature");
+  const trusted = points.filter((p) => p.withinRange);
+  const best = <K extends keyof OperatingPoint>(key: K, among: OperatingPoint[]) =>
+    among.reduce<OperatingPoint | null>((m, p) => (m === null || (p[key] as number) > (m[key] as number) ? p : m), null);
+  // A "peak" beyond the model's range is no peak: an out-of-range point's figures are not trusted.
+  const power = best("netPower", trusted);
+  const torque = best("torque", trusted);
+  const hot = best("manifoldTemperature", points);
+  const range = (p: OperatingPoint): RangeOf => ({ withinRange: p.withinRange, rangeReasons: p.rangeReasons });
   const top = points.find((p) => p.rpm === redline) ?? null;
   const sold = targetRpm === null ? null : (points.find((p) => p.rpm === targetRpm) ?? trySolvePoint(spec, targetRpm));
   const head = sold ?? top;
@@ -62,11 +69,11 @@ export function computeSheet(spec: Combination, targetRpm: number | null = null)
       redlineRpm: redline,
       peakPower: power && { rpm: power.rpm, netPower: power.netPower, boostGauge: power.boostGauge },
       peakTorque: torque && { rpm: torque.rpm, torque: torque.torque },
-      atRedline: top && { boostGauge: top.boostGauge, manifoldTemperature: top.manifoldTemperature },
-      headline: head && { rpm: head.rpm, boostGauge: head.boostGauge, netPower: head.netPower, sold: sold !== null },
+      atRedline: top && { boostGauge: top.boostGauge, manifoldTemperature: top.manifoldTemperature, ...range(top) },
+      headline: head && { rpm: head.rpm, boostGauge: head.boostGauge, netPower: head.netPower, sold: sold !== null, ...range(head) },
       blowerRpmAtRedline: blowerSpeed(spec, redline),
       blowerMaxRpm: spec.blower.maxRpm,
-      maxChargeTemperature: hot && { rpm: hot.rpm, manifoldTemperature: hot.manifoldTemperature },
+      maxChargeTemperature: hot && { rpm: hot.rpm, manifoldTemperature: hot.manifoldTemperature, ...range(hot) },
     },
   };
 }

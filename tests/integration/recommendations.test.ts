@@ -150,7 +150,7 @@ describe("recommendation sheets", () => {
   it("the headline boost is the one at the speed that was sold, not the redline figure", () => {
     const f = computeSheet(spec, 4000).figures;
     const pointAt4000 = computeSheet(spec).points.find((p) => p.rpm === 4000)!;
-    expect(f.headline).toEqual({ rpm: 4000, boostGauge: pointAt4000.boostGauge, netPower: pointAt4000.netPower, sold: true });
+    expect(f.headline).toEqual({ rpm: 4000, boostGauge: pointAt4000.boostGauge, netPower: pointAt4000.netPower, sold: true, withinRange: pointAt4000.withinRange, rangeReasons: pointAt4000.rangeReasons });
     // Common practice, no published source: a Roots blower's boost rises with engine speed, so
     // the sold figure below redline is the smaller one.
     expect(f.headline!.boostGauge).toBeLessThan(f.atRedline!.boostGauge);
