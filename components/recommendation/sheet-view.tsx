@@ -8,7 +8,7 @@ import { defaultSheetTitle, type PartLine } from "@/lib/recommendations/rules";
 import type { ShopDetails } from "@/db/repo/shop";
 import { formatPrice } from "@/lib/orders/money";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
-import { TotalFoot } from "@/components/ui/data-table";
+import { HeadCells, TotalFoot } from "@/components/ui/data-table";
 
 export type SheetRecord = {
   id: string;
@@ -139,10 +139,7 @@ export function SheetView({ sheet, shop, currency, unitSystem, print = false }: 
             <table className={`w-full ${small}`} data-testid="parts-table">
               <thead>
                 <tr className="border-b border-line text-left text-muted">
-                  <th scope="col" className="py-0.5 font-normal">Part</th>
-                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Qty</th>
-                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Each</th>
-                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Amount</th>
+                  <HeadCells cell="py-0.5 font-normal" right="pl-3 text-right" columns={["Part", { label: "Qty", right: true }, { label: "Each", right: true }, { label: "Amount", right: true }]} />
                 </tr>
               </thead>
               <tbody>

@@ -54,3 +54,18 @@ export function TotalFoot({ labelSpan, testId, trailing = 0, children }: { label
     </tfoot>
   );
 }
+
+/** A plain column: its label, right-aligned when it holds numbers or money. */
+export type HeadColumn = string | { label: React.ReactNode; right?: boolean; key?: string };
+
+/** Plain (unsorted) column headers: `cell` on each, `right` added on the right-aligned ones. */
+export function HeadCells({ columns, cell, right = "text-right" }: { columns: readonly HeadColumn[]; cell: string; right?: string }) {
+  return columns.map((c, i) => {
+    const col = typeof c === "string" ? { label: c, key: c } : c;
+    return (
+      <th key={col.key ?? i} scope="col" className={col.right ? `${cell} ${right}` : cell}>
+        {col.label}
+      </th>
+    );
+  });
+}
