@@ -3,6 +3,7 @@
 import Link from "next/link";
 import type { UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
+import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 import { Pager } from "@/components/ui/pager";
 import type { Role } from "@/db/schema";
@@ -128,15 +129,10 @@ export function CombinationsList({ role, unitSystem, actions }: { role: Role; un
               <caption className="sr-only">Combinations, page {data.page} of {pages}</caption>
               <thead className="border-b border-line text-left text-muted">
                 <tr>
-                  <th scope="col" className="px-3 py-2 font-medium">Name</th>
-                  {staff ? <th scope="col" className="px-3 py-2 font-medium">Customer</th> : null}
-                  {role !== "member" ? <th scope="col" className="px-3 py-2 font-medium">Owner</th> : null}
-                  <th scope="col" className="px-3 py-2 text-right font-medium">Engine</th>
-                  <th scope="col" className="px-3 py-2 font-medium">Blower</th>
-                  <th scope="col" className="px-3 py-2 text-right font-medium">Blower pulley</th>
-                  <th scope="col" className="px-3 py-2 text-right font-medium">Revision</th>
-                  <th scope="col" className="px-3 py-2 font-medium">Last saved</th>
-                  <th scope="col" className="px-3 py-2 font-medium"><span className="sr-only">Actions</span></th>
+                  <HeadCells
+                    cell="px-3 py-2 font-medium"
+                    columns={["Name", staff && "Customer", role !== "member" && "Owner", { label: "Engine", right: true }, "Blower", { label: "Blower pulley", right: true }, { label: "Revision", right: true }, "Last saved", ACTIONS_COLUMN]}
+                  />
                 </tr>
               </thead>
               <tbody>

@@ -1,6 +1,7 @@
 "use client";
 // Step 4 of the log upload: what will be stored, and every line that cannot be read.
 import type { UnitSystem } from "@/calc";
+import { HeadCells } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 import { fig, rpmText } from "@/lib/datalogs/format";
 import type { parseLog } from "@/lib/datalogs/parse";
@@ -50,13 +51,10 @@ export function LogPreview({ parsed, skip, ambientPa, unitSystem, pressureUnit, 
           <table className="text-sm" aria-label="First rows as they will be stored">
             <thead>
               <tr className="text-left text-muted">
-                <th className="pr-4 font-medium">Line</th>
-                <th className="pr-4 font-medium">Engine speed (rpm)</th>
-                <th className="pr-4 font-medium">Boost ({pressureUnit})</th>
-                <th className="pr-4 font-medium">Manifold absolute ({pressureUnit})</th>
-                <th className="pr-4 font-medium">Intake air ({temperatureUnit})</th>
-                <th className="pr-4 font-medium">Throttle (%)</th>
-                <th className="pr-4 font-medium">Time (s)</th>
+                <HeadCells
+                  cell="pr-4 font-medium"
+                  columns={["Line", "Engine speed (rpm)", `Boost (${pressureUnit})`, `Manifold absolute (${pressureUnit})`, `Intake air (${temperatureUnit})`, "Throttle (%)", "Time (s)"]}
+                />
               </tr>
             </thead>
             <tbody>

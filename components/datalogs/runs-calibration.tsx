@@ -6,6 +6,7 @@ import { unitLabel, type Combination, type UnitSystem } from "@/calc";
 import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "@/lib/datalogs/parse";
 import { fitRuns, predictNextPulley, type LogRun } from "@/lib/datalogs/runs";
 import { fig, rpmText } from "@/lib/datalogs/format";
+import { HeadCells } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 
 export type CalibrationLog = { id: string; name: string; revision: number; blowerPulleyDiameter: number; points: LogPoint[]; ambient: LogAmbient };
@@ -74,11 +75,10 @@ export function RunsCalibration({ thisLogId, logs, current, options, unitSystem,
             <table className="text-sm" aria-label="Residuals before and after the fit">
               <thead>
                 <tr className="text-left text-muted">
-                  <th className="pr-5 font-medium">Pulley</th>
-                  <th className="pr-5 font-medium">Engine speed (rpm)</th>
-                  <th className="pr-5 text-right font-medium">Measured ({pUnit})</th>
-                  <th className="pr-5 text-right font-medium">Residual before ({pUnit})</th>
-                  <th className="pr-5 text-right font-medium">Residual after ({pUnit})</th>
+                  <HeadCells
+                    cell="pr-5 font-medium"
+                    columns={["Pulley", "Engine speed (rpm)", ...[`Measured (${pUnit})`, `Residual before (${pUnit})`, `Residual after (${pUnit})`].map((label) => ({ label, key: label, right: true }))]}
+                  />
                 </tr>
               </thead>
               <tbody>

@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { BLOWER_DEMO_DEFAULTS, standardAtmosphere } from "@/calc";
 import { Button } from "@/components/ui/button";
+import { editorLabelOf } from "@/lib/combinations/field-table";
 import { fieldFromSI, fieldToSI } from "@/lib/combinations/form-model";
 import type { EditorProps } from "./editor";
 import { EditorBox, grid } from "./editor-box";
@@ -51,7 +52,7 @@ export function BlowerSection({ form, system, errors, blowers, values }: EditorP
           </select>
         </label>
         <label className="flex flex-col gap-1 text-sm">
-          <span className="font-medium">Blower kind</span>
+          <span className="font-medium">{editorLabelOf("blower.kind")}</span>
           <select
             {...kind}
             onChange={(e) => {
@@ -67,13 +68,13 @@ export function BlowerSection({ form, system, errors, blowers, values }: EditorP
             <option value="twin-screw">Twin-screw</option>
           </select>
         </label>
-        <NumField path="blower.displacementPerRev" label="Blower displacement" {...common} />
-        <NumField path="blower.builtInVolumeRatio" label="Built-in volume ratio" hint="1 for a Roots blower; above 1 for a twin-screw." readOnly={values.blower.kind === "roots"} {...common} />
-        <NumField path="blower.maxRpm" label="Blower speed limit" step="100" hint="The blower maker's limit, at the pulley shaft." {...common} />
-        <NumField path="blower.volumetricEfficiencyRef" label="Blower volumetric efficiency" hint="At the reference speed and pressure ratio 1.5." {...common} />
-        <NumField path="blower.referenceRpm" label="Reference blower speed" step="100" {...common} />
-        <NumField path="blower.internalEfficiency" label="Blower internal efficiency" {...common} />
-        <NumField path="blower.mechanicalEfficiency" label="Drive mechanical efficiency" {...common} />
+        <NumField path="blower.displacementPerRev" {...common} />
+        <NumField path="blower.builtInVolumeRatio" hint="1 for a Roots blower; above 1 for a twin-screw." readOnly={values.blower.kind === "roots"} {...common} />
+        <NumField path="blower.maxRpm" step="100" hint="The blower maker's limit, at the pulley shaft." {...common} />
+        <NumField path="blower.volumetricEfficiencyRef" hint="At the reference speed and pressure ratio 1.5." {...common} />
+        <NumField path="blower.referenceRpm" step="100" {...common} />
+        <NumField path="blower.internalEfficiency" {...common} />
+        <NumField path="blower.mechanicalEfficiency" {...common} />
       </div>
       <div className="flex flex-wrap items-center gap-2">
         <Button
@@ -104,7 +105,7 @@ export function AmbientSection({ form, system, errors, values }: Omit<EditorProp
   return (
     <EditorBox legend="Ambient air">
       <div className={grid}>
-        <NumField path="ambient.altitude" label="Altitude" hint="Only used to fill the barometer (standard atmosphere)." {...common} />
+        <NumField path="ambient.altitude" hint="Only used to fill the barometer (standard atmosphere)." {...common} />
         <div className="flex items-end">
           <Button
             type="button"
@@ -123,9 +124,9 @@ export function AmbientSection({ form, system, errors, values }: Omit<EditorProp
             Set barometer from altitude
           </Button>
         </div>
-        <NumField path="ambient.pressure" label="Barometer (absolute)" {...common} />
-        <NumField path="ambient.temperature" label="Ambient temperature" {...common} />
-        <NumField path="ambient.inletLoss" label="Inlet pressure loss" hint="Filter, throttle body or carburettor ahead of the blower." {...common} />
+        <NumField path="ambient.pressure" {...common} />
+        <NumField path="ambient.temperature" {...common} />
+        <NumField path="ambient.inletLoss" hint="Filter, throttle body or carburettor ahead of the blower." {...common} />
       </div>
       {note ? (
         <p role="status" className="text-xs text-muted">

@@ -26,18 +26,18 @@ export function Editor({ form, system, errors, blowers, values }: EditorProps) {
     <div className="flex flex-col gap-3">
       <EditorBox legend="Engine">
         <div className={grid}>
-          <NumField path="engine.displacement" label="Engine displacement" {...common} />
-          <NumField path="engine.cylinders" label="Cylinders" step="1" {...common} />
-          <NumField path="engine.redlineRpm" label="Redline" step="50" {...common} />
+          <NumField path="engine.displacement" {...common} />
+          <NumField path="engine.cylinders" step="1" {...common} />
+          <NumField path="engine.redlineRpm" step="50" {...common} />
         </div>
         <VeTable form={form} system={system} errors={errors} values={values} />
       </EditorBox>
       <BlowerSection form={form} system={system} errors={errors} blowers={blowers} values={values} />
       <EditorBox legend="Drive">
         <div className={grid}>
-          <NumField path="drive.crankPulleyDiameter" label="Crank pulley diameter" step="0.01" {...common} />
-          <NumField path="drive.blowerPulleyDiameter" label="Blower pulley diameter" step="0.01" {...common} />
-          <NumField path="drive.beltSlip" label="Belt slip" hint="Demo default 2 %." {...common} />
+          <NumField path="drive.crankPulleyDiameter" step="0.01" {...common} />
+          <NumField path="drive.blowerPulleyDiameter" step="0.01" {...common} />
+          <NumField path="drive.beltSlip" hint="Demo default 2 %." {...common} />
         </div>
       </EditorBox>
       <AmbientSection form={form} system={system} errors={errors} values={values} />
@@ -47,26 +47,26 @@ export function Editor({ form, system, errors, blowers, values }: EditorProps) {
         </label>
         {values.intercoolerOn ? (
           <div className={grid}>
-            <NumField path="intercooler.effectiveness" label="Intercooler effectiveness" {...common} />
-            <NumField path="intercooler.pressureDrop" label="Intercooler pressure drop" {...common} />
-            <NumField path="intercooler.coolantTemperature" label="Coolant temperature" {...common} />
+            <NumField path="intercooler.effectiveness" {...common} />
+            <NumField path="intercooler.pressureDrop" {...common} />
+            <NumField path="intercooler.coolantTemperature" {...common} />
           </div>
         ) : null}
       </EditorBox>
       <EditorBox legend="Fuel">
         <div className={grid}>
-          <NumField path="fuel.afr" label="Air-fuel ratio" hint="By mass, e.g. 11.8 under boost on gasoline." {...common} />
-          <NumField path="fuel.bsfc" label="BSFC" hint="The engine's own, before the blower drive." {...common} />
-          <NumField path="fuel.evaporatedBeforeBlower" label="Fuel evaporated before the blower" hint="Draw-through only; 0 for port injection." {...common} />
+          <NumField path="fuel.afr" hint="By mass, e.g. 11.8 under boost on gasoline." {...common} />
+          <NumField path="fuel.bsfc" hint="The engine's own, before the blower drive." {...common} />
+          <NumField path="fuel.evaporatedBeforeBlower" hint="Draw-through only; 0 for port injection." {...common} />
         </div>
         <label className="flex items-center gap-2 text-sm">
           <input type="checkbox" {...register("fuel.injectorsOn")} /> Check injector duty
         </label>
         {values.fuel.injectorsOn ? (
           <div className={grid}>
-            <NumField path="fuel.injectorCount" label="Number of injectors" step="1" {...common} />
-            <NumField path="fuel.injectorFlow" label="Flow of one injector" {...common} />
-            <NumField path="fuel.maxDuty" label="Maximum injector duty" {...common} />
+            <NumField path="fuel.injectorCount" step="1" {...common} />
+            <NumField path="fuel.injectorFlow" {...common} />
+            <NumField path="fuel.maxDuty" {...common} />
           </div>
         ) : null}
       </EditorBox>

@@ -3,11 +3,13 @@
 import type { UseFormRegister } from "react-hook-form";
 import type { UnitSystem } from "@/calc";
 import { Field } from "@/components/ui/field";
+import { editorLabelOf } from "@/lib/combinations/field-table";
 import { unitOf, type PlannerForm } from "@/lib/combinations/form-model";
 
 export type NumFieldProps = {
   path: string;
-  label: string;
+  /** Defaults to the field table's editor label. */
+  label?: string;
   system: UnitSystem;
   register: UseFormRegister<PlannerForm>;
   errors: Record<string, string>;
@@ -21,7 +23,7 @@ export function NumField({ path, label, system, register, errors, hint, step = "
   const unit = unitOf(path, system);
   return (
     <Field
-      label={label}
+      label={label ?? editorLabelOf(path)}
       unit={unit || undefined}
       type="number"
       inputMode="decimal"

@@ -3,7 +3,7 @@
 import type { useFieldArray, UseFormReturn } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
-import { TotalFoot } from "@/components/ui/data-table";
+import { HeadCells, TotalFoot } from "@/components/ui/data-table";
 import type { recommendationInputSchema } from "@/lib/recommendations/rules";
 import { usePrice } from "@/components/price";
 
@@ -27,21 +27,16 @@ export function PartsTable({ form, lines, watched, amounts, total, lineError }: 
       <caption className="sr-only">Parts list</caption>
       <thead>
         <tr className="border-b border-line text-left">
-          <th scope="col" className="py-1 font-medium">
-            Description
-          </th>
-          <th scope="col" className="w-32 py-1 text-right font-medium">
-            Each
-          </th>
-          <th scope="col" className="w-24 py-1 text-right font-medium">
-            Qty
-          </th>
-          <th scope="col" className="w-28 py-1 text-right font-medium">
-            Amount
-          </th>
-          <th scope="col" className="w-20 py-1">
-            <span className="sr-only">Remove</span>
-          </th>
+          <HeadCells
+            cell="py-1 font-medium"
+            columns={[
+              "Description",
+              { label: "Each", className: "w-32 py-1 text-right font-medium" },
+              { label: "Qty", className: "w-24 py-1 text-right font-medium" },
+              { label: "Amount", className: "w-28 py-1 text-right font-medium" },
+              { label: <span className="sr-only">Remove</span>, key: "remove", className: "w-20 py-1" },
+            ]}
+          />
         </tr>
       </thead>
       <tbody>

@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { fromSI, unitLabel, type UnitSystem } from "@/calc";
 import { apiJson, queryString } from "@/components/client-json";
-import { EmptyRow } from "@/components/ui/data-table";
+import { EmptyRow, HeadCells } from "@/components/ui/data-table";
 import { Pager } from "@/components/ui/pager";
 import { SelectField } from "@/components/ui/select-field";
 import { Notice } from "@/components/ui/notice";
@@ -79,10 +79,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
               <th scope="col" className="px-2 py-1.5 text-right font-medium">
                 Pulley <span className="font-normal text-muted">({unitLabel("length-small", unitSystem)})</span>
               </th>
-              <th scope="col" className="px-2 py-1.5 font-medium">Status</th>
-              <th scope="col" className="px-2 py-1.5 text-right font-medium">Total</th>
-              <th scope="col" className="px-2 py-1.5 font-medium">Updated</th>
-              <th scope="col" className="px-2 py-1.5 font-medium">By</th>
+              <HeadCells cell="px-2 py-1.5 font-medium" columns={["Status", { label: "Total", right: true }, "Updated", "By"]} />
             </tr>
           </thead>
           <tbody>

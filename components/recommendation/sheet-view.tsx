@@ -1,34 +1,22 @@
 // The recommendation sheet itself, as the customer sees it: on screen, printed (one page, black
 // on white) and behind a share link. Server-rendered; only the chart runs in the browser.
-import type { Combination, UnitSystem } from "@/calc";
+import type { UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { CurveChart } from "@/components/charts/curve-chart";
 import { quantityText } from "@/lib/units/format";
-import { defaultSheetTitle, type PartLine } from "@/lib/recommendations/rules";
+import { defaultSheetTitle } from "@/lib/recommendations/rules";
 import type { ShopDetails } from "@/db/repo/shop";
+import type { SheetSnapshot } from "@/db/repo/sheet-versions";
 import { formatPrice } from "@/lib/orders/money";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
 import { figureOrRange, outsideRangeText, type RangeOf } from "@/lib/planner/range-words";
-import { TotalFoot } from "@/components/ui/data-table";
+import { HeadCells, TotalFoot } from "@/components/ui/data-table";
 
-export type SheetRecord = {
-  id: string;
-  /** The customer-facing title (empty: a default built from the customer's name). */
-  title: string;
-  customerName: string;
-  customerEmail: string | null;
-  vehicleNotes: string;
-  notes: string;
-  status: string;
-  sentAt: Date | null;
-  createdAt: Date;
-  revision: number;
-  /** The engine speed the boost was sold at (rpm), or null for redline. */
-  targetRpm: number | null;
-  parts: PartLine[];
-  total: string;
-  spec: Combination;
-};
+/** What the sheet shows: a sent snapshot has it all, and so does a draft read from the database. */
+export type SheetRecord = Pick<
+  SheetSnapshot,
+  "id" | "title" | "customerName" | "customerEmail" | "vehicleNotes" | "notes" | "status" | "sentAt" | "createdAt" | "revision" | "targetRpm" | "parts" | "total" | "spec"
+>;
 
 /** `currency`: ISO 4217 code of the prices (the shop's, or the one frozen with a sent version). */
 export type SheetViewProps = { sheet: SheetRecord; shop: ShopDetails; currency: string; unitSystem: UnitSystem; print?: boolean };
@@ -150,10 +138,7 @@ export function SheetView({ sheet, shop, currency, unitSystem, print = false }: 
             <table className={`w-full ${small}`} data-testid="parts-table">
               <thead>
                 <tr className="border-b border-line text-left text-muted">
-                  <th scope="col" className="py-0.5 font-normal">Part</th>
-                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Qty</th>
-                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Each</th>
-                  <th scope="col" className="py-0.5 pl-3 text-right font-normal">Amount</th>
+                  <HeadCells cell="py-0.5 font-normal" right="pl-3 text-right" columns={["Part", { label: "Qty", right: true }, { label: "Each", right: true }, { label: "Amount", right: true }]} />
                 </tr>
               </thead>
               <tbody>

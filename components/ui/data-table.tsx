@@ -54,3 +54,25 @@ export function TotalFoot({ labelSpan, testId, trailing = 0, children }: { label
     </tfoot>
   );
 }
+
+/** A plain column: its label, right-aligned when it holds numbers or money, or its own classes. */
+export type HeadColumn = string | { label: React.ReactNode; right?: boolean; key?: string; className?: string };
+
+/** The unlabelled column of a row's buttons, named for screen readers. */
+export const ACTIONS_COLUMN = { label: <span className="sr-only">Actions</span>, key: "actions" } as const;
+
+/**
+ * Plain (unsorted) column headers: `cell` on each, `right` added on the right-aligned ones; a
+ * `false` column (one the viewer's role does not see) is left out.
+ */
+export function HeadCells({ columns, cell, right = "text-right" }: { columns: readonly (HeadColumn | false)[]; cell: string; right?: string }) {
+  return columns.map((c, i) => {
+    if (c === false) return null;
+    const col = typeof c === "string" ? { label: c, key: c } : c;
+    return (
+      <th key={col.key ?? i} scope="col" className={col.className ?? (col.right ? `${cell} ${right}` : cell)}>
+        {col.label}
+      </th>
+    );
+  });
+}

@@ -15,6 +15,7 @@ import { getRecommendation, type Recommendation } from "./recommendations";
 /** The sheet as sent: what the customer's link shows and what an order is made from. */
 export type SheetSnapshot = {
   id: string;
+  /** The customer-facing title (empty: a default built from the customer's name). */
   title: string;
   customerName: string;
   customerEmail: string | null;
@@ -23,6 +24,7 @@ export type SheetSnapshot = {
   revision: number;
   /** The combination's internal name: kept for staff, never shown to the customer. */
   combinationName: string;
+  /** The engine speed the boost was sold at (rpm), or null for redline. */
   targetRpm: number | null;
   blowerPulleyDiameter: number;
   parts: PartLine[];

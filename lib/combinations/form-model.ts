@@ -16,6 +16,7 @@ import {
   type QuantityKind,
   type UnitSystem,
 } from "@/calc";
+import { FORM_ONLY_FIELDS, SPEC_FIELDS, valueAt } from "./field-table";
 
 /** One VE row as edited: engine speed (rpm) and VE in percent. */
 export type VeRow = { rpm: number; ve: number };
@@ -51,37 +52,12 @@ export type PlannerForm = {
 /** How a field is shown: a quantity in the user's units, a fraction as percent, or as is. */
 export type FieldKind = QuantityKind | "percent" | "plain";
 
-/** Every numeric field of the form by dotted path (VE rows use "engine.veCurve.#.rpm|ve"). */
-export const FIELD_KINDS: Readonly<Record<string, FieldKind>> = {
-  "engine.displacement": "displacement",
-  "engine.cylinders": "plain",
-  "engine.redlineRpm": "speed",
-  "engine.veCurve.#.rpm": "speed",
-  "engine.veCurve.#.ve": "percent",
-  "blower.displacementPerRev": "blower-displacement",
-  "blower.builtInVolumeRatio": "plain",
-  "blower.maxRpm": "speed",
-  "blower.volumetricEfficiencyRef": "percent",
-  "blower.referenceRpm": "speed",
-  "blower.internalEfficiency": "percent",
-  "blower.mechanicalEfficiency": "percent",
-  "drive.crankPulleyDiameter": "length-small",
-  "drive.blowerPulleyDiameter": "length-small",
-  "drive.beltSlip": "percent",
-  "ambient.altitude": "altitude",
-  "ambient.pressure": "pressure",
-  "ambient.temperature": "temperature",
-  "ambient.inletLoss": "pressure",
-  "intercooler.effectiveness": "percent",
-  "intercooler.pressureDrop": "pressure",
-  "intercooler.coolantTemperature": "temperature",
-  "fuel.afr": "plain",
-  "fuel.bsfc": "bsfc",
-  "fuel.injectorCount": "plain",
-  "fuel.injectorFlow": "injector-flow",
-  "fuel.maxDuty": "percent",
-  "fuel.evaporatedBeforeBlower": "percent",
-};
+/** Every numeric field of the form by dotted path (VE rows use "engine.veCurve.#.rpm|ve"), from the field table. */
+export const FIELD_KINDS: Readonly<Record<string, FieldKind>> = Object.fromEntries(
+  [...SPEC_FIELDS, ...FORM_ONLY_FIELDS].flatMap((f): [string, FieldKind][] =>
+    f.quantity === "text" || f.quantity === "ve-curve" ? [] : [[f.path, f.quantity === "count" ? "plain" : f.quantity]],
+  ),
+);
 
 /** The kind of a dotted path, VE row indexes folded to "#". */
 export function kindOf(path: string): FieldKind | undefined {
@@ -121,8 +97,7 @@ const num = (v: unknown): number => (typeof v === "number" ? v : v === "" || v =
  * what that stored value displays as keeps the stored value itself: a save in inches does not
  * turn an untouched 0.005 m³ into 0.0049999997 m³.
  */
-const storedAt = (base: Combination | undefined, path: string): unknown =>
-  path.split(".").reduce<unknown>((o, k) => (o && typeof o === "object" ? (o as Record<string, unknown>)[k] : undefined), base);
+const storedAt = (base: Combination | undefined, path: string): unknown => valueAt(base, path);
 
 export function toSpec(f: PlannerForm, system: UnitSystem, base?: Combination): CombinationInput {
   const stored = (path: string) => storedAt(base, path);

@@ -5,6 +5,7 @@ import { getDb } from "@/db/client";
 import { canAuthorLessons } from "@/db/policy";
 import { listLessons } from "@/db/repo/lessons";
 import { toActor } from "@/db/repo/users";
+import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
 import { NewLessonForm } from "./new-lesson-form";
 
 export const metadata: Metadata = { title: "Lessons" };
@@ -36,12 +37,10 @@ export default async function LessonsPage() {
             <table className="w-full border-collapse text-sm">
               <thead>
                 <tr className="border-b border-line text-left">
-                  <th scope="col" className="py-2 pr-3 font-medium">Title</th>
-                  {actor.role === "admin" ? <th scope="col" className="py-2 pr-3 font-medium">Instructor</th> : null}
-                  <th scope="col" className="py-2 pr-3 font-medium">Steps</th>
-                  <th scope="col" className="py-2 pr-3 font-medium">Status</th>
-                  <th scope="col" className="py-2 pr-3 font-medium">Class code</th>
-                  <th scope="col" className="py-2 font-medium"><span className="sr-only">Actions</span></th>
+                  <HeadCells
+                    cell="py-2 pr-3 font-medium"
+                    columns={["Title", actor.role === "admin" && "Instructor", "Steps", "Status", "Class code", { ...ACTIONS_COLUMN, className: "py-2 font-medium" }]}
+                  />
                 </tr>
               </thead>
               <tbody>

@@ -6,6 +6,7 @@ import { listOrders } from "@/db/repo/orders";
 import { toActor } from "@/db/repo/users";
 import { formatPrice } from "@/lib/orders/money";
 import { ORDER_STATUSES, ORDER_STATUS_LABELS, orderListQuerySchema } from "@/lib/orders/status";
+import { HeadCells } from "@/components/ui/data-table";
 
 export const metadata: Metadata = { title: "Orders" };
 
@@ -57,12 +58,7 @@ export default async function OrdersPage({ searchParams }: Props) {
           <caption className="sr-only">Orders</caption>
           <thead className="border-b border-line text-left">
             <tr>
-              <th scope="col" className="px-2 py-1.5 font-medium">Customer</th>
-              <th scope="col" className="px-2 py-1.5 font-medium">Sheet</th>
-              <th scope="col" className="px-2 py-1.5 font-medium">Status</th>
-              <th scope="col" className="px-2 py-1.5 text-right font-medium">Deposit</th>
-              <th scope="col" className="px-2 py-1.5 text-right font-medium">Total</th>
-              <th scope="col" className="px-2 py-1.5 font-medium">Updated</th>
+              <HeadCells cell="px-2 py-1.5 font-medium" columns={["Customer", "Sheet", "Status", { label: "Deposit", right: true }, { label: "Total", right: true }, "Updated"]} />
             </tr>
           </thead>
           <tbody>

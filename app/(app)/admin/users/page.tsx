@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { UserAccessControls } from "@/components/admin/user-access-controls";
-import { EmptyRow } from "@/components/ui/data-table";
+import { EmptyRow, HeadCells } from "@/components/ui/data-table";
 import { setUserDisabledAction, setUserRoleAction } from "./actions";
 import { getDb } from "@/db/client";
 import { listUsers, toActor } from "@/db/repo/users";
@@ -43,10 +43,7 @@ export default async function AdminUsersPage({ searchParams }: { searchParams: P
           <caption className="sr-only">Accounts, page {page} of {pages}</caption>
           <thead className="border-b border-line text-left text-muted">
             <tr>
-              <th scope="col" className="px-3 py-2 font-medium">Name</th>
-              <th scope="col" className="px-3 py-2 font-medium">E-mail</th>
-              <th scope="col" className="px-3 py-2 font-medium">Since</th>
-              <th scope="col" className="px-3 py-2 font-medium">Role and access</th>
+              <HeadCells cell="px-3 py-2 font-medium" columns={["Name", "E-mail", "Since", "Role and access"]} />
             </tr>
           </thead>
           <tbody>

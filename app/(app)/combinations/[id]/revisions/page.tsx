@@ -13,6 +13,7 @@ import { NotFoundError } from "@/lib/errors";
 import { canWriteOwned } from "@/db/policy";
 import { getCombination, listRevisions } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
+import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
 
 export const metadata: Metadata = { title: "History" };
 
@@ -69,11 +70,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
           <table className="w-full text-sm tabular-nums">
             <thead className="border-b border-line text-left text-muted">
               <tr>
-                <th scope="col" className="px-3 py-2 text-right font-medium">Revision</th>
-                <th scope="col" className="px-3 py-2 font-medium">Note</th>
-                <th scope="col" className="px-3 py-2 font-medium">By</th>
-                <th scope="col" className="px-3 py-2 font-medium">Saved</th>
-                <th scope="col" className="px-3 py-2 font-medium"><span className="sr-only">Actions</span></th>
+                <HeadCells cell="px-3 py-2 font-medium" columns={[{ label: "Revision", right: true }, "Note", "By", "Saved", ACTIONS_COLUMN]} />
               </tr>
             </thead>
             <tbody>
