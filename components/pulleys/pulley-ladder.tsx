@@ -76,7 +76,7 @@ export function PulleyLadder({ rows, system, rpm, fromShelf, onUse }: PulleyLadd
         <span data-testid="ladder-rpm">{figure("speed", rpm, system)}</span> rpm, the finder&apos;s engine speed.
       </p>
       <div ref={box} className="relative max-h-96 overflow-auto">
-        <table className="w-full border-collapse text-sm" data-testid="pulley-ladder">
+        <table className="w-full border-collapse text-sm" data-testid="pulley-ladder" data-rpm={rpm}>
           <thead className="sticky top-0 border-b border-line bg-panel text-muted">
             <tr>
               {head("diameter", `Blower pulley (${unitLabel("length-small", system)})`)}

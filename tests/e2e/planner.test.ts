@@ -122,15 +122,15 @@ describe("planner in Chromium", () => {
     await page.keyboard.press("Tab");
     await expect(page.evaluate(() => document.activeElement?.id)).resolves.toBe("f-drive.blowerPulleyDiameter");
     await page.keyboard.press("ControlOrMeta+a");
-    await page.keyboard.type("3.0");
-    const smaller: Combination = { ...demoSpec, drive: { ...demoSpec.drive, blowerPulleyDiameter: inToM(3.0) } };
+    await page.keyboard.type("2.8");
+    const smaller: Combination = { ...demoSpec, drive: { ...demoSpec.drive, blowerPulleyDiameter: inToM(2.8) } };
     const expected = paToPsi(solvePoint(smaller, demoSpec.engine.redlineRpm).boostGauge).toFixed(1);
     await page.getByTestId("readout-boost-redline").filter({ hasText: `${expected} psi` }).waitFor({ timeout: 10_000 });
     const after = await chartSeries(page);
     // common practice, no published source: a smaller blower pulley raises boost at every engine speed
     after[0].rpm.forEach((n, k) => expect(after[0].boost[k]).toBeGreaterThan(before[0].boost[before[0].rpm.indexOf(n)]));
     const currentRow = page.locator('[data-testid="ladder-row"][aria-current="true"]');
-    await expect(currentRow.getAttribute("data-diameter-m").then(Number)).resolves.toBeCloseTo(inToM(3.0), 9);
+    await expect(currentRow.getAttribute("data-diameter-m").then(Number)).resolves.toBeCloseTo(inToM(2.8), 9);
     const ladderAfter = await currentBoost();
     expect(ladderAfter).toBeGreaterThan(ladderBefore);
     // Every ladder figure is at the one speed it states (peak power speed until the finder's is typed).

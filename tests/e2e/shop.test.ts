@@ -49,8 +49,8 @@ describe("shop: recommendation sheet and parts shelf", () => {
     await page.waitForURL(/search=Work/);
     await page.getByTestId("combination-choices").getByRole("link", { name: /^Work truck V6 4\.3 L, Roots/ }).click();
     await page.waitForURL(/\/recommendations\/new\?combination=/);
-    // It has three revisions; the newest is preselected.
-    await expect(page.getByLabel("Revision to use").inputValue()).resolves.toBe("3");
+    // It has two revisions; the newest is preselected.
+    await expect(page.getByLabel("Revision to use").inputValue()).resolves.toBe("2");
 
     // The ladder (the planner's own) lists the shelf's blower pulleys; use 3.00 in from it.
     await page.getByRole("button", { name: "Use the 3.00 in pulley" }).click();
@@ -156,13 +156,13 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const errors = watchErrors(page);
     await page.goto(`${BASE_URL}/shelf`);
     const pager = page.getByRole("navigation", { name: "Pulleys pages" });
-    // The demo shelf has 28 pulleys (23 blower, 5 crank): two pages of 15.
-    await pager.getByText("Page 1 of 2 · 28 items").waitFor();
+    // The demo shelf has 29 pulleys (23 blower, 6 crank): two pages of 15.
+    await pager.getByText("Page 1 of 2 · 29 items").waitFor();
     await pager.getByRole("button", { name: "Next" }).click();
-    await pager.getByText("Page 2 of 2 · 28 items").waitFor();
+    await pager.getByText("Page 2 of 2 · 29 items").waitFor();
     // A new filter starts again at page 1.
     await page.getByLabel("Position").selectOption("crank");
-    await pager.getByText("Page 1 of 1 · 5 items").waitFor();
+    await pager.getByText("Page 1 of 1 · 6 items").waitFor();
     // Diameter is the default order, smallest first; a press on its header reverses it.
     const diameters = async () => (await page.locator("tbody tr[data-part] td:nth-child(3)").allTextContents()).map(Number);
     const diameterHeader = page.locator("th", { has: page.getByRole("button", { name: /^Diameter/ }) });
