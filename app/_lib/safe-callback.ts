@@ -14,5 +14,9 @@ export function safeCallback(url: unknown): string {
     return DEFAULT_AFTER_SIGN_IN;
   }
   if (resolved.origin !== BASE) return DEFAULT_AFTER_SIGN_IN;
-  return resolved.pathname + resolved.search + resolved.hash;
+  const out = resolved.pathname + resolved.search + resolved.hash;
+  // Dot segments can fold "/.//host" into "//host", which a browser reads as another host:
+  // what we hand back must itself resolve to our own origin.
+  if (out.startsWith("//") || new URL(out, BASE).origin !== BASE) return DEFAULT_AFTER_SIGN_IN;
+  return out;
 }

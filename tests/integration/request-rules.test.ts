@@ -15,6 +15,10 @@ describe("safeCallback", () => {
     },
   );
 
+  it.each(["/.//evil.example/phish", "/././/evil.example", "/a/..//evil.example"])("refuses %j, whose dot segments fold into another host", (url) => {
+    expect(safeCallback(url)).toBe("/combinations");
+  });
+
   it.each(["/combinations", "/combinations/abc?tab=2#x", "/lessons/join?code=AB12", "/"])("keeps %j", (url) => {
     expect(safeCallback(url)).toBe(url);
   });
