@@ -52,9 +52,9 @@ describe("shop: recommendation sheet and parts shelf", () => {
     // It has two revisions; the newest is preselected.
     await expect(page.getByLabel("Revision to use").inputValue()).resolves.toBe("2");
 
-    // The ladder (the planner's own) lists the shelf's blower pulleys; use 3.00 in from it.
-    await page.getByRole("button", { name: "Use the 3.00 in pulley" }).click();
-    await expect(page.getByLabel("Recommended blower pulley").inputValue()).resolves.toBe(String(Number((3 * 0.0254).toFixed(6))));
+    // The ladder (the planner's own) lists the shelf's blower pulleys; use 2.90 in from it (3.00 in is already the current row).
+    await page.getByRole("button", { name: "Use the 2.90 in pulley" }).click();
+    await expect(page.getByLabel("Recommended blower pulley").inputValue()).resolves.toBe(String(Number((2.9 * 0.0254).toFixed(6))));
     // The finder answers for a target boost.
     await page.getByLabel("Target boost").fill("8");
     await page.getByRole("button", { name: "Find pulley" }).click();
@@ -81,7 +81,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const id = page.url().split("/").pop()!;
 
     await sheetReady(page);
-    await expect(page.getByTestId("recommended-pulley").textContent()).resolves.toBe("3.00 in");
+    await expect(page.getByTestId("recommended-pulley").textContent()).resolves.toBe("2.90 in");
     // The shop's currency (USD in the demo) is shown with its symbol.
     await expect(page.getByTestId("sheet-total").textContent()).resolves.toBe(`$${expectedTotal}`);
     await expect(page.getByTestId("sheet-status").textContent()).resolves.toBe("Draft");
@@ -117,7 +117,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     expect(mails).toHaveLength(1);
     const [mail] = mails;
     expect(mail.subject).toMatch(/recommendation/i);
-    expect(mail.text).toContain("Recommended blower pulley: 3.00 in");
+    expect(mail.text).toContain("Recommended blower pulley: 2.90 in");
     expect(mail.text).toContain(`Total: $${expectedTotal}`);
     expect(mail.html).toContain("Open the recommendation sheet");
     const link = mail.text.match(/https?:\/\/\S+\/share\/\S+/)?.[0];
@@ -168,7 +168,7 @@ describe("shop: recommendation sheet and parts shelf", () => {
     const diameterHeader = page.locator("th", { has: page.getByRole("button", { name: /^Diameter/ }) });
     await expect(diameterHeader.getAttribute("aria-sort")).resolves.toBe("ascending");
     const up = await diameters();
-    expect(up).toHaveLength(5);
+    expect(up).toHaveLength(6);
     expect([...up].sort((a, b) => a - b)).toEqual(up);
     await page.getByRole("button", { name: /^Diameter/ }).click();
     await expect.poll(() => diameterHeader.getAttribute("aria-sort")).toBe("descending");
