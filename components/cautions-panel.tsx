@@ -2,9 +2,9 @@
 // the general safety notice. Plain markup, so it prints black on white with the page.
 import { SAFETY_NOTICE, type Caution, type CautionSeverity } from "@/calc";
 
-const WORD: Record<CautionSeverity, string> = { danger: "Danger", warning: "Warning", info: "Note" };
+export const SEVERITY_WORD: Record<CautionSeverity, string> = { danger: "Danger", warning: "Warning", info: "Note" };
 const ORDER: Record<CautionSeverity, number> = { danger: 0, warning: 1, info: 2 };
-const TONE: Record<CautionSeverity, string> = {
+export const SEVERITY_TONE: Record<CautionSeverity, string> = {
   danger: "border-danger bg-danger-bg text-danger",
   warning: "border-warn bg-warn-bg text-warn",
   info: "border-line bg-panel text-fg",
@@ -25,21 +25,28 @@ export function CautionsPanel({ cautions, compact = false }: CautionsPanelProps)
       ) : (
         <ul className="flex flex-col gap-1.5">
           {specific.map((c, i) => (
-            <li key={`${c.code}-${i}`} data-severity={c.severity} className={`rounded-md border px-2.5 py-1.5 text-sm print:border-black print:bg-white print:text-black ${TONE[c.severity]}`}>
-              <span className="font-semibold">{WORD[c.severity]}: </span>
+            <li key={`${c.code}-${i}`} data-severity={c.severity} className={`rounded-md border px-2.5 py-1.5 text-sm print:border-black print:bg-white print:text-black ${SEVERITY_TONE[c.severity]}`}>
+              <span className="font-semibold">{SEVERITY_WORD[c.severity]}: </span>
               {c.message}
             </li>
           ))}
         </ul>
       )}
-      <div className="text-xs text-muted print:text-black">
-        <p className="font-medium">Always</p>
-        <ul className={`list-disc pl-4 ${compact ? "" : "flex flex-col gap-0.5"}`}>
-          {SAFETY_NOTICE.map((line) => (
-            <li key={line}>{line}</li>
-          ))}
-        </ul>
-      </div>
+      <SafetyNotice compact={compact} />
     </section>
+  );
+}
+
+/** The general safety notice, listed once under every set of cautions. */
+export function SafetyNotice({ compact = false }: { compact?: boolean }) {
+  return (
+    <div className="text-xs text-muted print:text-black">
+      <p className="font-medium">Always</p>
+      <ul className={`list-disc pl-4 ${compact ? "" : "flex flex-col gap-0.5"}`}>
+        {SAFETY_NOTICE.map((line) => (
+          <li key={line}>{line}</li>
+        ))}
+      </ul>
+    </div>
   );
 }

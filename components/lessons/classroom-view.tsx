@@ -3,15 +3,18 @@
 // the step's items overlaid on one chart, a small deltas table, the note, and a "what if" slider
 // that moves every curve live without saving anything.
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { cautions as cautionsOf, type UnitSystem } from "@/calc";
-import { CautionsPanel } from "@/components/cautions-panel";
+import type { UnitSystem } from "@/calc";
 import { CurveChart } from "@/components/charts/curve-chart";
 import type { LessonStep } from "@/db/repo/lessons";
 import { CopyItemButton, type CopyItemAction } from "./copy-item-button";
+import { changeText } from "@/lib/lessons/change-text";
 import { SERIES_METRIC, stepCurves, type WhatIf } from "@/lib/lessons/curves";
+import { fillNoteFigures } from "@/lib/lessons/note-figures";
+import { stepCautions } from "@/lib/lessons/step-cautions";
 import { DeltasTable } from "./deltas-table";
 import { LessonNote } from "./lesson-note";
 import { KeyGuide } from "./key-guide";
+import { StepCautions } from "./step-cautions";
 import { useRoomSize } from "./room-size";
 import { WhatIfControl } from "./what-if-control";
 
@@ -73,8 +76,9 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
   }, [index, count, go]);
 
   const step = steps[index];
-  const curves = useMemo(() => (step ? stepCurves(step.items, whatIf) : []), [step, whatIf]);
-  const warnings = useMemo(() => curves.flatMap((c) => (c.points.length ? cautionsOf(c.spec, c.points) : [])), [curves]);
+  const curves = useMemo(() => (step ? stepCurves(step.items, whatIf, unitSystem) : []), [step, whatIf, unitSystem]);
+  const warnings = useMemo(() => stepCautions(curves), [curves]);
+  const note = useMemo(() => (step ? fillNoteFigures(step.note, curves, unitSystem) : ""), [step, curves, unitSystem]);
 
   if (!step) {
     return <p className="text-2xl">This lesson has no steps yet.</p>;
@@ -115,7 +119,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
             unitSystem={unitSystem}
             redlineRpm={redline}
             blowerMaxRpm={step.series.includes("blowerSpeed") ? blowerMax : undefined}
-            ariaLabel={`${step.title}: ${step.items.map((i) => i.label).join(" against ")}, against engine speed`}
+            ariaLabel={`${step.title}: ${curves.map((c) => c.label).join(" against ")}, against engine speed`}
             height={room.height}
             fontSize={room.fontSize}
           />
@@ -129,7 +133,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
 
         <div className="flex min-w-0 flex-col gap-6">
           <DeltasTable curves={curves} unitSystem={unitSystem} />
-          <LessonNote markdown={step.note} className="text-xl leading-relaxed" />
+          <LessonNote markdown={note} className="text-xl leading-relaxed" />
         </div>
       </div>
 
@@ -144,6 +148,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
                 <p className="text-lg font-medium">{it.label}</p>
                 <p className="text-sm text-muted">
                   {it.name}, revision {it.revision}
+                  {it.change ? `; shown as built and with ${changeText(it.change, unitSystem)} (copied with the change)` : ""}
                 </p>
               </div>
               <CopyItemButton action={copyItem} stepId={step.id} item={i} label={it.label} />
@@ -152,7 +157,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
         </ul>
       </section>
 
-      <CautionsPanel cautions={warnings} compact />
+      <StepCautions cautions={warnings} unitSystem={unitSystem} />
       <KeyGuide />
     </div>
   );

@@ -1,5 +1,5 @@
 // Boost and net power of each item at a couple of engine speeds, with the change against the
-// first item (the step's reference), in the viewer's units.
+// first item (the step's reference) or, for an item's what-if, against that item as built.
 import type { UnitSystem } from "@/calc";
 import { deltaText, quantityText } from "@/lib/units/format";
 import { deltaSpeeds, pointAt, type ItemCurve } from "@/lib/lessons/curves";
@@ -18,7 +18,7 @@ export function DeltasTable({ curves, unitSystem }: DeltasTableProps) {
   const [ref] = curves;
   return (
     <table className="w-full border-collapse text-lg tabular-nums" data-testid="deltas-table">
-      <caption className="mb-2 text-left text-base text-muted">Figures at two engine speeds; the change is against “{ref.label}”.</caption>
+      <caption className="mb-2 text-left text-base text-muted">Figures at two engine speeds; the change is against “{ref.label}”{curves.some((c) => c.base !== null) ? ", and a what-if's against its item as built" : ""}.</caption>
       <thead>
         <tr className="border-b border-line text-left text-base">
           <th scope="col" className="py-1 pr-3 font-medium">
@@ -42,7 +42,7 @@ export function DeltasTable({ curves, unitSystem }: DeltasTableProps) {
             {speeds.flatMap((rpm) =>
               COLUMNS.map((c) => {
                 const p = pointAt(curve.points, rpm);
-                const base = pointAt(ref.points, rpm);
+                const base = pointAt(curves[curve.base ?? 0].points, rpm);
                 return (
                   <td key={`${rpm}-${c.key}`} className={`py-1.5 pr-3 text-right ${p && !p.withinRange ? "text-base text-warn" : ""}`}>
                     {p ? figureOrRange(p, unitSystem, (q) => quantityText(c.kind, q[c.key], unitSystem)) : "–"}

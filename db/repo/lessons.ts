@@ -6,7 +6,9 @@
 import crypto from "node:crypto";
 import { and, asc, count, desc, eq, inArray, sql } from "drizzle-orm";
 import { z } from "zod";
-import { combinationSchema } from "@/calc";
+import { combinationSchema, type UnitSystem } from "@/calc";
+import { changeText } from "@/lib/lessons/change-text";
+import { applyWhatIf } from "@/lib/lessons/curves";
 import {
   copySchema,
   joinSchema,
@@ -233,7 +235,7 @@ async function snapshotItems(db: DbOrTx, actor: Actor, items: z.output<typeof st
   for (const [i, it] of items.entries()) {
     const kept = it.revision !== "current" && previous.find((p) => p.combinationId === it.combinationId && p.revision === it.revision);
     if (kept) {
-      out.push({ ...kept, label: it.label });
+      out.push({ ...kept, label: it.label, change: it.change });
       continue;
     }
     let combo;
@@ -244,12 +246,12 @@ async function snapshotItems(db: DbOrTx, actor: Actor, items: z.output<typeof st
       throw e;
     }
     if (it.revision === "current") {
-      out.push({ combinationId: combo.id, revision: combo.revision, label: it.label, name: combo.name, spec: combinationSchema.parse(combo.spec) });
+      out.push({ combinationId: combo.id, revision: combo.revision, label: it.label, name: combo.name, spec: combinationSchema.parse(combo.spec), change: it.change });
       continue;
     }
     if (it.revision > combo.revision) throw new FieldError(`items.${i}.revision`, `“${combo.name}” has no revision ${it.revision} (latest is ${combo.revision}).`);
     const rev = await getRevision(db, actor, combo.id, it.revision);
-    out.push({ combinationId: combo.id, revision: rev.number, label: it.label, name: rev.name, spec: combinationSchema.parse(rev.spec) });
+    out.push({ combinationId: combo.id, revision: rev.number, label: it.label, name: rev.name, spec: combinationSchema.parse(rev.spec), change: it.change });
   }
   return out;
 }
@@ -325,13 +327,21 @@ export async function joinLesson(db: DbOrTx, actor: Actor, input: { code: unknow
   return { id: row.id, title: row.title };
 }
 
-/** Copies one item of a step into `actor`'s own combinations, with the spec the step shows. */
+/**
+ * Copies one item of a step into `actor`'s own combinations with the spec the step shows: an item
+ * with a what-if is copied changed. A short name ("Step 2 — Truck, blower pulley 2.80 in"); the
+ * lesson and step go in the revision note.
+ */
 export async function copyStepItem(db: DbOrTx, actor: Actor, lessonId: string, stepId: string, input: { item: unknown }) {
   const { item } = copySchema.parse(input);
   const { row } = await getReadable(db, actor, lessonId);
   const step = await getStep(db, lessonId, stepId);
   const it = step.items[item];
   if (!it) throw new FieldError("item", `This step has ${step.items.length} items; there is no item ${item + 1}.`);
-  const name = `${it.label} (from lesson ${row.title})`.slice(0, 120);
-  return createCombination(db, actor, { name, spec: it.spec, note: `Copied from the lesson “${row.title}”, step “${step.title}”` });
+  // The name speaks the copier's units, like the classroom they copied from.
+  const [me] = await db.select({ unitSystem: users.unitSystem }).from(users).where(eq(users.id, actor.id));
+  const change = it.change ? changeText(it.change, (me?.unitSystem ?? "imperial") as UnitSystem) : null;
+  const name = `Step ${step.position} — ${change ? `${it.label}, ${change}` : it.label}`.slice(0, 120);
+  const note = `From the lesson “${row.title}”, step ${step.position} “${step.title}”${change ? `, with ${change}` : ""}`.slice(0, 500);
+  return createCombination(db, actor, { name, spec: it.change ? applyWhatIf(it.spec, it.change) : it.spec, note });
 }
