@@ -11,6 +11,7 @@ import { changeText } from "@/lib/lessons/change-text";
 import { SERIES_METRIC, stepCurves, type WhatIf } from "@/lib/lessons/curves";
 import { fillNoteFigures } from "@/lib/lessons/note-figures";
 import { stepCautions } from "@/lib/lessons/step-cautions";
+import { stripStepNumber } from "@/lib/lessons/rules";
 import { DeltasTable } from "./deltas-table";
 import { LessonNote } from "./lesson-note";
 import { KeyGuide } from "./key-guide";
@@ -96,7 +97,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
           <p className="text-lg text-muted">
             {title} · {ownerName}
           </p>
-          <h1 className="text-2xl font-semibold leading-tight sm:text-4xl">{step.title}</h1>
+          <h1 className="text-2xl font-semibold leading-tight sm:text-4xl">{stripStepNumber(step.title)}</h1>
         </div>
         <nav aria-label="Steps" className="flex flex-wrap items-center gap-3 text-base sm:text-xl">
           <button type="button" onClick={() => go(index - 1)} disabled={index === 0} className="rounded-md border border-line bg-panel px-4 py-2 font-medium disabled:opacity-40">

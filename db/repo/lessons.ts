@@ -172,7 +172,7 @@ export async function listStepSources(db: DbOrTx, actor: Actor) {
   const { items } = await listCombinations(db, actor, { pageSize: 100, sort: "name", dir: "asc" });
   const revs = items.length
     ? await db
-        .select({ combinationId: combinationRevisions.combinationId, number: combinationRevisions.number, note: combinationRevisions.note })
+        .select({ combinationId: combinationRevisions.combinationId, number: combinationRevisions.number, note: combinationRevisions.note, createdAt: combinationRevisions.createdAt })
         .from(combinationRevisions)
         .where(inArray(combinationRevisions.combinationId, items.map((c) => c.id)))
         .orderBy(asc(combinationRevisions.number))
@@ -183,9 +183,11 @@ export async function listStepSources(db: DbOrTx, actor: Actor) {
     isDemo: c.isDemo,
     ownerName: c.ownerName,
     revision: c.revision,
-    revisions: revs.filter((r) => r.combinationId === c.id).map((r) => ({ number: r.number, note: r.note ?? "" })),
+    revisions: revs.filter((r) => r.combinationId === c.id).map((r) => ({ number: r.number, note: r.note ?? "", date: SAVED_ON.format(r.createdAt) })),
   }));
 }
+/** "2 Dec 2026": the day a revision was saved, the same for every viewer. */
+const SAVED_ON = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 export type StepSource = Awaited<ReturnType<typeof listStepSources>>[number];
 
 // ---------------------------------------------------------------------------------------------

@@ -55,6 +55,7 @@ export default async function EditLessonPage({ params }: { params: Promise<{ id:
         save={saveStepAction.bind(null, lesson.id)}
         remove={deleteStepAction.bind(null, lesson.id)}
         move={moveStepAction.bind(null, lesson.id)}
+        unitSystem={user.unitSystem}
       />
     </div>
   );

@@ -7,7 +7,9 @@ import { SERIES_LABEL } from "@/lib/lessons/curves";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import type { LessonStep, StepSource } from "@/db/repo/lessons";
-import type { StepInput } from "@/lib/lessons/rules";
+import { stripStepNumber, type StepInput } from "@/lib/lessons/rules";
+import { changeText } from "@/lib/lessons/change-text";
+import type { UnitSystem } from "@/calc";
 
 type Result = { ok: true } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
 type StepListProps = {
@@ -16,9 +18,10 @@ type StepListProps = {
   save: (stepId: string | null, input: StepInput) => Promise<Result>;
   remove: (stepId: string) => Promise<Result>;
   move: (stepId: string, direction: "up" | "down") => Promise<Result>;
+  unitSystem: UnitSystem;
 };
 
-export function StepList({ steps, sources, save, remove, move }: StepListProps) {
+export function StepList({ steps, sources, save, remove, move, unitSystem }: StepListProps) {
   const [editing, setEditing] = useState<string | null>(null);
   const [pending, start] = useTransition();
   const [error, setError] = useState<string | null>(null);
@@ -38,14 +41,14 @@ export function StepList({ steps, sources, save, remove, move }: StepListProps) 
       {steps.length === 0 ? <p className="text-sm text-muted">No steps yet. Add the first one below.</p> : null}
       <ol className="flex flex-col gap-3">
         {steps.map((s, i) => (
-          <li key={s.id} className="flex flex-col gap-3 rounded-lg border border-line bg-panel p-3" aria-label={`Step ${i + 1}: ${s.title}`}>
+          <li key={s.id} className="flex flex-col gap-3 rounded-lg border border-line bg-panel p-3" aria-label={`Step ${i + 1}: ${stripStepNumber(s.title)}`}>
             <div className="flex flex-wrap items-start justify-between gap-3">
               <div>
                 <p className="font-medium">
-                  <span className="text-muted tabular-nums">{i + 1}.</span> {s.title}
+                  <span className="text-muted tabular-nums">{i + 1}.</span> {stripStepNumber(s.title)}
                 </p>
                 <p className="text-sm text-muted">
-                  {s.items.map((it) => `${it.label} (${it.name}, rev ${it.revision})`).join(" · ")}
+                  {s.items.map((it) => `${it.label} (${it.name}, revision ${it.revision}${it.change ? `; what-if: ${changeText(it.change, unitSystem)}` : ""})`).join(" · ")}
                 </p>
                 <p className="text-xs text-muted">Series: {s.series.map((x) => SERIES_LABEL[x]).join(", ")}</p>
               </div>
@@ -72,11 +75,11 @@ export function StepList({ steps, sources, save, remove, move }: StepListProps) 
                 </Button>
               </div>
             </div>
-            {editing === s.id ? <StepEditor heading={`Edit step ${i + 1}`} sources={sources} initial={s} save={(input) => save(s.id, input)} onDone={() => setEditing(null)} /> : null}
+            {editing === s.id ? <StepEditor heading={`Edit step ${i + 1}`} sources={sources} unitSystem={unitSystem} initial={s} save={(input) => save(s.id, input)} onDone={() => setEditing(null)} /> : null}
           </li>
         ))}
       </ol>
-      <StepEditor heading="Add a step" sources={sources} save={addStep} />
+      <StepEditor heading="Add a step" sources={sources} unitSystem={unitSystem} save={addStep} />
     </section>
   );
 }
