@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ZodError } from "zod";
 import { boostCurve, combinationSchema, paToPsi, solvePoint, wToHp } from "@/calc";
 import { FieldError, ForbiddenError, NotFoundError } from "@/lib/errors";
-import { createCombination, getCombination, saveCombination } from "@/db/repo/combinations";
+import { createCombination, getCombination, getRevision, saveCombination } from "@/db/repo/combinations";
 import {
   CLASS_CODE_ALPHABET,
   addStep,
@@ -279,7 +279,9 @@ describe("lessons", () => {
       const copy = await copyStepItem(t.db, viewer, l.id, step.id, { item: 1 });
       expect(copy.ownerId).toBe(viewer.id);
       expect(copy.isDemo).toBe(false);
-      expect(copy.name).toBe("Intercooled (from lesson Pulley night)");
+      // A short name (the step's number and the item); the lesson and step are in the revision note.
+      expect(copy.name).toBe("Step 1 — Intercooled");
+      expect((await getRevision(t.db, viewer, copy.id, 1)).note).toBe("From the lesson “Pulley night”, step 1 “Step one”");
       const mine = await getCombination(t.db, viewer, copy.id);
       expect(mine.spec).toEqual(step.items[1].spec);
       // Not the source's current revision (3, larger injectors): the step's revision 2.
