@@ -6,21 +6,15 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { Client, signedIn } from "../support/http";
+import { fillItem, type Item } from "../support/lesson-form";
 
 const WORK_TRUCK = "Work truck V6 4.3 L, Roots";
 const BIG_INCH = "Big-inch V8 7.4 L, twin-screw";
 
-type Item = { combination: string; revision: string; label: string };
-
 async function addStep(page: Page, title: string, items: Item[]) {
   const form = page.getByRole("form", { name: "Add a step" });
   await form.getByLabel("Step title").fill(title);
-  for (const [i, it] of items.entries()) {
-    if (i >= 2) await form.getByRole("button", { name: "Add an item" }).click();
-    await form.getByLabel(`Combination ${i + 1}`).selectOption({ label: it.combination });
-    await form.getByLabel(`Revision ${i + 1}`).selectOption(it.revision);
-    await form.getByLabel(`Label ${i + 1}`).fill(it.label);
-  }
+  for (const [i, it] of items.entries()) await fillItem(page, i, it);
   await form.getByRole("button", { name: "Add step" }).click();
   await page.getByRole("listitem", { name: new RegExp(`^Step \\d+: ${title}$`) }).waitFor({ timeout: 30_000 });
 }
@@ -127,7 +121,7 @@ describe("lessons in Chromium", () => {
     const res = await context.request.get(`${BASE_URL}/api${href}`);
     expect(res.status()).toBe(200);
     const copy = (await res.json()) as { name: string; spec: { drive: { blowerPulleyDiameter: number } } };
-    expect(copy.name).toBe(`Intercooled (from lesson ${title})`);
+    expect(copy.name).toBe("Step 2 — Intercooled");
     expect(copy.spec.drive.blowerPulleyDiameter).toBeCloseTo(3.8 * 0.0254, 9); // the big-inch V8 keeps its 3.8 in pulley (lib/combinations/demo-specs.ts)
     expect(errors).toEqual([]);
     await context.close();
