@@ -13,7 +13,7 @@ import { eq } from "drizzle-orm";
 import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import { applyWhatIf } from "@/lib/lessons/curves";
 import { stepInputSchema } from "@/lib/lessons/rules";
-import { freshDatabase, makeUser, type TestDb } from "../support/db";
+import { freshDatabase, makeRoleUsers, makeUser, type TestDb } from "../support/db";
 
 describe("what-if steps", () => {
   let t: TestDb;
@@ -22,13 +22,7 @@ describe("what-if steps", () => {
 
   beforeAll(async () => {
     t = await freshDatabase();
-    people = {
-      member: await makeUser(t.db, "member"),
-      tuner: await makeUser(t.db, "tuner"),
-      sales: await makeUser(t.db, "sales"),
-      instructor: await makeUser(t.db, "instructor"),
-      admin: await makeUser(t.db, "admin"),
-    };
+    people = await makeRoleUsers(t.db);
     combos = await seedCombinations(t.db, people);
   });
   afterAll(async () => {

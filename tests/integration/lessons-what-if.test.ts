@@ -3,16 +3,10 @@
 import { describe, expect, it } from "vitest";
 import { combinationSchema } from "@/calc";
 import { applyWhatIf, deltaSpeeds, pointAt, rpmGrid, stepCurves } from "@/lib/lessons/curves";
-import type { StepItemSnapshot } from "@/lib/lessons/rules";
+import { snapshotItem } from "../support/lesson-items";
 import { vintageV8Cam, vintageV8DrawThrough } from "@/lib/combinations/demo-specs";
 
-const item = (label: string, spec: typeof vintageV8DrawThrough): StepItemSnapshot => ({
-  combinationId: "00000000-0000-4000-8000-000000000000",
-  revision: 1,
-  label,
-  name: label,
-  spec: combinationSchema.parse(spec),
-});
+const item = (label: string, spec: typeof vintageV8DrawThrough) => snapshotItem(label, spec);
 const items = [item("Original cam", vintageV8DrawThrough), item("New cam", vintageV8Cam)];
 
 describe("classroom what-if", () => {

@@ -24,7 +24,7 @@ import { DEMO_COMBINATION_NAMES, seedCombinations, type DemoCombinations } from 
 import { bigInchIntercooled, bigInchLargerInjectors, workTruckV6, workTruckV6SmallerPulley } from "@/lib/combinations/demo-specs";
 import type { DemoUsers } from "@/db/seed/index";
 import { DEMO_CLASS_CODE, DEMO_LESSON_SPEEDS, DEMO_LESSON_TITLE, seedLessons } from "@/db/seed/lessons";
-import { freshDatabase, makeUser, type TestDb } from "../support/db";
+import { freshDatabase, makeRoleUsers, makeUser, type TestDb } from "../support/db";
 
 type Person = Awaited<ReturnType<typeof makeUser>>;
 
@@ -36,13 +36,7 @@ describe("lessons", () => {
 
   beforeAll(async () => {
     t = await freshDatabase();
-    people = {
-      member: await makeUser(t.db, "member"),
-      tuner: await makeUser(t.db, "tuner"),
-      sales: await makeUser(t.db, "sales"),
-      instructor: await makeUser(t.db, "instructor"),
-      admin: await makeUser(t.db, "admin"),
-    };
+    people = await makeRoleUsers(t.db);
     combos = await seedCombinations(t.db, people);
     instructor = people.instructor;
     admin = people.admin;

@@ -52,3 +52,14 @@ export async function makeUser(db: Db, role: "member" | "tuner" | "sales" | "ins
     .returning();
   return { id: u.id, role: u.role, email: u.email, name: u.name };
 }
+
+/** One user of each role, in the shape the demo seeds take (db/seed/index.ts DemoUsers). */
+export async function makeRoleUsers(db: Db) {
+  return {
+    member: await makeUser(db, "member"),
+    tuner: await makeUser(db, "tuner"),
+    sales: await makeUser(db, "sales"),
+    instructor: await makeUser(db, "instructor"),
+    admin: await makeUser(db, "admin"),
+  };
+}

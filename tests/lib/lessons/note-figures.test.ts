@@ -6,18 +6,11 @@ import { combinationSchema, inToM, type Combination } from "@/calc";
 import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import { stepCurves } from "@/lib/lessons/curves";
 import { fillNoteFigures, figureText, parseNoteToken } from "@/lib/lessons/note-figures";
-import type { StepItemSnapshot } from "@/lib/lessons/rules";
 import { quantityText } from "@/lib/units/format";
+import { snapshotItem } from "../../support/lesson-items";
 
 const truck: Combination = combinationSchema.parse(workTruckV6);
-const item = (label: string, spec: Combination, change: StepItemSnapshot["change"] = null): StepItemSnapshot => ({
-  combinationId: "00000000-0000-4000-8000-000000000000",
-  revision: 1,
-  label,
-  name: label,
-  spec,
-  change,
-});
+const item = snapshotItem;
 const curves = stepCurves([item("Truck", truck, { kind: "pulley", diameter: inToM(3.0) }), item("Other", truck)], { kind: "none" });
 const at = (i: number, rpm: number) => curves[i].points.find((p) => p.rpm === rpm)!;
 

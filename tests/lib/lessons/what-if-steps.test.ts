@@ -7,20 +7,14 @@ import { INTERCOOLER_DEMO_DEFAULTS, combinationSchema, inToM, type Combination }
 import { bigInchIntercooled, workTruckV6 } from "@/lib/combinations/demo-specs";
 import { changeText, variantLabel } from "@/lib/lessons/change-text";
 import { applyWhatIf, stepCurves, type WhatIf } from "@/lib/lessons/curves";
-import { itemChangeSchema, VE_SCALE_MAX, VE_SCALE_MIN, type ItemChange, type StepItemSnapshot } from "@/lib/lessons/rules";
+import { itemChangeSchema, VE_SCALE_MAX, VE_SCALE_MIN, type ItemChange } from "@/lib/lessons/rules";
 import { stepCautions } from "@/lib/lessons/step-cautions";
 import { changeDraft, changeInput } from "@/lib/lessons/step-draft";
+import { snapshotItem } from "../../support/lesson-items";
 
 const truck: Combination = combinationSchema.parse(workTruckV6);
 const bigInch: Combination = combinationSchema.parse(bigInchIntercooled);
-const item = (label: string, spec: Combination, change: ItemChange | null = null): StepItemSnapshot => ({
-  combinationId: "00000000-0000-4000-8000-000000000000",
-  revision: 1,
-  label,
-  name: label,
-  spec,
-  change,
-});
+const item = snapshotItem;
 
 const changeArb: fc.Arbitrary<ItemChange> = fc.oneof(
   fc.double({ min: VE_SCALE_MIN, max: VE_SCALE_MAX, noNaN: true }).map((scale) => ({ kind: "ve" as const, scale })),
