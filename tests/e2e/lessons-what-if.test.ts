@@ -10,7 +10,7 @@ import { bigInchTwinScrew, workTruckV6 } from "@/lib/combinations/demo-specs";
 import { stepCurves } from "@/lib/lessons/curves";
 import { quantityText } from "@/lib/units/format";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
-import { fillItem } from "../support/lesson-form";
+import { createLessonInUi, fillItem } from "../support/lesson-form";
 
 const WORK_TRUCK = "Work truck V6 4.3 L, Roots";
 const BIG_INCH = "Big-inch V8 7.4 L, twin-screw";
@@ -33,12 +33,7 @@ describe("what-if steps in Chromium", () => {
     const context = await browser.newContext();
     const page = await signIn(context, "instructor@example.com");
     const errors = watchErrors(page);
-    await page.goto(`${BASE_URL}/lessons`, { waitUntil: "networkidle" });
-    await page.getByLabel("New lesson title").fill(title);
-    await page.getByRole("button", { name: "Create lesson" }).click();
-    await page.waitForURL(/\/lessons\/[0-9a-f-]{36}\/edit$/, { timeout: 30_000 });
-    await page.waitForLoadState("networkidle");
-    lessonId = new URL(page.url()).pathname.split("/")[2];
+    lessonId = await createLessonInUi(page, BASE_URL, title);
 
     const form = page.getByRole("form", { name: "Add a step" });
     await form.getByLabel("Step title").fill("1. Smaller pulley");

@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { Client, signedIn } from "../support/http";
-import { fillItem, type Item } from "../support/lesson-form";
+import { createLessonInUi, fillItem, type Item } from "../support/lesson-form";
 
 const WORK_TRUCK = "Work truck V6 4.3 L, Roots";
 const BIG_INCH = "Big-inch V8 7.4 L, twin-screw";
@@ -36,12 +36,7 @@ describe("lessons in Chromium", () => {
     const context = await browser.newContext();
     const page = await signIn(context, "instructor@example.com");
     const errors = watchErrors(page);
-    await page.goto(`${BASE_URL}/lessons`, { waitUntil: "networkidle" });
-    await page.getByLabel("New lesson title").fill(title);
-    await page.getByRole("button", { name: "Create lesson" }).click();
-    await page.waitForURL(/\/lessons\/[0-9a-f-]{36}\/edit$/, { timeout: 30_000 });
-    await page.waitForLoadState("networkidle");
-    lessonId = new URL(page.url()).pathname.split("/")[2];
+    lessonId = await createLessonInUi(page, BASE_URL, title);
 
     await addStep(page, "Two engines", [
       { combination: WORK_TRUCK, revision: "1", label: "Work truck" },

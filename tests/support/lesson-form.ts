@@ -15,3 +15,13 @@ export async function fillItem(page: Page, i: number, it: Item) {
   await group.getByLabel("Label in the chart").fill(it.label);
   return group;
 }
+
+/** Creates a lesson from the lessons page and returns its id once its editor has loaded. */
+export async function createLessonInUi(page: Page, baseUrl: string, title: string) {
+  await page.goto(`${baseUrl}/lessons`, { waitUntil: "networkidle" });
+  await page.getByLabel("New lesson title").fill(title);
+  await page.getByRole("button", { name: "Create lesson" }).click();
+  await page.waitForURL(/\/lessons\/[0-9a-f-]{36}\/edit$/, { timeout: 30_000 });
+  await page.waitForLoadState("networkidle");
+  return new URL(page.url()).pathname.split("/")[2];
+}
