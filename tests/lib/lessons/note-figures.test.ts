@@ -43,7 +43,7 @@ describe("fillNoteFigures", () => {
     expect(fillNoteFigures("{boost@900}", curves, "imperial")).toBe("`{boost@900}: no figure at 900 rpm`");
     expect(fillNoteFigures("{boost@4500#4}", curves, "imperial")).toBe("`{boost@4500#4}: this step has no item 4`");
     expect(fillNoteFigures("no tokens here", curves, "imperial")).toBe("no tokens here");
-    const failed = stepCurves([item("Broken", { ...truck, drive: { ...truck.drive, blowerPulleyDiameter: 0.001 } }), item("Other", truck)], { kind: "none" });
+    const failed = stepCurves([{ ...item("Broken", truck), spec: { ...truck, drive: { ...truck.drive, blowerPulleyDiameter: 0.001 } } }, item("Other", truck)], { kind: "none" });
     expect(figureText({ figure: "boost", at: 3000, curve: 0 }, failed, "imperial")).toEqual({ ok: false, reason: "the model has no answer for this item" });
   });
 
