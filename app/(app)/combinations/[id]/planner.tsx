@@ -8,6 +8,7 @@ import { useForm, useWatch } from "react-hook-form";
 import type { Combination, UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { Editor } from "@/components/planner/editor";
+import { EditorTabs } from "@/components/planner/editor-tabs";
 import { PulleyFinder } from "@/components/pulleys/pulley-finder";
 import { PulleyLadder } from "@/components/pulleys/pulley-ladder";
 import { useUnsavedGuard } from "@/components/planner/use-unsaved-guard";
@@ -124,11 +125,14 @@ export function Planner(props: PlannerProps) {
       {draft.offer ? <DraftOffer revision={baseRevision} savedAt={draft.offer.savedAt} onRestore={draft.restoreDraft} onDiscard={draft.discardDraft} /> : null}
       <SaveBar invalid={!live.ok} canWrite={canWrite} note={note} onNote={setNote} onSave={(e) => void onSave(e)} saving={saving} dirty={dirty} onDuplicate={duplicate} duplicating={duplicating} message={saveMsg} />
 
-      {/* Results first on phones; on wide screens the results column stays in view while the inputs scroll. */}
-      <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
+            {/* Phones: results, then the inputs behind section tabs. Wide: inputs left, results right; from
+          1,280 px the results column is wider so the finder fits beside the ladder. */}
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] xl:grid-cols-[minmax(0,4fr)_minmax(0,8fr)]">
         <div className="order-2 flex min-w-0 flex-col gap-3 lg:order-1">
           <h2 className="text-base font-semibold">Combination</h2>
-          <Editor form={form} system={system} errors={errors} blowers={shelf.blowers} values={values} />
+          <EditorTabs errors={errors}>
+            <Editor form={form} system={system} errors={errors} blowers={shelf.blowers} values={values} />
+          </EditorTabs>
         </div>
 
         <div className="order-1 flex min-w-0 flex-col gap-4 lg:sticky lg:top-2 lg:order-2 lg:max-h-[calc(100vh-1rem)] lg:overflow-y-auto lg:pr-1" data-testid="planner-results">
@@ -153,7 +157,7 @@ export function Planner(props: PlannerProps) {
                 options={chartOptions}
                 onOptions={setChartOptions}
               />
-              <div className="grid grid-cols-1 gap-4 2xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+              <div className="grid grid-cols-1 gap-4 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]" data-testid="ladder-and-finder">
                 <PulleyLadder rows={results.rows} system={system} rpm={results.rpm} fromShelf={shelf.blowerPulleys.length > 0} onUse={applyPulley} />
                 <PulleyFinder spec={results.spec} system={system} rpms={results.rpms} stock={finderStock(shelf.blowerPulleys)} defaultRpm={results.rpm} onRpm={setChosenRpm} onApply={applyPulley} />
               </div>
