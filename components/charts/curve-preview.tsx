@@ -9,10 +9,10 @@ import type { CurveChartProps } from "./curve-chart";
 const W = 640;
 const PAD = { left: 48, right: 48, top: 10, bottom: 34 };
 
-/** Ticks at 1, 2 or 5 × 10^n covering [lo, hi]; at most about six. */
+/** Ticks at 1, 2 or 5 × 10^n inside [lo, hi]: two to seven of them. */
 export function niceTicks(lo: number, hi: number): number[] {
   if (!(hi > lo)) return [lo];
-  const raw = (hi - lo) / 5;
+  const raw = (hi - lo) / 6;
   const mag = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 5, 10].map((k) => k * mag).find((s) => s >= raw) ?? 10 * mag;
   const out: number[] = [];
@@ -46,7 +46,13 @@ export function CurvePreview({ series, metrics, unitSystem, redlineRpm, height =
   const sx = (x: number) => PAD.left + ((x - x0) / (x1 - x0 || 1)) * (W - PAD.left - PAD.right);
   const axes = kinds.map((kind) => {
     const vals = series.flatMap((s) => s.points.filter((p) => p.withinRange && p.rpm <= x1).flatMap((p) => metrics.filter((m) => METRICS[m].kind === kind).map((m) => metricValue(m, p, unitSystem)))).filter((v): v is number => v !== null && Number.isFinite(v));
-    const ticks = niceTicks(Math.min(0, ...vals), Math.max(1e-9, ...vals));
+    const lo0 = Math.min(0, ...vals);
+    const hi0 = Math.max(1e-9, ...vals);
+    // Widen the axis by a step at either end the ticks leave out, so no curve leaves the plot.
+    const ticks = niceTicks(lo0, hi0);
+    const step = ticks.length > 1 ? ticks[1] - ticks[0] : 1;
+    if (ticks[0] > lo0) ticks.unshift(Number((ticks[0] - step).toPrecision(12)));
+    if (ticks[ticks.length - 1] < hi0) ticks.push(Number((ticks[ticks.length - 1] + step).toPrecision(12)));
     const lo = ticks[0];
     const hi = ticks[ticks.length - 1];
     const sy = (v: number) => h - PAD.bottom - ((v - lo) / (hi - lo || 1)) * (h - PAD.top - PAD.bottom);
