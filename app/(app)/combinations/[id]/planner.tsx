@@ -3,7 +3,7 @@
 // Everything is computed in the browser with calc/ on every change; saving writes a revision.
 // The parts: planner-resolver (validation), use-planner-draft (kept drafts), use-planner-results
 // (curves, ladder, chart), and the views (header, save bar, readouts, chart, ladder, finder).
-import { useDeferredValue, useMemo, useState, useTransition } from "react";
+import { memo, useCallback, useDeferredValue, useMemo, useState, useTransition } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { Combination, UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
@@ -23,6 +23,12 @@ import { plannerResolver } from "./planner-resolver";
 import { SaveBar, type SaveMessage } from "./save-bar";
 import { forgetDraft, usePlannerDraft } from "./use-planner-draft";
 import { useChartSeries, usePlannerResults, usePulleySlider, type ChartOptions } from "./use-planner-results";
+
+// A slider move re-renders the planner; these parts keep their props then and skip the work.
+const StillEditor = memo(Editor);
+const StillLadder = memo(PulleyLadder);
+const StillFinder = memo(PulleyFinder);
+const NO_ERRORS: Record<string, string> = {};
 
 export type PlannerProps = {
   combinationId: string;
@@ -65,7 +71,7 @@ export function Planner(props: PlannerProps) {
   if (live.ok && live.spec !== lastGood) setLastGood(live.spec);
   const spec = live.ok ? live.spec : lastGood;
   const deferredSpec = useDeferredValue(spec);
-  const errors = live.ok ? {} : live.errors;
+  const errors = live.ok ? NO_ERRORS : live.errors;
   const dirty = useMemo(() => !sameSpec(toSpec(values, system), baseSpec), [valuesKey, baseSpec]); // eslint-disable-line react-hooks/exhaustive-deps
 
   useUnsavedGuard(dirty && canWrite);
@@ -82,10 +88,14 @@ export function Planner(props: PlannerProps) {
     });
   };
 
-  const applyPulley = (diameter: number) => {
-    form.setValue("drive.blowerPulleyDiameter", fieldFromSI("length-small", diameter, system), { shouldDirty: true });
-    setWhatIf(null);
-  };
+  const applyPulley = useCallback(
+    (diameter: number) => {
+      form.setValue("drive.blowerPulleyDiameter", fieldFromSI("length-small", diameter, system), { shouldDirty: true });
+      setWhatIf(null);
+    },
+    [form, system],
+  );
+  const stock = useMemo(() => finderStock(shelf.blowerPulleys), [shelf.blowerPulleys]);
 
   const onSave = form.handleSubmit(
     (vals) => {
@@ -131,7 +141,7 @@ export function Planner(props: PlannerProps) {
         <div className="order-2 flex min-w-0 flex-col gap-3 lg:order-1">
           <h2 className="text-base font-semibold">Combination</h2>
           <EditorTabs errors={errors}>
-            <Editor form={form} system={system} errors={errors} blowers={shelf.blowers} values={values} />
+            <StillEditor form={form} system={system} errors={errors} blowers={shelf.blowers} values={values} />
           </EditorTabs>
         </div>
 
@@ -158,8 +168,8 @@ export function Planner(props: PlannerProps) {
                 onOptions={setChartOptions}
               />
               <div className="grid grid-cols-1 gap-4 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]" data-testid="ladder-and-finder">
-                <PulleyLadder rows={results.rows} system={system} rpm={results.rpm} fromShelf={shelf.blowerPulleys.length > 0} onUse={applyPulley} />
-                <PulleyFinder spec={results.spec} system={system} rpms={results.rpms} stock={finderStock(shelf.blowerPulleys)} defaultRpm={results.rpm} onRpm={setChosenRpm} onApply={applyPulley} />
+                <StillLadder rows={results.rows} system={system} rpm={results.rpm} fromShelf={shelf.blowerPulleys.length > 0} onUse={applyPulley} />
+                <StillFinder spec={results.spec} system={system} rpms={results.rpms} stock={stock} defaultRpm={results.rpm} onRpm={setChosenRpm} onApply={applyPulley} />
               </div>
               <CautionsPanel cautions={results.cautions} />
             </>
