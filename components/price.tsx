@@ -2,7 +2,7 @@
 // The shop's currency for every price shown in the browser: the signed-in layout provides it
 // from the shop's terms, and `usePrice()` writes an amount with its symbol ("$1,234.50").
 import { createContext, useContext } from "react";
-import { formatPrice } from "@/lib/orders/money";
+import { formatPrice } from "@/lib/orders/price-text";
 
 const CurrencyContext = createContext("USD");
 

@@ -7,7 +7,7 @@ import { quantityText } from "@/lib/units/format";
 import { defaultSheetTitle } from "@/lib/recommendations/rules";
 import type { ShopDetails } from "@/db/repo/shop";
 import type { SheetSnapshot } from "@/db/repo/sheet-versions";
-import { formatPrice } from "@/lib/orders/money";
+import { formatPrice } from "@/lib/orders/price-text";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
 import { figureOrRange, outsideRangeText, type RangeOf } from "@/lib/planner/range-words";
 import { HeadCells, TotalFoot } from "@/components/ui/data-table";

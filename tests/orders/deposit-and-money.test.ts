@@ -4,7 +4,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { depositFor, depositRuleSchema, shopTermsSchema } from "@/lib/orders/deposit";
-import { currencySymbol, formatPrice, fromMinorUnits, minorDigits, toMinorUnits } from "@/lib/orders/money";
+import { Cash, currencySymbol, formatPrice, fromMinorUnits, minorDigits, roundToCurrency, toMinorUnits } from "@/lib/orders/money";
 import { allocate, canCancel, canMarkFitted, statusAfterReservation } from "@/lib/orders/status";
 
 const amount = fc.tuple(fc.bigInt({ min: 0n, max: 9_999_999_999n }), fc.integer({ min: 0, max: 99 })).map(([w, c]) => `${w}.${String(c).padStart(2, "0")}`);
@@ -35,6 +35,20 @@ describe("prices in the shop's currency", () => {
     );
     expect(formatPrice("256", "USD")).toBe("$256.00");
     expect(formatPrice("1234567.5", "EUR")).toBe("€1,234,567.50");
+  });
+
+  it("formatPrice rounds half up on the exact decimal, as decimal.js does (the browser's copy loads no decimal.js)", () => {
+    // source: decimal.js ROUND_HALF_UP (money.ts's Cash, roundToCurrency) as the reference, on amounts with a third
+    // decimal so that ties occur; binary floating point would round 1.005 down.
+    const thousandths = fc.tuple(fc.integer({ min: -9_999_999, max: 9_999_999 }), fc.integer({ min: 0, max: 999 })).map(([w, m]) => `${w}.${String(m).padStart(3, "0")}`);
+    fc.assert(
+      fc.property(thousandths, fc.constantFrom("USD", "JPY", "KWD"), (a, cur) => {
+        const rounded = roundToCurrency(a, cur);
+        expect(formatPrice(a, cur).replace(/[^\d.-]/g, "")).toBe(rounded);
+      }),
+    );
+    expect(formatPrice("1.005", "USD")).toBe("$1.01");
+    expect(formatPrice(new Cash("2.5"), "JPY")).toBe("¥3");
   });
 
   it("minor units round-trip exactly for every amount up to 9 999 999 999.99", () => {

@@ -3,11 +3,12 @@
 // Everything is computed in the browser with calc/ on every change; saving writes a revision.
 // The parts: planner-resolver (validation), use-planner-draft (kept drafts), use-planner-results
 // (curves, ladder, chart), and the views (header, save bar, readouts, chart, ladder, finder).
-import { useDeferredValue, useMemo, useState, useTransition } from "react";
+import { memo, useCallback, useDeferredValue, useMemo, useState, useTransition } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import type { Combination, UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { Editor } from "@/components/planner/editor";
+import { EditorTabs } from "@/components/planner/editor-tabs";
 import { PulleyFinder } from "@/components/pulleys/pulley-finder";
 import { PulleyLadder } from "@/components/pulleys/pulley-ladder";
 import { useUnsavedGuard } from "@/components/planner/use-unsaved-guard";
@@ -22,6 +23,12 @@ import { plannerResolver } from "./planner-resolver";
 import { SaveBar, type SaveMessage } from "./save-bar";
 import { forgetDraft, usePlannerDraft } from "./use-planner-draft";
 import { useChartSeries, usePlannerResults, usePulleySlider, type ChartOptions } from "./use-planner-results";
+
+// A slider move re-renders the planner; these parts keep their props then and skip the work.
+const StillEditor = memo(Editor);
+const StillLadder = memo(PulleyLadder);
+const StillFinder = memo(PulleyFinder);
+const NO_ERRORS: Record<string, string> = {};
 
 export type PlannerProps = {
   combinationId: string;
@@ -64,7 +71,7 @@ export function Planner(props: PlannerProps) {
   if (live.ok && live.spec !== lastGood) setLastGood(live.spec);
   const spec = live.ok ? live.spec : lastGood;
   const deferredSpec = useDeferredValue(spec);
-  const errors = live.ok ? {} : live.errors;
+  const errors = live.ok ? NO_ERRORS : live.errors;
   const dirty = useMemo(() => !sameSpec(toSpec(values, system), baseSpec), [valuesKey, baseSpec]); // eslint-disable-line react-hooks/exhaustive-deps
 
   useUnsavedGuard(dirty && canWrite);
@@ -81,10 +88,14 @@ export function Planner(props: PlannerProps) {
     });
   };
 
-  const applyPulley = (diameter: number) => {
-    form.setValue("drive.blowerPulleyDiameter", fieldFromSI("length-small", diameter, system), { shouldDirty: true });
-    setWhatIf(null);
-  };
+  const applyPulley = useCallback(
+    (diameter: number) => {
+      form.setValue("drive.blowerPulleyDiameter", fieldFromSI("length-small", diameter, system), { shouldDirty: true });
+      setWhatIf(null);
+    },
+    [form, system],
+  );
+  const stock = useMemo(() => finderStock(shelf.blowerPulleys), [shelf.blowerPulleys]);
 
   const onSave = form.handleSubmit(
     (vals) => {
@@ -124,11 +135,14 @@ export function Planner(props: PlannerProps) {
       {draft.offer ? <DraftOffer revision={baseRevision} savedAt={draft.offer.savedAt} onRestore={draft.restoreDraft} onDiscard={draft.discardDraft} /> : null}
       <SaveBar invalid={!live.ok} canWrite={canWrite} note={note} onNote={setNote} onSave={(e) => void onSave(e)} saving={saving} dirty={dirty} onDuplicate={duplicate} duplicating={duplicating} message={saveMsg} />
 
-      {/* Results first on phones; on wide screens the results column stays in view while the inputs scroll. */}
-      <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
+            {/* Phones: results, then the inputs behind section tabs. Wide: inputs left, results right; from
+          1,280 px the results column is wider so the finder fits beside the ladder. */}
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)] xl:grid-cols-[minmax(0,4fr)_minmax(0,8fr)]">
         <div className="order-2 flex min-w-0 flex-col gap-3 lg:order-1">
           <h2 className="text-base font-semibold">Combination</h2>
-          <Editor form={form} system={system} errors={errors} blowers={shelf.blowers} values={values} />
+          <EditorTabs errors={errors}>
+            <StillEditor form={form} system={system} errors={errors} blowers={shelf.blowers} values={values} />
+          </EditorTabs>
         </div>
 
         <div className="order-1 flex min-w-0 flex-col gap-4 lg:sticky lg:top-2 lg:order-2 lg:max-h-[calc(100vh-1rem)] lg:overflow-y-auto lg:pr-1" data-testid="planner-results">
@@ -153,9 +167,9 @@ export function Planner(props: PlannerProps) {
                 options={chartOptions}
                 onOptions={setChartOptions}
               />
-              <div className="grid grid-cols-1 gap-4 2xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-                <PulleyLadder rows={results.rows} system={system} rpm={results.rpm} fromShelf={shelf.blowerPulleys.length > 0} onUse={applyPulley} />
-                <PulleyFinder spec={results.spec} system={system} rpms={results.rpms} stock={finderStock(shelf.blowerPulleys)} defaultRpm={results.rpm} onRpm={setChosenRpm} onApply={applyPulley} />
+              <div className="grid grid-cols-1 gap-4 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]" data-testid="ladder-and-finder">
+                <StillLadder rows={results.rows} system={system} rpm={results.rpm} fromShelf={shelf.blowerPulleys.length > 0} onUse={applyPulley} />
+                <StillFinder spec={results.spec} system={system} rpms={results.rpms} stock={stock} defaultRpm={results.rpm} onRpm={setChosenRpm} onApply={applyPulley} />
               </div>
               <CautionsPanel cautions={results.cautions} />
             </>

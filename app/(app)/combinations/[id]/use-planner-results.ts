@@ -15,8 +15,11 @@ export type ChartOptions = { showNeighbours: boolean; extra: BoostExtra };
 
 type ResultsInput = { spec: Combination; baseSpec: Combination; chosenRpm: number | null; whatIf: number | null; blowerPulleys: ShelfPulley[]; system: UnitSystem };
 
+const unsolved = (e: unknown) => ({ ok: false as const, message: e instanceof Error ? e.message : "The model could not solve this combination." });
+
 export function usePlannerResults({ spec: s, baseSpec, chosenRpm, whatIf, blowerPulleys, system }: ResultsInput) {
-  return useMemo(() => {
+  // Everything but the what-if, so a slider move recomputes only the what-if curve and the why.
+  const fixed = useMemo(() => {
     try {
       const rpms = rpmGrid(s);
       const current = safeCurve(s, rpms);
@@ -25,20 +28,28 @@ export function usePlannerResults({ spec: s, baseSpec, chosenRpm, whatIf, blower
       const n = neighbourPulleys(s.drive.blowerPulleyDiameter, blowerPulleys, system);
       const smaller = n.smaller === null ? null : { d: n.smaller, points: safeCurve(withPulley(s, n.smaller), rpms) };
       const larger = n.larger === null ? null : { d: n.larger, points: safeCurve(withPulley(s, n.larger), rpms) };
-      const what = whatIf === null ? null : { d: whatIf, points: safeCurve(withPulley(s, whatIf), rpms) };
       const rows = ladder(s, rpm, blowerPulleys);
       const list: Caution[] = calcCautions(s, current);
+      return { ok: true as const, spec: s, rpms, curve: current, peak, rpm, smaller, larger, rows, cautions: list, here: trySolvePoint(s, rpm) };
+    } catch (e) {
+      return unsolved(e);
+    }
+  }, [s, chosenRpm, blowerPulleys, system]);
+  return useMemo(() => {
+    if (!fixed.ok) return fixed;
+    try {
+      const { spec, rpms, rpm, here } = fixed;
+      const what = whatIf === null ? null : { d: whatIf, points: safeCurve(withPulley(spec, whatIf), rpms) };
       // The why: the what-if against the current pulley, else the current spec against the saved one.
-      const here = trySolvePoint(s, rpm);
       const why =
         whatIf !== null
-          ? explainSentence(here, trySolvePoint(withPulley(s, whatIf), rpm), system, `the ${quantityText("length-small", s.drive.blowerPulleyDiameter, system)} pulley`)
+          ? explainSentence(here, trySolvePoint(withPulley(spec, whatIf), rpm), system, `the ${quantityText("length-small", spec.drive.blowerPulleyDiameter, system)} pulley`)
           : explainSentence(trySolvePoint(baseSpec, rpm), here, system);
-      return { ok: true as const, spec: s, rpms, curve: current, peak, rpm, smaller, larger, whatIf: what, rows, cautions: list, why };
+      return { ...fixed, whatIf: what, why };
     } catch (e) {
-      return { ok: false as const, message: e instanceof Error ? e.message : "The model could not solve this combination." };
+      return unsolved(e);
     }
-  }, [s, baseSpec, chosenRpm, whatIf, blowerPulleys, system]);
+  }, [fixed, baseSpec, whatIf, system]);
 }
 
 export type PlannerResults = ReturnType<typeof usePlannerResults>;

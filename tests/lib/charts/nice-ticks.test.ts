@@ -1,0 +1,32 @@
+// The static first-frame chart's axis ticks (components/charts/curve-preview.tsx).
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { niceTicks } from "@/components/charts/curve-preview";
+
+describe("niceTicks", () => {
+  it("covers the range with evenly spaced 1, 2 or 5 × 10^n steps, at most seven ticks", () => {
+    // The 1-2-5 series is the usual choice for axis steps (common practice, no published source);
+    // the bound of seven ticks is the author's choice for a chart a few hundred pixels tall.
+    fc.assert(
+      fc.property(fc.double({ min: -1e5, max: 1e5, noNaN: true }), fc.double({ min: 1e-3, max: 1e5, noNaN: true }), (lo, span) => {
+        const hi = lo + span;
+        const t = niceTicks(lo, hi);
+        expect(t.length).toBeGreaterThanOrEqual(2);
+        expect(t.length).toBeLessThanOrEqual(7);
+        const step = t[1] - t[0];
+        const mantissa = step / 10 ** Math.floor(Math.log10(step) + 1e-9);
+        expect([1, 2, 5].some((m) => Math.abs(mantissa - m) < 1e-6)).toBe(true);
+        for (let i = 1; i < t.length; i++) expect(t[i] - t[i - 1]).toBeCloseTo(step, 6);
+        // Every tick inside the range, and the range's ends no more than one step from a tick.
+        expect(t[0]).toBeGreaterThanOrEqual(lo - step * 1e-6);
+        expect(t[t.length - 1]).toBeLessThanOrEqual(hi + step * 1e-6);
+        expect(t[0] - lo).toBeLessThan(step + 1e-9);
+        expect(hi - t[t.length - 1]).toBeLessThan(step + 1e-9);
+      }),
+    );
+  });
+
+  it("gives 0, 1,000 … 6,000 for an engine speed axis to 6,000 rpm", () => {
+    expect(niceTicks(0, 6000)).toEqual([0, 1000, 2000, 3000, 4000, 5000, 6000]);
+  });
+});
