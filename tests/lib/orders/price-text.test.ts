@@ -52,6 +52,8 @@ describe("the deposit rule in words and in the admin's form", () => {
     expect(kind.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual([["depositKind", "Deposit kind must be percent or fixed."]]);
     const pct = shopTermsSchema.safeParse({ currency: "USD", depositKind: "percent", depositValue: "0" });
     expect(pct.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual([["depositValue", "A percentage deposit must be more than 0 and at most 100."]]);
+    const fixed = shopTermsSchema.safeParse({ currency: "USD", depositKind: "fixed", depositValue: "0" });
+    expect(fixed.error?.issues.map((i) => [i.path.join("."), i.message])).toEqual([["depositValue", "A fixed deposit must be more than 0."]]);
     const text = shopTermsSchema.safeParse({ currency: "USD", depositKind: "fixed", depositValue: "ten" });
     expect(text.error?.issues[0].path).toEqual(["depositValue"]);
     expect(text.error?.issues[0].message).toBe("Deposit must be a number with at most two decimals, like 25 or 150.00.");

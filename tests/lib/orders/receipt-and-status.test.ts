@@ -20,7 +20,26 @@ describe("deposit e-mails", () => {
     expect(m.text).toContain("  2 × Belt (PW-BT-2): ordered in for you");
     expect(m.text).toContain("  3 × Idler (PW-ID-3): 1 reserved, 2 ordered in");
     expect(m.text).toContain("Payment reference: pi_1");
-    expect(m.text.endsWith("\nDemo Shop")).toBe(true);
+    expect(m.text).toBe(
+      [
+        "Hello Pat Example,",
+        "",
+        'thank you: we received your deposit of $45.13 for "Truck pulley".',
+        "The quoted total is $1,180.50; the rest is due when the work is done.",
+        "",
+        "Your parts:",
+        "  1 × Blower pulley (PW-BP-1): reserved for you",
+        "  2 × Belt (PW-BT-2): ordered in for you",
+        "  3 × Idler (PW-ID-3): 1 reserved, 2 ordered in",
+        "",
+        "Payment reference: pi_1",
+        "Order: ord-1",
+        "",
+        "We will be in touch to book the fitting and the dyno session.",
+        "",
+        "Demo Shop",
+      ].join("\n"),
+    );
     const bare = customerReceipt({ order: { ...order, paymentIntentId: null }, title: "T", reservations: [], shopName: "S" });
     expect(bare.text).not.toContain("Your parts:");
     expect(bare.text).toContain("Payment reference: –");
@@ -31,10 +50,25 @@ describe("deposit e-mails", () => {
     expect(m.subject).toBe("Back-order needed: Pat Example");
     expect(m.text).toContain("Status: Back-ordered.");
     expect(m.text).toContain("To order in: 2 × PW-BT-2, 2 × PW-ID-3.");
-    expect(m.text.endsWith("Open the order: https://shop.example/orders/ord-1")).toBe(true);
+    expect(m.text).toBe(
+      [
+        'Pat Example paid a deposit of $45.13 (total $1,180.50) for "Truck pulley".',
+        "Status: Back-ordered.",
+        "",
+        "Parts:",
+        "  1 × Blower pulley (PW-BP-1): reserved for you",
+        "  2 × Belt (PW-BT-2): ordered in for you",
+        "  3 × Idler (PW-ID-3): 1 reserved, 2 ordered in",
+        "",
+        "To order in: 2 × PW-BT-2, 2 × PW-ID-3.",
+        "",
+        "Open the order: https://shop.example/orders/ord-1",
+      ].join("\n"),
+    );
     const covered = shopNotice({ order: { ...order, status: "parts-reserved" }, title: "T", reservations: held.slice(0, 1), orderUrl: "u" });
     expect(covered.subject).toBe("Deposit paid: Pat Example");
     expect(covered.text).not.toContain("To order in");
+    expect(shopNotice({ order, title: "T", reservations: [], orderUrl: "u" }).text).toBe('Pat Example paid a deposit of $45.13 (total $1,180.50) for "T".\nStatus: Back-ordered.\n\nOpen the order: u');
   });
 });
 
