@@ -3,6 +3,7 @@
 // The texts are the project's own; the figures are worked by hand from the crafted inputs.
 import { describe, expect, it } from "vitest";
 import { cautions, type Combination } from "@/calc";
+import { inputError } from "./support/input-error";
 import type { CautionPoint } from "@/calc/cautions";
 import { cautionBase, cautionPoint } from "./support/caution-case";
 
@@ -62,5 +63,24 @@ describe("caution messages", () => {
   it("the points are checked: a point without a pressure ratio is refused with the field named", () => {
     expect(() => cautions(base(), [{ rpm: 4000, manifoldTemperature: 300, injectorDuty: null } as unknown as CautionPoint])).toThrow(/Each point needs a pressure ratio/);
     expect(() => cautions(base(), "none" as unknown as CautionPoint[])).toThrow(/Points must be a list of operating points/);
+  });
+
+  it("on a tie the first point is named; the belt caution carries both diameters", () => {
+    const tie = [
+      cautionPoint({ rpm: 3000, manifoldTemperature: 340, pressureRatio: 2.6, injectorDuty: 0.9 }),
+      cautionPoint({ rpm: 5000, manifoldTemperature: 340, pressureRatio: 2.6, injectorDuty: 0.9 }),
+    ];
+    const out = cautions(base(), tie);
+    for (const code of ["charge-temperature-high", "injector-duty-high", "pressure-ratio-out-of-range"]) expect(out.find((x) => x.code === code)?.values.rpm, code).toBe(3000);
+    const low = cautions(base(), [cautionPoint({ rpm: 3000, pressureRatio: 0.9 }), cautionPoint({ rpm: 5000, pressureRatio: 0.9 })]);
+    expect(low.find((x) => x.severity === "info" && x.code === "pressure-ratio-out-of-range")?.values.rpm).toBe(3000);
+    const c = base();
+    const belt = cautions({ ...c, drive: { ...c.drive, blowerPulleyDiameter: 0.07 }, blower: { ...c.blower, maxRpm: 40_000 } }, [cautionPoint()]);
+    expect(belt.find((x) => x.code === "pulley-below-belt-minimum")?.values).toEqual({ blowerPulleyDiameter: 0.07, beltMinimumDiameter: 0.076 });
+  });
+
+  it("bad points and options are named by their path", () => {
+    expect(inputError(() => cautions(base(), [cautionPoint({ pressureRatio: "x" as unknown as number })])).field).toBe("points.0.pressureRatio");
+    expect(inputError(() => cautions(base(), [cautionPoint()], { beltMinimumDiameter: -1 })).field).toMatch(/^options\.beltMinimumDiameter/);
   });
 });
