@@ -29,5 +29,9 @@ export function formatPrice(amount: Amount, currency: string): string {
   const negative = fixed.startsWith("-");
   const [whole, frac] = (negative ? fixed.slice(1) : fixed).split(".");
   const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
-  return `${negative ? "-" : ""}${currencySymbol(currency)}${grouped}${frac ? `.${frac}` : ""}`;
+  const symbol = currencySymbol(currency);
+  // CLDR currency spacing, as Intl applies it: a symbol ending in a letter ("CHF", "kr") is kept
+  // off the digits by a no-break space; "$", "€" and "£" are not.
+  const gap = /\p{L}$/u.test(symbol) ? "\u00a0" : "";
+  return `${negative ? "-" : ""}${symbol}${gap}${grouped}${frac ? `.${frac}` : ""}`;
 }

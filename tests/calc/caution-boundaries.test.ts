@@ -3,21 +3,12 @@
 // 60 °C charge rule of thumb — common practice, no published source — the model's PR range and
 // the author-chosen VE plausibility bounds); these tests check only where each one trips.
 import { describe, expect, it } from "vitest";
-import { cautions, exampleCombination, MODEL_MAX_PRESSURE_RATIO, type Combination } from "@/calc";
+import { cautions, MODEL_MAX_PRESSURE_RATIO, type Combination } from "@/calc";
 import type { CautionPoint } from "@/calc/cautions";
+import { cautionBase, cautionPoint } from "./support/caution-case";
 
-/** Drive ratio exactly 2, no slip, redline 6500: the blower turns 13 000 rev/min at redline. */
-function base(): Combination {
-  const c = exampleCombination();
-  return {
-    ...c,
-    engine: { ...c.engine, redlineRpm: 6500, veCurve: [{ rpm: 2000, ve: 0.8 }, { rpm: 6000, ve: 0.9 }] },
-    blower: { ...c.blower, maxRpm: 13_000 },
-    drive: { crankPulleyDiameter: 0.16, blowerPulleyDiameter: 0.08, beltSlip: 0 },
-    fuel: { ...c.fuel, maxDuty: 0.85 },
-  };
-}
-const point = (over: Partial<CautionPoint> = {}): CautionPoint => ({ rpm: 4000, pressureRatio: 1.5, manifoldTemperature: 320, injectorDuty: 0.5, ...over });
+const base = cautionBase;
+const point = cautionPoint;
 const codes = (c: Combination, points: CautionPoint[] = [point()], options = {}) => cautions(c, points, options).map((x) => `${x.code}/${x.severity}`);
 
 describe("caution thresholds, both sides", () => {

@@ -1,7 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import {
-  CalcInputError,
   blowerSpeed,
   boostCurve,
   calibrateVe,
@@ -14,17 +13,7 @@ import {
   solvePoint,
   type CombinationInput,
 } from "@/calc";
-
-/** The error an entry point throws, or fail the test. */
-function inputError(fn: () => unknown): CalcInputError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof CalcInputError) return e;
-    throw e;
-  }
-  throw new Error("expected a CalcInputError");
-}
+import { inputError } from "./support/input-error";
 
 describe("schemas", () => {
   describe("combination", () => {
