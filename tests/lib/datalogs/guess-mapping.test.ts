@@ -12,6 +12,7 @@ import {
   type ColumnProfile,
 } from "@/lib/datalogs/guess-mapping";
 import { guessLayout, parseLog } from "@/lib/datalogs/parse";
+import { mappingFieldErrors } from "@/lib/datalogs/mapping-errors";
 
 // source: ISO 2533 standard atmosphere, sea level 101 325 Pa.
 const SEA_LEVEL = 101_325;
@@ -182,5 +183,19 @@ describe("properties", () => {
       }),
       { numRuns: 200 },
     );
+  });
+});
+
+describe("mapping errors by field", () => {
+  const ok = { delimiter: ";" as const, decimalComma: true, hasHeader: true, rpm: 1, pressure: 2, pressureKind: "gauge" as const, pressureUnit: "bar" as const, intakeTemperature: 3, temperatureUnit: "C" as const, time: 0, throttle: null };
+
+  it("has none for a sound mapping", () => {
+    expect(mappingFieldErrors(ok)).toEqual({});
+  });
+
+  it("puts a clash on the later field in the form's order and names both; decimal commas under a comma delimiter on their own field", () => {
+    expect(mappingFieldErrors({ ...ok, time: 1 })).toEqual({ time: ["Column 2 is already used for engine speed; pick another column for time"] });
+    expect(mappingFieldErrors({ ...ok, throttle: 3 })).toEqual({ throttle: ["Column 4 is already used for intake air temperature; pick another column for throttle"] });
+    expect(Object.keys(mappingFieldErrors({ ...ok, delimiter: "," }))).toEqual(["decimalComma"]);
   });
 });
