@@ -3,7 +3,7 @@
 //
 // Every range below is the author's choice (no published source): typical readings of a
 // street or strip engine with a positive-displacement blower, wide enough for part throttle.
-import { logLines, readNumber, splitLine, type DatalogMappingInput, type LogLayoutGuess, type PressureUnit, type TemperatureUnit } from "./parse";
+import { logLines, readNumber, splitLine, type DatalogMappingInput, type LogLayoutGuess, temperatureUnitText, type PressureUnit, type TemperatureUnit } from "./parse";
 
 /** What a column's numbers look like (the first rows of the file). */
 export interface ColumnProfile {
@@ -144,7 +144,8 @@ export function guessMapping(layout: LogLayoutGuess, text?: string): DatalogMapp
   // alone must show (strict), and which of several fitting columns to prefer.
   const rules: { field: Field; heading: RegExp; not?: RegExp; named: (p: ColumnProfile) => boolean; values: (p: ColumnProfile) => boolean; rank?: (p: ColumnProfile) => number }[] = [
     // Of several rising columns, time is the one logged by the steadiest clock.
-    { field: "time", heading: HEADINGS.time, named: looksLikeTime, values: looksLikeTime, rank: (p) => -p.stepUnevenness },
+    // A column headed "time" may count in milliseconds from anywhere; it must still rise.
+    { field: "time", heading: HEADINGS.time, named: (p) => p.rising && p.min >= 0, values: looksLikeTime, rank: (p) => -p.stepUnevenness },
     { field: "rpm", heading: HEADINGS.rpm, named: (p) => !looksLikeTime(p) && p.min >= 0 && p.max <= 20_000, values: looksLikeEngineSpeed },
     { field: "throttle", heading: HEADINGS.throttle, named: (p) => p.min >= -1 && p.max <= 110, values: looksLikeThrottle },
     { field: "pressure", heading: HEADINGS.pressure, not: HEADINGS.notPressure, named: (p) => pressureFromValues(p) !== null, values: (p) => pressureFromValues(p) !== null, rank: relativeSpread },
@@ -180,7 +181,7 @@ export function guessMapping(layout: LogLayoutGuess, text?: string): DatalogMapp
   const pHeader = pressure === null ? "" : names[pressure];
   const pProfile = pressure === null ? null : profiles[pressure];
   const fromValues = pProfile ? pressureFromValues(pProfile) : null;
-  const headingUnit: PressureUnit | null = /kpa/.test(pHeader) ? "kPa" : /bar\b|\(bar|\bbar/.test(pHeader) ? "bar" : /psi/.test(pHeader) ? "psi" : null;
+  const headingUnit: PressureUnit | null = /kpa/.test(pHeader) ? "kPa" : /\bbar\b/.test(pHeader) ? "bar" : /psi/.test(pHeader) ? "psi" : null;
   const headingKind = /boost|gauge|lade|rel/.test(pHeader) ? "gauge" : /map\b|abs/.test(pHeader) ? "absolute" : null;
   const pressureUnit = headingUnit ?? fromValues?.unit ?? "psi";
   const pressureKind = headingKind ?? (fromValues && fromValues.unit === pressureUnit ? fromValues.kind : "gauge");
@@ -191,7 +192,7 @@ export function guessMapping(layout: LogLayoutGuess, text?: string): DatalogMapp
   const tHeading: TemperatureUnit | null = /°c|\bc\)|celsius|\(c/.test(tHeader) ? "C" : /°f|\bf\)|fahrenheit|\(f/.test(tHeader) ? "F" : /\(k\)|kelvin|\bk\)/.test(tHeader) ? "K" : null;
   const tValues = tProfile ? temperatureUnitFromValues(tProfile) : null;
   const temperatureUnit = tHeading ?? tValues ?? "F";
-  if (!tHeading && tValues && tProfile) notes.temperatureUnit = `Guessed from the values (median ${round(tProfile.median)}): ${temperatureUnit === "K" ? "K" : `°${temperatureUnit}`}`;
+  if (!tHeading && tValues && tProfile) notes.temperatureUnit = `Guessed from the values (median ${round(tProfile.median)}): ${temperatureUnitText(temperatureUnit)}`;
 
   // Placeholders the person must change (the form marks the clash); never the time column.
   const rpmCol = rpm ?? firstFree(names.length, used, time === 0 ? 1 : 0);

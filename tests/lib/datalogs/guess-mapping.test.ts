@@ -53,10 +53,15 @@ describe("a semicolon, decimal-comma log with German headings", () => {
   });
 
   it("does not take a time column for engine speed even when its heading says so", () => {
-    const wrong = csv(["Drehzahl", "Zeit", "Ladedruck"], germanPull().map((r) => [r[0], r[1], r[2]]));
+    const wrong = csv(["Drehzahl", "Kanal 2", "Ladedruck"], germanPull().map((r) => [r[0], r[1], r[2]]));
     const m = guessMapping(guessLayout(wrong), wrong);
     expect(m.rpm).toBe(1);
     expect(m.time).toBe(0);
+  });
+
+  it("takes a column headed time in milliseconds that starts late, not as engine speed", () => {
+    const text = "Time (ms);Drehzahl;Ladedruck\n" + germanPull().map((r, i) => [String(1500 + 50 * i), r[1], r[2]].join(";")).join("\n");
+    expect(guessMapping(guessLayout(text), text)).toMatchObject({ time: 0, rpm: 1, pressure: 2 });
   });
 });
 
