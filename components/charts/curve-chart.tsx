@@ -32,6 +32,7 @@ import {
 } from "@/lib/charts/metrics";
 
 import { outsideRangeText } from "@/lib/planner/range-words";
+import { axesReportPlugin } from "./axes-report";
 import { markersPlugin, useInk, type Marks } from "./chart-marks";
 
 ChartJS.register(LineController, LineElement, PointElement, LinearScale, Tooltip, Legend);
@@ -185,7 +186,7 @@ export function CurveChart({
         <Line
           data={{ datasets }}
           options={options}
-          plugins={[markersPlugin]}
+          plugins={[markersPlugin, axesReportPlugin]}
           role="img"
           aria-label={ariaLabel}
           aria-describedby={tableId}

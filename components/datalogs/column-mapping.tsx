@@ -1,70 +1,84 @@
 "use client";
-// Step 3 of the log upload: the delimiter, the header, and which column holds what.
-import { delimiterNames, DELIMITERS, type DatalogMappingInput, type Delimiter } from "@/lib/datalogs/parse";
-import { ColumnSelect, selectClass } from "./upload-parts";
+// Step 3 of the log upload: the delimiter, the header, and which column holds what. Each field
+// shows its own problem ("column 1 is already used for engine speed") and how it was guessed.
+import { delimiterNames, DELIMITERS, temperatureUnitText, TEMPERATURE_UNITS, type DatalogMappingInput, type Delimiter, type PressureUnit, type TemperatureUnit } from "@/lib/datalogs/parse";
+import type { GuessNotes } from "@/lib/datalogs/guess-mapping";
+import type { MappingErrors } from "@/lib/datalogs/mapping-errors";
+import { ColumnSelect, Picker } from "./upload-parts";
 
-type ColumnMappingProps = { mapping: DatalogMappingInput; columns: string[]; set: (patch: Partial<DatalogMappingInput>) => void };
+type ColumnMappingProps = { mapping: DatalogMappingInput; columns: string[]; set: (patch: Partial<DatalogMappingInput>) => void; errors: MappingErrors; notes: GuessNotes };
 
-export function ColumnMapping({ mapping, columns, set }: ColumnMappingProps) {
+export function ColumnMapping({ mapping, columns, set, errors, notes }: ColumnMappingProps) {
+  const column = (key: "rpm" | "pressure" | "intakeTemperature" | "throttle" | "time", id: string, label: string, optional = false) => (
+    <ColumnSelect
+      id={id}
+      label={label}
+      value={mapping[key] ?? null}
+      columns={columns}
+      optional={optional}
+      errors={errors[key]}
+      note={notes[key]}
+      onChange={(v) => set({ [key]: optional ? v : (v ?? 0) })}
+    />
+  );
   return (
     <section aria-labelledby="step-3" className="flex flex-col gap-3">
       <h2 id="step-3" className="text-lg font-semibold">
         3. Columns
       </h2>
       <div className="grid gap-3 sm:grid-cols-3">
-        <div className="flex flex-col gap-1">
-          <label htmlFor="delimiter" className="text-sm font-medium">
-            Delimiter
+        <Picker id="delimiter" label="Delimiter" value={mapping.delimiter} errors={errors.delimiter} onChange={(v) => set({ delimiter: v as Delimiter, decimalComma: v === "," ? false : mapping.decimalComma })}>
+          {DELIMITERS.map((d) => (
+            <option key={d} value={d}>
+              {delimiterNames[d]}
+            </option>
+          ))}
+        </Picker>
+        <div className="flex flex-col gap-1 self-end">
+          <label className="flex items-center gap-2 text-sm">
+            <input
+              type="checkbox"
+              checked={!!mapping.decimalComma}
+              disabled={mapping.delimiter === ","}
+              aria-invalid={errors.decimalComma ? true : undefined}
+              aria-describedby={errors.decimalComma ? "decimal-comma-error" : undefined}
+              onChange={(e) => set({ decimalComma: e.target.checked })}
+            />{" "}
+            Decimal commas (5,25)
           </label>
-          <select id="delimiter" className={selectClass} value={mapping.delimiter} onChange={(e) => set({ delimiter: e.target.value as Delimiter, decimalComma: e.target.value === "," ? false : mapping.decimalComma })}>
-            {DELIMITERS.map((d) => (
-              <option key={d} value={d}>
-                {delimiterNames[d]}
-              </option>
-            ))}
-          </select>
+          {errors.decimalComma ? (
+            <p id="decimal-comma-error" className="text-xs text-danger" role="alert">
+              {errors.decimalComma.join(" ")}
+            </p>
+          ) : null}
         </div>
-        <label className="flex items-center gap-2 self-end text-sm">
-          <input type="checkbox" checked={!!mapping.decimalComma} disabled={mapping.delimiter === ","} onChange={(e) => set({ decimalComma: e.target.checked })} /> Decimal commas (5,25)
-        </label>
         <label className="flex items-center gap-2 self-end text-sm">
           <input type="checkbox" checked={mapping.hasHeader !== false} onChange={(e) => set({ hasHeader: e.target.checked })} /> First line is a header
         </label>
-        <ColumnSelect id="col-rpm" label="Engine speed (rpm)" value={mapping.rpm} columns={columns} onChange={(v) => set({ rpm: v ?? 0 })} />
-        <ColumnSelect id="col-pressure" label="Manifold pressure" value={mapping.pressure} columns={columns} onChange={(v) => set({ pressure: v ?? 0 })} />
+        {column("rpm", "col-rpm", "Engine speed (rpm)")}
+        {column("pressure", "col-pressure", "Manifold pressure")}
         <div className="grid grid-cols-2 gap-2">
-          <div className="flex flex-col gap-1">
-            <label htmlFor="pressure-kind" className="text-sm font-medium">
-              Pressure is
-            </label>
-            <select id="pressure-kind" className={selectClass} value={mapping.pressureKind} onChange={(e) => set({ pressureKind: e.target.value as "gauge" | "absolute" })}>
-              <option value="gauge">boost (gauge)</option>
-              <option value="absolute">absolute</option>
-            </select>
-          </div>
-          <div className="flex flex-col gap-1">
-            <label htmlFor="pressure-unit" className="text-sm font-medium">
-              Pressure unit
-            </label>
-            <select id="pressure-unit" className={selectClass} value={mapping.pressureUnit} onChange={(e) => set({ pressureUnit: e.target.value as "psi" | "kPa" | "bar" })}>
-              <option value="psi">psi</option>
-              <option value="kPa">kPa</option>
-              <option value="bar">bar</option>
-            </select>
-          </div>
+          <Picker id="pressure-kind" label="Pressure is" value={mapping.pressureKind} errors={errors.pressureKind} onChange={(v) => set({ pressureKind: v as "gauge" | "absolute" })}>
+            <option value="gauge">boost (gauge)</option>
+            <option value="absolute">absolute</option>
+          </Picker>
+          <Picker id="pressure-unit" label="Pressure unit" value={mapping.pressureUnit} errors={errors.pressureUnit} onChange={(v) => set({ pressureUnit: v as PressureUnit })}>
+            <option value="psi">psi</option>
+            <option value="kPa">kPa</option>
+            <option value="bar">bar</option>
+          </Picker>
+          {notes.pressureUnit ? <p className="col-span-2 text-xs text-muted" id="pressure-unit-note">{notes.pressureUnit}</p> : null}
         </div>
-        <ColumnSelect id="col-iat" label="Intake air temperature (optional)" value={mapping.intakeTemperature ?? null} columns={columns} optional onChange={(v) => set({ intakeTemperature: v })} />
-        <div className="flex flex-col gap-1">
-          <label htmlFor="temperature-unit" className="text-sm font-medium">
-            Temperature unit
-          </label>
-          <select id="temperature-unit" className={selectClass} value={mapping.temperatureUnit ?? "F"} onChange={(e) => set({ temperatureUnit: e.target.value as "F" | "C" })}>
-            <option value="F">°F</option>
-            <option value="C">°C</option>
-          </select>
-        </div>
-        <ColumnSelect id="col-throttle" label="Throttle % (optional)" value={mapping.throttle ?? null} columns={columns} optional onChange={(v) => set({ throttle: v })} />
-        <ColumnSelect id="col-time" label="Time, s (optional)" value={mapping.time ?? null} columns={columns} optional onChange={(v) => set({ time: v })} />
+        {column("intakeTemperature", "col-iat", "Intake air temperature (optional)", true)}
+        <Picker id="temperature-unit" label="Temperature unit" value={mapping.temperatureUnit ?? "F"} errors={errors.temperatureUnit} note={notes.temperatureUnit} onChange={(v) => set({ temperatureUnit: v as TemperatureUnit })}>
+          {TEMPERATURE_UNITS.map((u) => (
+            <option key={u} value={u}>
+              {temperatureUnitText(u)}
+            </option>
+          ))}
+        </Picker>
+        {column("throttle", "col-throttle", "Throttle % (optional)", true)}
+        {column("time", "col-time", "Time, s (optional)", true)}
       </div>
     </section>
   );

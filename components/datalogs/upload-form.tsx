@@ -8,7 +8,6 @@ import {
   DATALOG_LIMITS,
   decodeLogBytes,
   guessLayout,
-  guessMapping,
   logLines,
   parseLog,
   splitLine,
@@ -19,6 +18,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { withUnit } from "@/lib/datalogs/format";
+import { guessMapping, type GuessNotes } from "@/lib/datalogs/guess-mapping";
+import { mappingFieldErrors } from "@/lib/datalogs/mapping-errors";
 import { ColumnMapping } from "./column-mapping";
 import { LogPreview } from "./log-preview";
 import { FileDrop } from "./file-drop";
@@ -38,6 +39,7 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
   const [file, setFile] = useState<{ name: string; text: string } | null>(null);
   const [fileError, setFileError] = useState<string | null>(null);
   const [mapping, setMapping] = useState<DatalogMappingInput | null>(null);
+  const [notes, setNotes] = useState<GuessNotes>({});
   const [progress, setProgress] = useState<Progress>(null);
   const [serverError, setServerError] = useState<{ message: string; lines: string[] } | null>(null);
   const [busy, setBusy] = useState(false);
@@ -97,7 +99,9 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
         return;
       }
       setFile({ name: f.name, text: decoded.text });
-      setMapping(guessMapping(guessLayout(decoded.text)));
+      const { notes: why, ...guessed } = guessMapping(guessLayout(decoded.text), decoded.text);
+      setMapping(guessed);
+      setNotes(why);
       setName((n) => n || f.name.replace(/\.[^.]+$/, ""));
     };
     reader.readAsArrayBuffer(f);
@@ -112,17 +116,20 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
     return Array.from({ length: count }, (_, i) => (mapping.hasHeader && first[i] ? first[i] : `Column ${i + 1}`));
   }, [file, mapping]);
 
+  // Mapping errors stand beside their fields; the preview waits until there are none.
+  const mappingErrors = useMemo(() => (mapping ? mappingFieldErrors(mapping) : {}), [mapping]);
+  const mappingProblem = Object.keys(mappingErrors).length > 0;
   const parsed = useMemo(() => {
     if (!file || !mapping || ambientErrors.baro) return null;
-    try {
-      return { result: parseLog(file.text, mapping, ambientPa), mappingError: null };
-    } catch (e) {
-      const issues = (e as { issues?: { message: string }[] }).issues;
-      return { result: null, mappingError: issues?.map((i) => i.message).join(" ") ?? "Check the column mapping." };
-    }
-  }, [file, mapping, ambientPa, ambientErrors.baro]);
+    if (mappingProblem) return { result: null, mappingError: "Fix the column choices marked above; the preview follows." };
+    return { result: parseLog(file.text, mapping, ambientPa), mappingError: null };
+  }, [file, mapping, ambientPa, ambientErrors.baro, mappingProblem]);
 
-  const set = (patch: Partial<DatalogMappingInput>) => setMapping((m) => (m ? { ...m, ...patch } : m));
+  // A field the person changes is theirs: its "guessed from the values" note goes.
+  const set = (patch: Partial<DatalogMappingInput>) => {
+    setMapping((m) => (m ? { ...m, ...patch } : m));
+    setNotes((n) => Object.fromEntries(Object.entries(n).filter(([k]) => !(k in patch))));
+  };
   const ready = !!(combo && file && mapping && parsed?.result && !parsed.result.fatal && (parsed.result.errors.length === 0 || skipUnreadable) && parsed.result.points.length > 0 && name.trim() && !ambientErrors.baro && !ambientErrors.airT);
 
   function upload() {
@@ -200,7 +207,7 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
       </section>
 
       {file && mapping ? (
-        <ColumnMapping mapping={mapping} columns={columns} set={set} />
+        <ColumnMapping mapping={mapping} columns={columns} set={set} errors={mappingErrors} notes={notes} />
       ) : null}
 
       {file && mapping && parsed ? (

@@ -13,6 +13,17 @@ export const delimiterNames: Record<Delimiter, string> = { ",": "comma", ";": "s
 const PSI_PA = 6894.757293168361; // lbf/in² in Pa (NIST SP 811, App. B)
 const PRESSURE_TO_PA = { psi: PSI_PA, kPa: 1000, bar: 100_000 } as const;
 export type PressureUnit = keyof typeof PRESSURE_TO_PA;
+export const TEMPERATURE_UNITS = ["F", "C", "K"] as const;
+export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
+/** How a temperature unit is written ("°F", "°C", "K"). */
+export const temperatureUnitText = (u: TemperatureUnit) => (u === "K" ? "K" : `°${u}`);
+/** A reading in `unit` as kelvin. */
+const toKelvin = (v: number, unit: TemperatureUnit) => (unit === "F" ? ((v - 32) * 5) / 9 + 273.15 : unit === "C" ? v + 273.15 : v);
+
+/** The fields that name a column, in the order the form shows them, with their names in messages. */
+export const MAPPED_COLUMNS = ["rpm", "pressure", "intakeTemperature", "throttle", "time"] as const;
+export type MappedColumn = (typeof MAPPED_COLUMNS)[number];
+export const columnLabels: Record<MappedColumn, string> = { rpm: "engine speed", pressure: "manifold pressure", intakeTemperature: "intake air temperature", throttle: "throttle", time: "time" };
 
 const column = (label: string) => z.number({ error: `Pick the column for ${label}` }).int().min(0, `Pick the column for ${label}`).max(255);
 const optionalColumn = (label: string) => column(label).nullish().transform((v) => v ?? null);
@@ -23,25 +34,27 @@ export const datalogMappingSchema = z
     delimiter: z.enum(DELIMITERS, { error: "Delimiter must be comma, semicolon, tab or pipe" }),
     decimalComma: z.boolean().default(false),
     hasHeader: z.boolean().default(true),
-    rpm: column("engine speed"),
-    pressure: column("manifold pressure"),
+    rpm: column(columnLabels.rpm),
+    pressure: column(columnLabels.pressure),
     pressureKind: z.enum(["gauge", "absolute"], { error: "Say whether the pressure is boost (gauge) or absolute" }),
     pressureUnit: z.enum(["psi", "kPa", "bar"], { error: "Pressure unit must be psi, kPa or bar" }),
-    intakeTemperature: optionalColumn("intake air temperature"),
-    temperatureUnit: z.enum(["F", "C"], { error: "Temperature unit must be °F or °C" }).default("F"),
-    time: optionalColumn("time"),
-    throttle: optionalColumn("throttle"),
+    intakeTemperature: optionalColumn(columnLabels.intakeTemperature),
+    temperatureUnit: z.enum(TEMPERATURE_UNITS, { error: "Temperature unit must be °F, °C or K" }).default("F"),
+    time: optionalColumn(columnLabels.time),
+    throttle: optionalColumn(columnLabels.throttle),
   })
   .superRefine((m, ctx) => {
     if (m.decimalComma && m.delimiter === ",") {
       ctx.addIssue({ code: "custom", path: ["decimalComma"], message: "Decimal commas need a delimiter other than the comma" });
     }
+    // The error stands on the later field and names both: "column 1 is already used for engine speed".
     const used = new Map<number, string>();
-    for (const key of ["rpm", "pressure", "intakeTemperature", "time", "throttle"] as const) {
+    for (const key of MAPPED_COLUMNS) {
       const col = m[key];
       if (col === null) continue;
-      if (used.has(col)) ctx.addIssue({ code: "custom", path: [key], message: `Column ${col + 1} is already used for ${used.get(col)}` });
-      else used.set(col, key === "rpm" ? "engine speed" : key === "pressure" ? "manifold pressure" : key);
+      const taken = used.get(col);
+      if (taken) ctx.addIssue({ code: "custom", path: [key], message: `Column ${col + 1} is already used for ${taken}; pick another column for ${columnLabels[key]}` });
+      else used.set(col, columnLabels[key]);
     }
   });
 export type DatalogMapping = z.output<typeof datalogMappingSchema>;
@@ -179,7 +192,11 @@ export function guessLayout(text: string): LogLayoutGuess {
     const mode = modeOf(data.length ? data : counts);
     if (mode < 2) continue;
     const agree = counts.filter((c) => c === mode).length / counts.length;
-    const score = agree * 100 + mode;
+    // Decimal commas split a file on commas as evenly as its real delimiter does: the delimiter
+    // whose data fields read as numbers wins the tie.
+    const fields = lines.slice(1).flatMap((l) => splitLine(l, d));
+    const numeric = fields.length ? fields.filter((f) => readNumber(f, false) !== null || readNumber(f, true) !== null).length / fields.length : 0;
+    const score = agree * 100 + numeric * 50 + mode;
     if (score > best.score) best = { d, score, count: mode };
   }
   const rows = lines.map((l) => splitLine(l, best.d));
@@ -198,37 +215,6 @@ function modeOf(xs: number[]): number {
   let bestN = 0;
   for (const [x, c] of n) if (c > bestN || (c === bestN && x > best)) [best, bestN] = [x, c];
   return best;
-}
-
-/** A first guess of which column is which, from the header names; the person confirms it. */
-export function guessMapping(guess: LogLayoutGuess): DatalogMappingInput {
-  const names = guess.columns.map((c) => c.toLowerCase());
-  const find = (re: RegExp, not?: RegExp) => {
-    const i = names.findIndex((n) => re.test(n) && !(not && not.test(n)));
-    return i >= 0 ? i : null;
-  };
-  const rpm = find(/rpm|engine speed|\bspeed\b|\brev/);
-  const pressure = find(/boost|map\b|manifold|pressure/, /baro|ambient/);
-  const temp = find(/iat|intake.*(air|temp)|air temp|charge temp|\btemp/);
-  const time = find(/^time|\btime\b|\(s\)|seconds|^t$/);
-  const throttle = find(/throttle|tps|pedal/);
-  const header = names[pressure ?? -1] ?? "";
-  const pressureKind = /boost|gauge/.test(header) ? "gauge" : /map\b|abs/.test(header) ? "absolute" : "gauge";
-  const pressureUnit = /kpa/.test(header) ? "kPa" : /bar\b/.test(header) ? "bar" : "psi";
-  const tempHeader = names[temp ?? -1] ?? "";
-  return {
-    delimiter: guess.delimiter,
-    decimalComma: guess.decimalComma,
-    hasHeader: guess.hasHeader,
-    rpm: rpm ?? 0,
-    pressure: pressure ?? (rpm === 1 ? 2 : 1),
-    pressureKind,
-    pressureUnit,
-    intakeTemperature: temp,
-    temperatureUnit: /°c|\bc\)|celsius|\(c/.test(tempHeader) ? "C" : "F",
-    time,
-    throttle,
-  };
 }
 
 // ---------- parsing ----------
@@ -316,9 +302,9 @@ export function parseLog(text: string, mappingInput: DatalogMappingInput, ambien
     }
     let tempK: number | null = null;
     if (t !== null) {
-      tempK = m.temperatureUnit === "F" ? ((t - 32) * 5) / 9 + 273.15 : t + 273.15;
+      tempK = toKelvin(t, m.temperatureUnit);
       if (tempK < 220 || tempK > 500) {
-        fail(line, `intake air temperature ${t} °${m.temperatureUnit} is outside −53 to 227 °C`);
+        fail(line, `intake air temperature ${t} ${temperatureUnitText(m.temperatureUnit)} is outside −53 to 227 °C`);
         continue;
       }
     }

@@ -1,11 +1,32 @@
 // The classroom read from the back of the room and on a phone: at 1,920×1,080 the chart is at
 // least 560 px and 60 % of the screen tall with 20 px labels or more, the class code is large,
 // the keys are listed, arrows on a focused slider move the slider (not the step); at 390 px wide
-// no page is wider than the window. Bounds from the issue (the author's, for a projector).
+// no page is wider than the window and no axis title overlaps its tick labels; a wrong class code
+// keeps what the student typed. Bounds from the issue (the author's, for a projector).
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
+import type { AxisReport } from "@/components/charts/axes-report";
 import { DEMO_LESSON_TITLE } from "@/db/seed/lessons";
 import { BASE_URL, launchBrowser, signIn, watchErrors } from "../support/browser";
+
+/**
+ * Each axis's box holds its tick labels, tick marks and title side by side (half a pixel for
+ * rounding), and each title fits along its axis: nothing overlaps.
+ */
+async function expectAxesClear(page: Page) {
+  const canvas = page.getByTestId("curve-chart").locator("canvas");
+  await expect.poll(() => canvas.getAttribute("data-axes")).not.toBeNull();
+  const axes = JSON.parse((await canvas.getAttribute("data-axes")) ?? "[]") as AxisReport[];
+  expect(axes.filter((a) => a.axis === "x")).toHaveLength(1);
+  expect(axes.filter((a) => a.axis === "y").length).toBeGreaterThanOrEqual(1);
+  for (const a of axes) {
+    const across = a.axis === "y" ? a.right - a.left : a.bottom - a.top;
+    const along = a.axis === "y" ? a.bottom - a.top : a.right - a.left;
+    const labels = a.axis === "y" ? a.labelWidth : a.labelHeight;
+    expect(across + 0.5, `${a.id}: room across the axis`).toBeGreaterThanOrEqual(labels + a.tickSpace + a.titleHeight);
+    expect(a.titleWidth, `${a.id}: title along the axis`).toBeLessThanOrEqual(along);
+  }
+}
 
 describe("the classroom in the room and on a phone", () => {
   let browser: Browser;
@@ -34,6 +55,7 @@ describe("the classroom in the room and on a phone", () => {
     expect(box?.height ?? 0).toBeGreaterThanOrEqual(560);
     expect(box?.height ?? 0).toBeGreaterThanOrEqual(0.6 * 1080);
     expect(Number(await chart.getAttribute("data-font-size"))).toBeGreaterThanOrEqual(20);
+    await expectAxesClear(page);
 
     const code = page.getByTestId("classroom-class-code").locator("span.font-mono");
     expect(await code.textContent()).toMatch(/^[A-Z2-9]{6}$/);
@@ -69,6 +91,27 @@ describe("the classroom in the room and on a phone", () => {
     const box = await page.getByTestId("curve-chart").locator("canvas").boundingBox();
     expect(box?.width ?? 999).toBeLessThanOrEqual(390);
     expect(box?.height ?? 0).toBeGreaterThanOrEqual(300);
+    await expectAxesClear(page);
+    await context.close();
+  });
+
+  it("a wrong class code keeps what was typed, with the error beside the field", async () => {
+    const context = await browser.newContext({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    const page = await signIn(context, "member@example.com");
+    const errors = watchErrors(page);
+    await page.goto(`${BASE_URL}/lessons/join`, { waitUntil: "networkidle" });
+    const code = page.getByLabel("Class code");
+    // Six characters no class code uses (codes avoid 0, 1, I and O).
+    await code.fill("OO1I0Q");
+    await page.getByRole("button", { name: "Join" }).click();
+    const error = page.locator("#f-code-error");
+    await error.waitFor({ timeout: 30_000 });
+    expect(await error.textContent()).toMatch(/class code/i);
+    expect(await code.inputValue()).toBe("OO1I0Q");
+    expect(await code.getAttribute("aria-invalid")).toBe("true");
+    expect(await code.getAttribute("aria-describedby")).toBe("f-code-error");
+    expect(page.url()).toMatch(/\/lessons\/join/);
+    expect(errors).toEqual([]);
     await context.close();
   });
 });

@@ -9,7 +9,8 @@ import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { boostCurve, calibrate, combinationSchema, inToM, paToPsi, veAt } from "@/calc";
-import { binsToMeasured, cleanLog, guessLayout, guessMapping, parseLog } from "@/lib/datalogs/parse";
+import { binsToMeasured, cleanLog, guessLayout, parseLog } from "@/lib/datalogs/parse";
+import { guessMapping } from "@/lib/datalogs/guess-mapping";
 import { DEMO_DATALOG_MAPPING, DEMO_DATALOGS, DEMO_TRUTH, demoLogCsv, demoTrueVeCurve, demoTruth, synthesizeLogCsv } from "@/db/seed/datalogs";
 import { workTruckV6 } from "@/lib/combinations/demo-specs";
 
@@ -18,7 +19,7 @@ const samples = path.join(import.meta.dirname, "../../../public/samples");
 
 /** A log's run for `calibrate`, through the app's parser and cleaner; the sample file unless `text` is given. */
 function runOf(log: (typeof DEMO_DATALOGS)[number], text = fs.readFileSync(path.join(samples, log.fileName), "utf8")) {
-  const mapping = guessMapping(guessLayout(text));
+  const mapping = guessMapping(guessLayout(text), text);
   expect(mapping).toMatchObject(DEMO_DATALOG_MAPPING);
   const parsed = parseLog(text, mapping, catalogue.ambient.pressure);
   expect(parsed.errors).toEqual([]);

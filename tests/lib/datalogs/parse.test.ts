@@ -5,12 +5,12 @@ import {
   DATALOG_LIMITS,
   decodeLogBytes,
   guessLayout,
-  guessMapping,
   parseLog,
   readNumber,
   splitLine,
   type DatalogMappingInput,
 } from "@/lib/datalogs/parse";
+import { guessMapping } from "@/lib/datalogs/guess-mapping";
 
 // source: NIST SP 811 (2008), App. B: 1 psi = 6.894 757 kPa; 1 bar = 100 kPa exactly.
 const PSI = 6894.757;

@@ -4,7 +4,8 @@ import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { combinationSchema, exampleCombination, paToPsi, solvePoint, veAt, type VePoint } from "@/calc";
-import { cleanLog, guessLayout, guessMapping, parseLog } from "@/lib/datalogs/parse";
+import { cleanLog, guessLayout, parseLog } from "@/lib/datalogs/parse";
+import { guessMapping } from "@/lib/datalogs/guess-mapping";
 import { compareBins, fitVe, pulleyComparison, smallerPulleys, specAsLogged, withFittedVe } from "@/lib/datalogs/analysis";
 import { DEMO_DATALOG_MAPPING, DEMO_DATALOGS, demoDatalogCsv, demoTrueVeCurve, demoTruth, synthesizeLogCsv } from "@/db/seed/datalogs";
 import { bigInchTwinScrew } from "@/lib/combinations/demo-specs";
@@ -18,7 +19,7 @@ const trueVe: VePoint[] = [
 ];
 
 function fitFrom(text: string) {
-  const mapping = guessMapping(guessLayout(text));
+  const mapping = guessMapping(guessLayout(text), text);
   const parsed = parseLog(text, mapping, spec.ambient.pressure);
   expect(parsed.errors).toEqual([]);
   const cleaned = cleanLog(parsed.points, spec.ambient.pressure, { binWidth: 250, minThrottle: 90 });
@@ -82,7 +83,7 @@ describe("the demo log", () => {
     // little. Regenerate it with `npx tsx scripts/write-demo-datalog.ts` after such a change.
     const file = fs.readFileSync(path.join(import.meta.dirname, "../../../public/samples/demo-datalog.csv"), "utf8");
     expect(file.split("\n")[0]).toBe(demoDatalogCsv().split("\n")[0]);
-    const mapping = guessMapping(guessLayout(file));
+    const mapping = guessMapping(guessLayout(file), file);
     expect(mapping).toMatchObject(DEMO_DATALOG_MAPPING);
     const truck = combinationSchema.parse(DEMO_DATALOGS[0].spec);
     const parsed = parseLog(file, mapping, truck.ambient.pressure);

@@ -1,5 +1,5 @@
 "use client";
-import { useActionState } from "react";
+import { useActionState, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -7,6 +7,9 @@ import { joinLessonAction } from "../actions";
 
 export function JoinForm({ initialCode }: { initialCode: string }) {
   const [state, action, pending] = useActionState(joinLessonAction, undefined);
+  // Held here, not in the form: React resets a form after its action, and a wrong code must
+  // stay on screen to be corrected.
+  const [code, setCode] = useState(initialCode);
   const errors = state && !state.ok ? state.fieldErrors : undefined;
   return (
     <form action={action} className="flex flex-col gap-3">
@@ -18,7 +21,8 @@ export function JoinForm({ initialCode }: { initialCode: string }) {
         autoCapitalize="characters"
         spellCheck={false}
         maxLength={16}
-        defaultValue={initialCode}
+        value={code}
+        onChange={(e) => setCode(e.target.value)}
         errors={errors?.code}
         className="max-w-[14rem] [&_input]:font-mono [&_input]:text-lg [&_input]:tracking-widest"
       />
