@@ -1,7 +1,7 @@
 import "server-only";
 // The e-mail that carries a sheet, as previewed and as sent: the same builder, the shop's details
 // and currency, and (when sent) the one-page PDF of the sheet attached.
-import type { UnitSystem } from "@/calc";
+import { nearestPreset, unitsToParam, type UnitSystem } from "@/calc";
 import { buildSheetEmail } from "./recommendation-email";
 import type { DbOrTx } from "@/db/connect";
 import type { Recommendation } from "@/db/repo/recommendations";
@@ -19,9 +19,9 @@ export async function composeSheetMail(db: DbOrTx, rec: Recommendation, unitSyst
  * The sheet as a one-page PDF, printed by Chromium on the server from the print page. The
  * headless browser gets a two-minute signed token for this one sheet, never the user's cookie.
  */
-export async function sheetPdf(rec: Recommendation, unitSystem: UnitSystem, paper: Paper = unitSystem === "metric" ? "a4" : "letter") {
+export async function sheetPdf(rec: Recommendation, unitSystem: UnitSystem, paper: Paper = nearestPreset(unitSystem) === "metric" ? "a4" : "letter") {
   const { token } = makeShareToken(rec.id, rec.shareVersion, PRINT_TOKEN_TTL_SECONDS);
-  const pdf = await renderPdf(appUrl(`/recommendations/${rec.id}/print?t=${encodeURIComponent(token)}&units=${unitSystem}`), paper);
+  const pdf = await renderPdf(appUrl(`/recommendations/${rec.id}/print?t=${encodeURIComponent(token)}&units=${encodeURIComponent(unitsToParam(unitSystem))}`), paper);
   const name = rec.customerName.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").toLowerCase() || "customer";
   return { filename: `recommendation-${name}.pdf`, content: pdf, contentType: "application/pdf" };
 }

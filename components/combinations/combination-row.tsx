@@ -7,6 +7,7 @@ import { formatQuantity, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import type { Role } from "@/db/schema";
 import { must, type CombinationListActions, type ListedCombination } from "./use-combinations-list";
+import { digitsOf } from "@/lib/units/format";
 
 export function CombinationRow(props: {
   c: ListedCombination;
@@ -91,11 +92,11 @@ export function CombinationRow(props: {
       ) : null}
       {role !== "member" ? <td className="px-3 py-2">{c.ownerName || c.ownerEmail}</td> : null}
       <td className="px-3 py-2 text-right">
-        {eng.value.toFixed(unitSystem === "metric" ? 1 : 0)} {eng.unit}
+        {eng.value.toFixed(digitsOf("displacement", unitSystem))} {eng.unit}
       </td>
       <td className="px-3 py-2">{c.blowerKind === "roots" ? "Roots" : "Twin-screw"}</td>
       <td className="px-3 py-2 text-right">
-        {pulley.value.toFixed(unitSystem === "metric" ? 0 : 2)} {pulley.unit}
+        {pulley.value.toFixed(digitsOf("length-small", unitSystem))} {pulley.unit}
       </td>
       <td className="px-3 py-2 text-right">
         <Link href={`/combinations/${c.id}/revisions`} className="hover:underline" title="History">

@@ -14,8 +14,7 @@ import {
   type PulleyForBoostResult,
   type PulleySweepRow,
   type RangeReason,
-  type UnitSystem,
-} from "@/calc";
+  type UnitSystem, unitLabel } from "@/calc";
 import { quantityText } from "@/lib/units/format";
 
 /** A blower pulley on the parts shelf (diameter in m; price a decimal string). */
@@ -50,7 +49,7 @@ export function peakPowerRpm(points: readonly OperatingPoint[], fallback: number
 const near = (a: number, b: number) => Math.abs(a - b) < 1e-6;
 
 /** Step between neighbouring pulleys when the shelf has none: 0.1 in, or 2.5 mm. */
-export const neighbourStep = (system: UnitSystem) => (system === "imperial" ? inToM(0.1) : 0.0025);
+export const neighbourStep = (system: UnitSystem) => (unitLabel("length-small", system) === "in" ? inToM(0.1) : 0.0025);
 
 /**
  * The next smaller and next larger blower pulleys to overlay: stocked sizes first, then any on

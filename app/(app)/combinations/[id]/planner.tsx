@@ -5,7 +5,7 @@
 // (curves, ladder, chart), and the views (header, save bar, readouts, chart, ladder, finder).
 import { useDeferredValue, useMemo, useState, useTransition } from "react";
 import { useForm, useWatch } from "react-hook-form";
-import type { Combination, UnitSystem } from "@/calc";
+import { unitsToParam, type Combination, type UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { Editor } from "@/components/planner/editor";
 import { PulleyFinder } from "@/components/pulleys/pulley-finder";
@@ -15,6 +15,7 @@ import { Notice } from "@/components/ui/notice";
 import type { ActionState } from "@/lib/action-state";
 import { convertForm, fieldFromSI, sameSpec, toForm, toSpec, validateForm, type PlannerForm } from "@/lib/combinations/form-model";
 import { finderStock, type Shelf } from "@/lib/planner/compute";
+import { unitsName } from "@/lib/units/person";
 import { PlannerChart } from "./planner-chart";
 import { DraftOffer, PlannerHeader } from "./planner-header";
 import { PlannerReadouts } from "./planner-readouts";
@@ -76,8 +77,8 @@ export function Planner(props: PlannerProps) {
     setSystem(next);
     setUnitsMsg(null);
     startUnits(async () => {
-      const r = await props.saveUnits(next);
-      setUnitsMsg(r.ok ? `Units set to ${next}; saved as your preference.` : `Units changed here, but not saved as your preference: ${r.message}`);
+      const r = await props.saveUnits(unitsToParam(next));
+      setUnitsMsg(r.ok ? `Units set to ${unitsName(next)}; saved as your preference.` : `Units changed here, but not saved as your preference: ${r.message}`);
     });
   };
 
@@ -120,7 +121,7 @@ export function Planner(props: PlannerProps) {
 
   return (
     <div className="flex flex-col gap-4">
-      <PlannerHeader name={props.name} combinationId={combinationId} baseRevision={baseRevision} isDemo={props.isDemo} system={system} onUnits={switchUnits} unitsMessage={unitsMsg} />
+      <PlannerHeader name={props.name} combinationId={combinationId} baseRevision={baseRevision} isDemo={props.isDemo} system={system} own={props.unitSystem} onUnits={switchUnits} unitsMessage={unitsMsg} />
       {draft.offer ? <DraftOffer revision={baseRevision} savedAt={draft.offer.savedAt} onRestore={draft.restoreDraft} onDiscard={draft.discardDraft} /> : null}
       <SaveBar invalid={!live.ok} canWrite={canWrite} note={note} onNote={setNote} onSave={(e) => void onSave(e)} saving={saving} dirty={dirty} onDuplicate={duplicate} duplicating={duplicating} message={saveMsg} />
 

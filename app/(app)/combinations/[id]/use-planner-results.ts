@@ -3,7 +3,7 @@
 // the neighbouring pulleys, the ladder at the one chosen speed, the cautions, the what-if pulley
 // and the chart's series.
 import { useMemo } from "react";
-import { cautions as calcCautions, trySolvePoint, type Caution, type Combination, type UnitSystem } from "@/calc";
+import { cautions as calcCautions, trySolvePoint, type Caution, type Combination, type UnitSystem, unitLabel } from "@/calc";
 import type { BoostExtra } from "@/components/charts/boost-power-charts";
 import type { CurveSeries } from "@/components/charts/curve-chart";
 import { fieldFromSI } from "@/lib/combinations/form-model";
@@ -63,6 +63,6 @@ export function usePulleySlider(current: number, blowerPulleys: ShelfPulley[], s
     const ds = ladderDiameters(current, blowerPulleys);
     const lo = Math.min(ds[0], current);
     const hi = Math.max(ds[ds.length - 1], current);
-    return { min: fieldFromSI("length-small", lo, system), max: fieldFromSI("length-small", hi, system), step: system === "imperial" ? 0.05 : 1 };
+    return { min: fieldFromSI("length-small", lo, system), max: fieldFromSI("length-small", hi, system), step: unitLabel("length-small", system) === "in" ? 0.05 : 1 };
   }, [current, blowerPulleys, system]);
 }

@@ -8,6 +8,7 @@ import { formatPrice } from "@/lib/orders/money";
 import { ORDER_STATUS_LABELS } from "@/lib/orders/status";
 import { AnswerSheet } from "./answer-sheet";
 import { loadSentSheet, type CustomerAnswer } from "./sent-sheet";
+import { presetOf } from "@/calc";
 
 /** A token with a broken %-escape is simply not a token (refused below), never an error. */
 function safeDecode(s: string): string {
@@ -55,7 +56,7 @@ export default async function SharedSheetPage({ params, searchParams }: Props) {
   const token = safeDecode(raw);
   const loaded = await loadSentSheet(token, sp.units);
   if (!loaded.ok) return <LinkRefused reason={loaded.reason} />;
-  const other = loaded.unitSystem === "metric" ? "imperial" : "metric";
+  const other = presetOf(loaded.unitSystem) === "imperial" ? "metric" : "imperial";
   return (
     <div className="flex min-w-0 flex-col gap-4">
       <div className="no-print flex flex-wrap items-center gap-3 text-sm">

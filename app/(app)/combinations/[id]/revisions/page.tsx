@@ -14,6 +14,7 @@ import { canWriteOwned } from "@/db/policy";
 import { getCombination, listRevisions } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
+import { personUnits, unitsName } from "@/lib/units/person";
 
 export const metadata: Metadata = { title: "History" };
 
@@ -37,7 +38,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
   const writable = canWriteOwned(actor, combination.ownerId);
   const byNumber = new Map(revisions.map((r) => [r.number, r]));
   const current = combination.revision;
-  const units = user.unitSystem;
+  const units = personUnits(user);
 
   const viewed = int(sp.view) !== undefined ? byNumber.get(int(sp.view)!) : undefined;
   const newest = revisions[0]?.number ?? current;
@@ -57,7 +58,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
         <h1 className="text-2xl font-semibold">History of “{combination.name}”</h1>
         <p className="text-sm text-muted">
           Now at revision {current}. Each save is a revision; restoring one saves its spec again as the newest, so nothing is
-          lost. Values in {units} units.
+          lost. Values in {unitsName(units)}.
         </p>
         {!writable ? <p className="mt-1 text-sm text-muted">You can view this history but not change it. Duplicate the combination to make your own copy.</p> : null}
       </div>

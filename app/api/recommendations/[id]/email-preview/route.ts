@@ -1,5 +1,5 @@
 import { route } from "@/app/_lib/http";
-import { getCurrentUser, requireActor } from "@/app/_lib/session";
+import { currentUnits, requireActor } from "@/app/_lib/session";
 import { composeSheetMail } from "@/app/_lib/sheet-mail";
 import { SHARE_LINK_TTL_SECONDS } from "@/app/_lib/share-link";
 import { getDb } from "@/db/client";
@@ -13,7 +13,7 @@ export const GET = route(async (_req, { params }: Ctx) => {
   const { id } = await params;
   const db = getDb();
   const rec = await getRecommendation(db, actor, id);
-  const unitSystem = (await getCurrentUser())?.unitSystem ?? "imperial";
+  const unitSystem = await currentUnits();
   const placeholder = { url: "(the customer's own link is made when you send)", expiresAt: new Date(Date.now() + SHARE_LINK_TTL_SECONDS * 1000) };
   const { mail } = await composeSheetMail(db, rec, unitSystem, placeholder);
   return { to: rec.customerEmail, subject: mail.subject, text: mail.text, html: mail.html, attachment: "the sheet as a one-page PDF" };

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { route, parseQuery } from "@/app/_lib/http";
-import { getCurrentUser, requireActor } from "@/app/_lib/session";
+import { currentUnits, requireActor } from "@/app/_lib/session";
 import { sheetPdf } from "@/app/_lib/sheet-mail";
 import { getDb } from "@/db/client";
 import { getRecommendation } from "@/db/repo/recommendations";
@@ -14,7 +14,7 @@ export const GET = route(async (req, { params }: Ctx) => {
   const actor = await requireActor(["sales", "tuner", "admin"]);
   const { id } = await params;
   const rec = await getRecommendation(getDb(), actor, id);
-  const units = (await getCurrentUser())?.unitSystem ?? "imperial";
+  const units = await currentUnits();
   const { paper } = parseQuery(req, querySchema);
   let pdf;
   try {
