@@ -152,7 +152,7 @@ export function ClassroomView({ title, ownerName, steps, unitSystem, initialStep
         </ul>
       </section>
 
-      <CautionsPanel cautions={warnings} compact />
+      <CautionsPanel cautions={warnings} units={unitSystem} compact />
       <KeyGuide />
     </div>
   );

@@ -174,7 +174,7 @@ export function SheetView({ sheet, shop, currency, unitSystem, print = false }: 
       ) : null}
 
       <div className={print ? "text-[10px] leading-snug" : ""}>
-        <CautionsPanel cautions={cautions} compact={print} />
+        <CautionsPanel cautions={cautions} units={unitSystem} compact={print} />
       </div>
       <p className={`text-muted ${print ? "text-[9px]" : "text-xs"}`}>
         Figures are predictions from a simplified model for this combination at revision {sheet.revision}; they are estimates, not measurements. Prices as quoted on the date above.

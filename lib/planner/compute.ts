@@ -16,6 +16,7 @@ import {
   type RangeReason,
   type UnitSystem, unitLabel } from "@/calc";
 import { quantityText } from "@/lib/units/format";
+import { calcErrorText } from "@/lib/units/caution-text";
 
 /** A blower pulley on the parts shelf (diameter in m; price a decimal string). */
 export type ShelfPulley = { id: string; partNumber: string; diameter: number; ribCount: number; price: string; stock: number };
@@ -165,7 +166,7 @@ export function findPulley(spec: Combination, rpm: number, targetBoostGauge: num
         message: `A boost of ${quantityText("pressure", targetBoostGauge, system)} cannot be reached at ${Math.round(rpm)} rpm with any blower pulley from ${quantityText("length-small", 0.03, system)} to ${quantityText("length-small", 0.5, system)}. The reachable range there is ${lo} to ${hi}.`,
       };
     }
-    if (e instanceof CalcConvergenceError || e instanceof CalcInputError) return { ok: false, message: e.message };
+    if (e instanceof CalcConvergenceError || e instanceof CalcInputError) return { ok: false, message: calcErrorText(e, system) };
     throw e;
   }
 }

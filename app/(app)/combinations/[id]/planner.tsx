@@ -158,7 +158,7 @@ export function Planner(props: PlannerProps) {
                 <PulleyLadder rows={results.rows} system={system} rpm={results.rpm} fromShelf={shelf.blowerPulleys.length > 0} onUse={applyPulley} />
                 <PulleyFinder spec={results.spec} system={system} rpms={results.rpms} stock={finderStock(shelf.blowerPulleys)} defaultRpm={results.rpm} onRpm={setChosenRpm} onApply={applyPulley} />
               </div>
-              <CautionsPanel cautions={results.cautions} />
+              <CautionsPanel cautions={results.cautions} units={system} />
             </>
           ) : (
             <Notice tone="danger" title="No prediction">

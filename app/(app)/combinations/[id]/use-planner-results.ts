@@ -10,6 +10,7 @@ import { fieldFromSI } from "@/lib/combinations/form-model";
 import { ladder, ladderDiameters, ladderSpeed, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, withPulley, type ShelfPulley } from "@/lib/planner/compute";
 import { explainSentence } from "@/lib/planner/explain-words";
 import { quantityText } from "@/lib/units/format";
+import { calcErrorText } from "@/lib/units/caution-text";
 
 export type ChartOptions = { showNeighbours: boolean; extra: BoostExtra };
 
@@ -36,7 +37,7 @@ export function usePlannerResults({ spec: s, baseSpec, chosenRpm, whatIf, blower
           : explainSentence(trySolvePoint(baseSpec, rpm), here, system);
       return { ok: true as const, spec: s, rpms, curve: current, peak, rpm, smaller, larger, whatIf: what, rows, cautions: list, why };
     } catch (e) {
-      return { ok: false as const, message: e instanceof Error ? e.message : "The model could not solve this combination." };
+      return { ok: false as const, message: calcErrorText(e, system) };
     }
   }, [s, baseSpec, chosenRpm, whatIf, blowerPulleys, system]);
 }
