@@ -8,6 +8,7 @@ import { Button } from "@/components/ui/button";
 import type { Role } from "@/db/schema";
 import { must, type CombinationListActions, type ListedCombination } from "./use-combinations-list";
 import { digitsOf } from "@/lib/units/format";
+import { useDates } from "@/components/locale";
 
 export function CombinationRow(props: {
   c: ListedCombination;
@@ -21,6 +22,7 @@ export function CombinationRow(props: {
   onDelete: () => void;
 }) {
   const { c, role, staff, unitSystem } = props;
+  const dates = useDates();
   const [renaming, setRenaming] = useState(false);
   const [confirmDelete, setConfirmDelete] = useState(false);
   const [name, setName] = useState(c.name);
@@ -104,7 +106,7 @@ export function CombinationRow(props: {
         </Link>
       </td>
       <td className="px-3 py-2 whitespace-nowrap">
-        <time dateTime={c.updatedAt}>{new Date(c.updatedAt).toLocaleString()}</time>
+        <time dateTime={c.updatedAt}>{dates.dateTime(c.updatedAt)}</time>
       </td>
       <td className="px-3 py-2">
         <div className="flex flex-wrap justify-end gap-1">

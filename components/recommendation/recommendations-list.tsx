@@ -11,6 +11,7 @@ import { SelectField } from "@/components/ui/select-field";
 import { Notice } from "@/components/ui/notice";
 import { usePrice } from "@/components/price";
 import { digitsOf } from "@/lib/units/format";
+import { useDates } from "@/components/locale";
 
 type Row = {
   id: string;
@@ -28,6 +29,7 @@ type Row = {
 };
 
 export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) {
+  const dates = useDates();
   const price = usePrice();
   const [search, setSearch] = useState("");
   const [status, setStatus] = useState("");
@@ -99,7 +101,7 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
                 <td className="px-2 py-1.5 text-right">{fromSI("length-small", r.blowerPulleyDiameter, unitSystem).toFixed(digitsOf("length-small", unitSystem))}</td>
                 <td className="px-2 py-1.5 capitalize">{r.status}</td>
                 <td className="px-2 py-1.5 text-right">{price(r.total)}</td>
-                <td className="px-2 py-1.5">{new Date(r.updatedAt).toLocaleDateString("en-GB", { dateStyle: "medium" })}</td>
+                <td className="px-2 py-1.5">{dates.date(r.updatedAt)}</td>
                 <td className="px-2 py-1.5">{r.authorName}</td>
               </tr>
             ))}

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { presetOf, unitsToParam, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { useDates } from "@/components/locale";
 
 type PlannerHeaderProps = { name: string; combinationId: string; baseRevision: number; isDemo: boolean; system: UnitSystem; own: UnitSystem; onUnits: (u: UnitSystem) => void; unitsMessage: string | null };
 
@@ -58,10 +59,11 @@ export function PlannerHeader({ name, combinationId, baseRevision, isDemo, syste
 }
 
 export function DraftOffer({ revision, savedAt, onRestore, onDiscard }: { revision: number; savedAt: number; onRestore: () => void; onDiscard: () => void }) {
+  const dates = useDates();
   return (
     <Notice tone="warning" title="Unsaved changes found">
       <p>
-        This browser kept changes to revision {revision} from {new Date(savedAt).toLocaleString()} that were never saved.
+        This browser kept changes to revision {revision} from {dates.dateTime(savedAt)} that were never saved.
       </p>
       <div className="mt-2 flex gap-2">
         <Button type="button" onClick={onRestore}>

@@ -9,6 +9,7 @@ import { Notice } from "@/components/ui/notice";
 import { datalogMappingSchema, parseLog } from "@/lib/datalogs/parse";
 import { loadAnalysis } from "./load";
 import { personUnits } from "@/lib/units/person";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Datalog" };
 
@@ -20,7 +21,7 @@ export default async function DatalogPage({ params, searchParams }: { params: Pr
   const skipped = mapping.success ? parseLog(log.rawText, mapping.data, ambient.pressure).skipped : [];
   return (
     <div className="flex flex-col gap-5">
-      <LogHeader title={log.name} log={log} combination={combination} ambient={ambient} unitSystem={personUnits(user)} />
+      <LogHeader title={log.name} log={log} combination={combination} ambient={ambient} unitSystem={personUnits(user)} locale={await requestLocale()} />
       {skipped.length ? (
         <Notice tone="warning" title={`${skipped.length} unreadable ${skipped.length === 1 ? "line was" : "lines were"} left out at upload; ${log.pointCount} rows kept.`}>
           <ul className="list-disc pl-5" aria-label="Skipped lines">

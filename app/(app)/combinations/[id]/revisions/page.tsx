@@ -15,6 +15,8 @@ import { getCombination, listRevisions } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
 import { personUnits, unitsName } from "@/lib/units/person";
+import { dateTimeText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "History" };
 
@@ -24,6 +26,7 @@ const int = (s: string | undefined) => (s && /^\d{1,6}$/.test(s) ? Number(s) : u
 
 export default async function RevisionsPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Search> }) {
   const user = await requirePageUser();
+  const locale = await requestLocale();
   const actor = toActor(user);
   const [{ id }, sp] = await Promise.all([params, searchParams]);
   const db = getDb();
@@ -84,7 +87,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
                   <td className="px-3 py-2">{r.note ?? <span className="text-muted">—</span>}</td>
                   <td className="px-3 py-2">{r.authorName ?? <span className="text-muted">a removed account</span>}</td>
                   <td className="px-3 py-2 whitespace-nowrap">
-                    <time dateTime={r.createdAt.toISOString()}>{r.createdAt.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}</time>
+                    <time dateTime={r.createdAt.toISOString()}>{dateTimeText(r.createdAt, locale)}</time>
                   </td>
                   <td className="px-3 py-2">
                     <div className="flex flex-wrap items-start justify-end gap-2">

@@ -7,6 +7,7 @@ import { combinationSchema } from "@/calc";
 import { canWriteOwned } from "@/db/policy";
 import { loadAnalysis, loadCombinationLogs } from "../load";
 import { personUnits } from "@/lib/units/person";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Calibrate from a log" };
 
@@ -16,7 +17,7 @@ export default async function CalibratePage({ params, searchParams }: { params: 
   const logs = await loadCombinationLogs(actor, combination.id);
   return (
     <div className="flex flex-col gap-5">
-      <LogHeader title={`Calibrate from “${log.name}”`} log={log} combination={combination} ambient={ambient} unitSystem={personUnits(user)} />
+      <LogHeader title={`Calibrate from “${log.name}”`} log={log} combination={combination} ambient={ambient} unitSystem={personUnits(user)} locale={await requestLocale()} />
       <CalibrateView
         logId={log.id}
         logName={log.name}

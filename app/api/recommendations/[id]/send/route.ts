@@ -10,6 +10,7 @@ import { getRecommendation } from "@/db/repo/recommendations";
 import { takeHit } from "@/db/repo/rate-limits";
 import { recordSentVersion } from "@/db/repo/sheet-versions";
 import { getShopTerms } from "@/db/repo/shop";
+import { requestLocale } from "@/app/_lib/locale";
 
 type Ctx = { params: Promise<{ id: string }> };
 
@@ -35,7 +36,8 @@ export const POST = route(async (_req, { params }: Ctx) => {
   // Read again: the send moved the sheet's share version, which the PDF's print token must carry.
   const rec = await getRecommendation(db, actor, id);
   const link = sentVersionLink(version, unitSystem);
-  const [{ mail }, pdf] = await Promise.all([composeSheetMail(db, rec, unitSystem, link), sheetPdfAttachment(rec, unitSystem)]);
+  const locale = await requestLocale();
+  const [{ mail }, pdf] = await Promise.all([composeSheetMail(db, rec, unitSystem, link, locale), sheetPdfAttachment(rec, unitSystem, locale)]);
   const attachments = pdf ? [{ filename: pdf.filename, contentType: pdf.contentType, base64: pdf.content.toString("base64") }] : undefined;
   const sent = await queueAndTry({ to, ...mail, attachments, purpose: `recommendation:${id}` }, db);
   if (sent.status !== "sent") {
