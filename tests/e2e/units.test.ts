@@ -12,6 +12,7 @@ import { combinations, users } from "@/db/schema";
 import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import { dateTimeText } from "@/lib/format/dates";
 import { BASE_URL, DEMO_PASSWORD, launchBrowser, signIn, watchErrors } from "../support/browser";
+import { Client, signedIn } from "../support/http";
 
 const { pool, db } = connect(process.env.DATABASE_URL!, 2);
 
@@ -26,7 +27,16 @@ async function plannerText(page: Page): Promise<string> {
     const input = document.getElementById("f-drive.blowerPulleyDiameter") as HTMLInputElement | null;
     return !!input && input.value !== "" && !!document.querySelector('[data-testid="cautions-panel"] li');
   });
-  return page.evaluate(() => document.body.innerText);
+  // A shelf item's name is the shop's own words (the demo's may say "1.6 L/rev"): keep only the
+  // figures the app adds after it in parentheses.
+  return page.evaluate(() => {
+    let text = document.body.innerText;
+    for (const o of document.querySelectorAll("option")) {
+      const t = o.textContent ?? "";
+      if (t.includes("(")) text = text.replace(t, t.slice(t.lastIndexOf("(")));
+    }
+    return text;
+  });
 }
 
 const firstMatch = (text: string, re: RegExp) => {
@@ -120,6 +130,22 @@ describe("the person's units in Chromium", () => {
     expect(after.revision).toBe(before.revision);
     expect(JSON.stringify(after.spec)).toBe(JSON.stringify(before.spec));
     expect(errors).toEqual([]);
+  });
+
+  it("PATCH /api/me sets a preset and units per kind, checks the session and names a bad field", async () => {
+    const anon = new Client();
+    expect((await anon.json("/api/me", "PATCH", { unitSystem: "metric" })).status).toBe(401);
+    const me = await signedIn(email, DEMO_PASSWORD);
+    const ok = await me.json("/api/me", "PATCH", { unitSystem: "imperial", units: { displacement: "L", airflow: "m3h" } });
+    expect(ok.status).toBe(200);
+    expect(ok.data.units).toMatchObject({ displacement: "L", airflow: "m3h", pressure: "psi" });
+    const [u] = await db.select().from(users).where(eq(users.id, userId));
+    expect(u.unitChoices).toEqual({ displacement: "L", airflow: "m3h" });
+    const bad = await me.json("/api/me", "PATCH", { unitSystem: "imperial", units: { pressure: "atm" } });
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.data)).toMatch(/pressure/);
+    expect((await me.json("/api/me", "PATCH", { unitSystem: "furlongs" })).status).toBe(400);
+    expect((await me.json("/api/me")).data.units.displacement).toBe("L");
   });
 
   it("writes a date the same way on the list and in the history (de-DE browser)", async () => {

@@ -41,12 +41,12 @@ export type PlannerProps = {
 export function Planner(props: PlannerProps) {
   const { combinationId, canWrite, shelf } = props;
   const [system, setSystem] = useState<UnitSystem>(props.unitSystem);
-  const resolver = useMemo(() => plannerResolver(system), [system]);
+  const [baseSpec, setBaseSpec] = useState<Combination>(props.spec);
+  const resolver = useMemo(() => plannerResolver(system, baseSpec), [system, baseSpec]);
   const form = useForm<PlannerForm>({ defaultValues: toForm(props.spec, props.unitSystem), resolver, mode: "onSubmit" });
   const values = useWatch({ control: form.control }) as PlannerForm;
 
   const [baseRevision, setBaseRevision] = useState(props.revision);
-  const [baseSpec, setBaseSpec] = useState<Combination>(props.spec);
   const [note, setNote] = useState("");
   const [saveMsg, setSaveMsg] = useState<SaveMessage | null>(null);
   const [unitsMsg, setUnitsMsg] = useState<string | null>(null);
@@ -66,7 +66,7 @@ export function Planner(props: PlannerProps) {
   const spec = live.ok ? live.spec : lastGood;
   const deferredSpec = useDeferredValue(spec);
   const errors = live.ok ? {} : live.errors;
-  const dirty = useMemo(() => !sameSpec(toSpec(values, system), baseSpec), [valuesKey, baseSpec]); // eslint-disable-line react-hooks/exhaustive-deps
+  const dirty = useMemo(() => !sameSpec(toSpec(values, system, baseSpec), baseSpec), [valuesKey, baseSpec]); // eslint-disable-line react-hooks/exhaustive-deps
 
   useUnsavedGuard(dirty && canWrite);
   const draft = usePlannerDraft({ form, canWrite, combinationId, openedRevision: props.revision, baseRevision, system, values, valuesKey, dirty });
