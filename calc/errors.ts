@@ -41,11 +41,14 @@ export class CalcConvergenceError extends CalcError {
   readonly reason: ConvergenceReason;
   /** Engine speed at which it failed (rev/min). */
   readonly rpm: number;
-  constructor(message: string, reason: ConvergenceReason, rpm: number, field = "") {
+  /** Numbers behind the message, SI (for "blower-too-slow": blowerRpm, floorPressure in Pa absolute). */
+  readonly values: Readonly<Record<string, number>>;
+  constructor(message: string, reason: ConvergenceReason, rpm: number, field = "", values: Readonly<Record<string, number>> = {}) {
     super(message, field);
     this.name = "CalcConvergenceError";
     this.reason = reason;
     this.rpm = rpm;
+    this.values = values;
   }
 }
 

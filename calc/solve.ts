@@ -387,6 +387,7 @@ function tooSlowError(rpm: number, blowerRpm: number, floorPressure: number): Ca
     "blower-too-slow",
     rpm,
     "drive.blowerPulleyDiameter",
+    { blowerRpm, floorPressure },
   );
 }
 

@@ -51,6 +51,10 @@ export const mToMm = (m: number): number => m / MILLIMETRE;
 export const in3ToM3 = (in3: number): number => in3 * CUBIC_INCH;
 /** Cubic metres to cubic inches. */
 export const m3ToIn3 = (m3: number): number => m3 / CUBIC_INCH;
+/** Cubic centimetres to cubic metres. */
+export const ccToM3 = (cc: number): number => cc * 1e-6;
+/** Cubic metres to cubic centimetres. */
+export const m3ToCc = (m3: number): number => m3 / 1e-6;
 /** Litres to cubic metres. */
 export const litresToM3 = (l: number): number => l * LITRE;
 /** Cubic metres to litres. */
@@ -87,6 +91,10 @@ export const m3sToCfm = (m3s: number): number => m3s / CFM;
 export const m3PerMinToM3s = (m3min: number): number => m3min / 60;
 /** m³/s to m³/min. */
 export const m3sToM3PerMin = (m3s: number): number => m3s * 60;
+/** m³/h to m³/s. */
+export const m3PerHourToM3s = (m3h: number): number => m3h / HOUR;
+/** m³/s to m³/h. */
+export const m3sToM3PerHour = (m3s: number): number => m3s * HOUR;
 /** Horsepower (550 ft·lbf/s) to watts. */
 export const hpToW = (hp: number): number => hp * HORSEPOWER;
 /** Watts to horsepower (550 ft·lbf/s). */
@@ -122,10 +130,10 @@ export const bsfcMetricToSI = (gPerKWh: number): number => gPerKWh / 1000 / (KIL
 /** BSFC in kg/J to g/(kW·h). */
 export const bsfcSIToMetric = (kgPerJ: number): number => kgPerJ * 1000 * KILOWATT * HOUR;
 
-/** The user's choice of display units. */
-export type UnitSystem = "imperial" | "metric";
+/** A preset of display units: one unit per kind for each side of the Atlantic. */
+export type UnitPreset = "imperial" | "metric";
 
-/** Kinds of quantity a form or chart shows, each with one imperial and one metric unit. */
+/** Kinds of quantity a form or chart shows, each with its own choice of units. */
 export type QuantityKind =
   | "length-small"
   | "altitude"
@@ -141,92 +149,127 @@ export type QuantityKind =
   | "injector-flow"
   | "bsfc";
 
-interface UnitDef {
+/** One display unit of a kind: a stable ASCII id (stored per user, put in links), its label and conversions. */
+export interface UnitDef {
+  readonly id: string;
   readonly unit: string;
   readonly toSI: (v: number) => number;
   readonly fromSI: (v: number) => number;
 }
 
 const id = (v: number): number => v;
+const def = (unitId: string, unit: string, toSI: (v: number) => number, fromSI: (v: number) => number): UnitDef => ({ id: unitId, unit, toSI, fromSI });
 
-/** Display units per kind and system, with their conversions to and from SI. */
-const UNITS: Readonly<Record<QuantityKind, Readonly<Record<UnitSystem, UnitDef>>>> = {
-  "length-small": {
-    imperial: { unit: "in", toSI: inToM, fromSI: mToIn },
-    metric: { unit: "mm", toSI: mmToM, fromSI: mToMm },
-  },
-  altitude: {
-    imperial: { unit: "ft", toSI: (v) => v * FOOT, fromSI: (v) => v / FOOT },
-    metric: { unit: "m", toSI: id, fromSI: id },
-  },
-  displacement: {
-    imperial: { unit: "in³", toSI: in3ToM3, fromSI: m3ToIn3 },
-    metric: { unit: "L", toSI: litresToM3, fromSI: m3ToLitres },
-  },
-  "blower-displacement": {
-    imperial: { unit: "in³/rev", toSI: in3ToM3, fromSI: m3ToIn3 },
-    metric: { unit: "L/rev", toSI: litresToM3, fromSI: m3ToLitres },
-  },
-  pressure: {
-    imperial: { unit: "psi", toSI: psiToPa, fromSI: paToPsi },
-    metric: { unit: "kPa", toSI: kPaToPa, fromSI: paToKPa },
-  },
-  temperature: {
-    imperial: { unit: "°F", toSI: fToK, fromSI: kToF },
-    metric: { unit: "°C", toSI: cToK, fromSI: kToC },
-  },
-  power: {
-    imperial: { unit: "hp", toSI: hpToW, fromSI: wToHp },
-    metric: { unit: "kW", toSI: kWToW, fromSI: wToKW },
-  },
-  torque: {
-    imperial: { unit: "lb·ft", toSI: lbFtToNm, fromSI: nmToLbFt },
-    metric: { unit: "N·m", toSI: id, fromSI: id },
-  },
-  airflow: {
-    imperial: { unit: "cfm", toSI: cfmToM3s, fromSI: m3sToCfm },
-    metric: { unit: "m³/min", toSI: m3PerMinToM3s, fromSI: m3sToM3PerMin },
-  },
-  speed: {
-    imperial: { unit: "rpm", toSI: id, fromSI: id },
-    metric: { unit: "rpm", toSI: id, fromSI: id },
-  },
-  "fuel-flow": {
-    imperial: { unit: "lb/h", toSI: lbPerHourToKgS, fromSI: kgSToLbPerHour },
-    metric: { unit: "kg/h", toSI: kgPerHourToKgS, fromSI: kgSToKgPerHour },
-  },
-  "injector-flow": {
-    imperial: { unit: "lb/h", toSI: lbPerHourToKgS, fromSI: kgSToLbPerHour },
-    metric: { unit: "cc/min", toSI: (v) => ccPerMinToKgS(v), fromSI: (v) => kgSToCcPerMin(v) },
-  },
-  bsfc: {
-    imperial: { unit: "lb/(hp·h)", toSI: bsfcImperialToSI, fromSI: bsfcSIToImperial },
-    metric: { unit: "g/(kW·h)", toSI: bsfcMetricToSI, fromSI: bsfcSIToMetric },
-  },
+/** The units a person may choose per kind, the imperial preset's first, the metric preset's second. */
+const UNITS: Readonly<Record<QuantityKind, readonly UnitDef[]>> = {
+  "length-small": [def("in", "in", inToM, mToIn), def("mm", "mm", mmToM, mToMm)],
+  altitude: [def("ft", "ft", (v) => v * FOOT, (v) => v / FOOT), def("m", "m", id, id)],
+  displacement: [def("in3", "in³", in3ToM3, m3ToIn3), def("L", "L", litresToM3, m3ToLitres), def("cc", "cc", ccToM3, m3ToCc)],
+  "blower-displacement": [def("in3", "in³/rev", in3ToM3, m3ToIn3), def("L", "L/rev", litresToM3, m3ToLitres), def("cc", "cc/rev", ccToM3, m3ToCc)],
+  pressure: [def("psi", "psi", psiToPa, paToPsi), def("kPa", "kPa", kPaToPa, paToKPa), def("bar", "bar", barToPa, paToBar)],
+  temperature: [def("F", "°F", fToK, kToF), def("C", "°C", cToK, kToC)],
+  power: [def("hp", "hp", hpToW, wToHp), def("kW", "kW", kWToW, wToKW)],
+  torque: [def("lbft", "lb·ft", lbFtToNm, nmToLbFt), def("Nm", "N·m", id, id)],
+  airflow: [def("cfm", "cfm", cfmToM3s, m3sToCfm), def("m3min", "m³/min", m3PerMinToM3s, m3sToM3PerMin), def("m3h", "m³/h", m3PerHourToM3s, m3sToM3PerHour)],
+  speed: [def("rpm", "rpm", id, id)],
+  "fuel-flow": [def("lbh", "lb/h", lbPerHourToKgS, kgSToLbPerHour), def("kgh", "kg/h", kgPerHourToKgS, kgSToKgPerHour)],
+  "injector-flow": [def("lbh", "lb/h", lbPerHourToKgS, kgSToLbPerHour), def("ccmin", "cc/min", (v) => ccPerMinToKgS(v), (v) => kgSToCcPerMin(v))],
+  bsfc: [def("lbhph", "lb/(hp·h)", bsfcImperialToSI, bsfcSIToImperial), def("gkwh", "g/(kW·h)", bsfcMetricToSI, bsfcSIToMetric)],
 };
 
 /** Every quantity kind the display helpers know. */
 export const QUANTITY_KINDS: readonly QuantityKind[] = Object.keys(UNITS) as QuantityKind[];
 
-/** The display unit label of a kind in a system, e.g. unitLabel('pressure', 'imperial') = 'psi'. */
+/** The person's units: the id of the unit chosen for each kind. */
+export type Units = Readonly<Record<QuantityKind, string>>;
+
+/** What display helpers accept: a preset's name, or a unit per kind. */
+export type UnitSystem = UnitPreset | Units;
+
+const presetUnits = (index: number): Units =>
+  Object.fromEntries(QUANTITY_KINDS.map((k) => [k, UNITS[k][Math.min(index, UNITS[k].length - 1)].id])) as unknown as Units;
+
+/** The two presets, each a unit per kind. */
+export const UNIT_PRESETS: Readonly<Record<UnitPreset, Units>> = { imperial: presetUnits(0), metric: presetUnits(1) };
+
+/** The units a person may choose for a kind. */
+export function unitChoices(kind: QuantityKind): readonly UnitDef[] {
+  return UNITS[kind];
+}
+
+/**
+ * A preset plus per-kind choices as a full Units record. Unknown kinds or unit ids are
+ * ignored, so a stored choice from an older release falls back to the preset.
+ */
+export function resolveUnits(preset: UnitPreset, choices?: Readonly<Partial<Record<string, unknown>>> | null): Units {
+  const out: Record<string, string> = { ...UNIT_PRESETS[preset] };
+  for (const k of QUANTITY_KINDS) {
+    const c = choices?.[k];
+    if (typeof c === "string" && UNITS[k].some((u) => u.id === c)) out[k] = c;
+  }
+  return out as unknown as Units;
+}
+
+/** The unit used for a kind: the one resolver every helper below goes through. */
+export function unitOfKind(kind: QuantityKind, system: UnitSystem): UnitDef {
+  const wanted = typeof system === "string" ? UNIT_PRESETS[system][kind] : system[kind];
+  return UNITS[kind].find((u) => u.id === wanted) ?? UNITS[kind][0];
+}
+
+/** The preset a choice equals, or null when it mixes units of both. */
+export function presetOf(system: UnitSystem): UnitPreset | null {
+  if (typeof system === "string") return system;
+  const same = (p: UnitPreset) => QUANTITY_KINDS.every((k) => unitOfKind(k, system).id === UNIT_PRESETS[p][k]);
+  return same("imperial") ? "imperial" : same("metric") ? "metric" : null;
+}
+
+/** The preset nearest a choice (the one it shares most units with; imperial on a tie), e.g. for paper size. */
+export function nearestPreset(system: UnitSystem): UnitPreset {
+  if (typeof system === "string") return system;
+  const shared = (p: UnitPreset) => QUANTITY_KINDS.filter((k) => unitOfKind(k, system).id === UNIT_PRESETS[p][k]).length;
+  return shared("metric") > shared("imperial") ? "metric" : "imperial";
+}
+
+/** Whether a kind is shown in its metric unit (in a chosen system). */
+export function isMetricUnit(kind: QuantityKind, system: UnitSystem): boolean {
+  return unitOfKind(kind, system).id !== UNIT_PRESETS.imperial[kind] || UNITS[kind].length === 1;
+}
+
+/** A choice as a short link parameter: the nearest preset, then any kind that differs ("imperial~displacement.L"). */
+export function unitsToParam(system: UnitSystem): string {
+  const base = nearestPreset(system);
+  const diffs = QUANTITY_KINDS.filter((k) => unitOfKind(k, system).id !== UNIT_PRESETS[base][k]).map((k) => `~${k}.${unitOfKind(k, system).id}`);
+  return base + diffs.join("");
+}
+
+/** A link parameter back to units (anything unreadable falls back to imperial). */
+export function unitsFromParam(param: unknown): UnitSystem {
+  if (typeof param !== "string") return "imperial";
+  const [head, ...rest] = param.split("~");
+  const preset: UnitPreset = head === "metric" ? "metric" : "imperial";
+  if (rest.length === 0) return preset;
+  return resolveUnits(preset, Object.fromEntries(rest.map((r) => r.split(".", 2))));
+}
+
+/** The display unit label of a kind, e.g. unitLabel('pressure', 'imperial') = 'psi'. */
 export function unitLabel(kind: QuantityKind, system: UnitSystem): string {
-  return UNITS[kind][system].unit;
+  return unitOfKind(kind, system).unit;
 }
 
 /** A SI value in the user's units: { value, unit } (speed stays rpm in both systems). */
 export function formatQuantity(kind: QuantityKind, siValue: number, system: UnitSystem): { value: number; unit: string } {
-  const def = UNITS[kind][system];
-  return { value: def.fromSI(siValue), unit: def.unit };
+  const u = unitOfKind(kind, system);
+  return { value: u.fromSI(siValue), unit: u.unit };
 }
 
 /** A value typed in the user's units to SI. */
 export function toSI(kind: QuantityKind, value: number, system: UnitSystem): number {
-  return UNITS[kind][system].toSI(value);
+  return unitOfKind(kind, system).toSI(value);
 }
 
 /** A SI value to the user's units (number only; see formatQuantity for the label). */
 export function fromSI(kind: QuantityKind, siValue: number, system: UnitSystem): number {
-  return UNITS[kind][system].fromSI(siValue);
+  return unitOfKind(kind, system).fromSI(siValue);
 }
 
 /**

@@ -1,6 +1,7 @@
 // The cautions beside every result: the model's own warnings, most serious first, and always
 // the general safety notice. Plain markup, so it prints black on white with the page.
-import { SAFETY_NOTICE, type Caution, type CautionSeverity } from "@/calc";
+import { SAFETY_NOTICE, type Caution, type CautionSeverity, type UnitSystem } from "@/calc";
+import { cautionText } from "@/lib/units/caution-text";
 
 export const SEVERITY_WORD: Record<CautionSeverity, string> = { danger: "Danger", warning: "Warning", info: "Note" };
 const ORDER: Record<CautionSeverity, number> = { danger: 0, warning: 1, info: 2 };
@@ -10,9 +11,9 @@ export const SEVERITY_TONE: Record<CautionSeverity, string> = {
   info: "border-line bg-panel text-fg",
 };
 
-export type CautionsPanelProps = { cautions: readonly Caution[]; compact?: boolean };
+export type CautionsPanelProps = { cautions: readonly Caution[]; units: UnitSystem; compact?: boolean };
 
-export function CautionsPanel({ cautions, compact = false }: CautionsPanelProps) {
+export function CautionsPanel({ cautions, units, compact = false }: CautionsPanelProps) {
   // The "general" caution repeats the safety notice, which is listed below in full.
   const specific = cautions.filter((c) => c.code !== "general").sort((a, b) => ORDER[a.severity] - ORDER[b.severity]);
   return (
@@ -27,7 +28,7 @@ export function CautionsPanel({ cautions, compact = false }: CautionsPanelProps)
           {specific.map((c, i) => (
             <li key={`${c.code}-${i}`} data-severity={c.severity} className={`rounded-md border px-2.5 py-1.5 text-sm print:border-black print:bg-white print:text-black ${SEVERITY_TONE[c.severity]}`}>
               <span className="font-semibold">{SEVERITY_WORD[c.severity]}: </span>
-              {c.message}
+              {cautionText(c, units)}
             </li>
           ))}
         </ul>

@@ -50,7 +50,10 @@ export const users = pgTable("users", {
   name: text("name").notNull().default(""),
   passwordHash: text("password_hash"),
   role: roleEnum("role").notNull().default("member"),
+  /** The units preset; `unitChoices` overrides it per quantity kind (see calc's resolveUnits). */
   unitSystem: unitSystemEnum("unit_system").notNull().default("imperial"),
+  /** Unit id per quantity kind where the person departs from the preset, e.g. { "displacement": "L" }. */
+  unitChoices: jsonb("unit_choices").$type<Record<string, string>>().notNull().default({}),
   disabled: boolean("disabled").notNull().default(false),
   emailVerifiedAt: timestamp("email_verified_at", { withTimezone: true }),
   /** Carried in every session cookie; bumping it ends every session of the account at once. */

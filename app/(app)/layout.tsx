@@ -3,6 +3,8 @@ import { requirePageUser } from "@/app/_lib/session";
 import { HeaderBar } from "@/components/ui/header-bar";
 import { NavLinks, type NavItem } from "@/components/nav-links";
 import { CurrencyProvider } from "@/components/price";
+import { LocaleProvider } from "@/components/locale";
+import { requestLocale } from "@/app/_lib/locale";
 import { SignOutButton } from "@/components/sign-out-button";
 import { ThemeSwitch } from "@/components/theme-switch";
 import { getDb } from "@/db/client";
@@ -25,7 +27,7 @@ const NAV: (NavItem & { roles: Role[] })[] = [
 const roleNames: Record<Role, string> = { member: "Member", tuner: "Tuner", sales: "Sales", instructor: "Instructor", admin: "Admin" };
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
-  const [user, terms] = await Promise.all([requirePageUser(), getShopTerms(getDb())]);
+  const [user, terms, locale] = await Promise.all([requirePageUser(), getShopTerms(getDb()), requestLocale()]);
   const items = NAV.filter((n) => n.roles.includes(user.role)).map(({ href, label }) => ({ href, label }));
   return (
     <div className="flex min-h-screen flex-col">
@@ -40,7 +42,9 @@ export default async function AppLayout({ children }: { children: React.ReactNod
         </div>
       </HeaderBar>
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
-        <CurrencyProvider currency={terms.currency}>{children}</CurrencyProvider>
+        <CurrencyProvider currency={terms.currency}>
+          <LocaleProvider locale={locale}>{children}</LocaleProvider>
+        </CurrencyProvider>
       </main>
     </div>
   );

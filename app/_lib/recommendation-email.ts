@@ -8,6 +8,7 @@ import { formatPrice } from "@/lib/orders/money";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
 import { figureOrRange } from "@/lib/planner/range-words";
 import type { SheetRecord } from "@/components/recommendation/sheet-view";
+import { dateText } from "@/lib/format/dates";
 
 const ENTITIES: Record<string, string> = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
 
@@ -18,13 +19,13 @@ export function escapeHtml(s: string): string {
 
 export type SheetEmail = { subject: string; text: string; html: string };
 
-export function buildSheetEmail(opts: { sheet: SheetRecord; shop: ShopDetails; currency: string; unitSystem: UnitSystem; link: string; expiresAt: Date }): SheetEmail {
-  const { sheet, shop, currency, unitSystem, link, expiresAt } = opts;
+export function buildSheetEmail(opts: { sheet: SheetRecord; shop: ShopDetails; currency: string; unitSystem: UnitSystem; link: string; expiresAt: Date; locale?: string }): SheetEmail {
+  const { sheet, shop, currency, unitSystem, link, expiresAt, locale } = opts;
   const f = computeSheet(sheet.spec, sheet.targetRpm).figures;
   const formatMoney = (a: string) => formatPrice(a, currency);
   const title = sheet.title || defaultSheetTitle(sheet.customerName);
   const pulley = quantityText("length-small", f.blowerPulleyDiameter, unitSystem);
-  const until = expiresAt.toLocaleDateString("en-GB", { year: "numeric", month: "long", day: "numeric" });
+  const until = dateText(expiresAt, locale);
   const summary = [
     `Recommended blower pulley: ${pulley}`,
     f.headline

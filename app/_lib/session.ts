@@ -9,6 +9,8 @@ import { getUserById, sessionIsAlive, toActor } from "@/db/repo/users";
 import type { Role, User } from "@/db/schema";
 import { authSecret } from "./env";
 import { tokenClaims, type SessionClaims } from "./session-token";
+import { personUnits } from "@/lib/units/person";
+import type { UnitSystem } from "@/calc";
 
 // next-auth's own names for the session cookie, over https and over plain http.
 const SESSION_COOKIES = ["__Secure-next-auth.session-token", "next-auth.session-token"];
@@ -40,6 +42,12 @@ export const getCurrentUser = cache(async (): Promise<User | null> => {
   const u = await getUserById(getDb(), claims.sub);
   return sessionIsAlive(u, claims.sv) ? u : null;
 });
+
+/** The signed-in person's units (imperial for nobody signed in). */
+export async function currentUnits(): Promise<UnitSystem> {
+  const u = await getCurrentUser();
+  return u ? personUnits(u) : "imperial";
+}
 
 /** The one check every server action and route handler starts with: signed in, and one of `roles` if given. */
 export async function requireActor(roles?: readonly Role[]): Promise<Actor> {

@@ -1,5 +1,5 @@
 import "server-only";
-import type { UnitSystem } from "@/calc";
+import { unitsToParam, type UnitSystem } from "@/calc";
 import { appUrl } from "./mail";
 import { SHARE_LINK_TTL_SECONDS, signShareToken } from "./share-link";
 
@@ -7,5 +7,5 @@ import { SHARE_LINK_TTL_SECONDS, signShareToken } from "./share-link";
 export function sentVersionLink(version: { recommendationId: string; version: number; sentAt: Date }, unitSystem: UnitSystem) {
   const expiresAt = new Date(version.sentAt.getTime() + SHARE_LINK_TTL_SECONDS * 1000);
   const token = signShareToken(version.recommendationId, version.version, expiresAt);
-  return { url: appUrl(`/share/${token}?units=${unitSystem}`), token, expiresAt };
+  return { url: appUrl(`/share/${token}?units=${encodeURIComponent(unitsToParam(unitSystem))}`), token, expiresAt };
 }

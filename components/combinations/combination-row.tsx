@@ -7,6 +7,8 @@ import { formatQuantity, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import type { Role } from "@/db/schema";
 import { must, type CombinationListActions, type ListedCombination } from "./use-combinations-list";
+import { digitsOf } from "@/lib/units/format";
+import { useDates } from "@/components/locale";
 
 export function CombinationRow(props: {
   c: ListedCombination;
@@ -20,6 +22,7 @@ export function CombinationRow(props: {
   onDelete: () => void;
 }) {
   const { c, role, staff, unitSystem } = props;
+  const dates = useDates();
   const [renaming, setRenaming] = useState(false);
   const [confirmDelete, setConfirmDelete] = useState(false);
   const [name, setName] = useState(c.name);
@@ -91,11 +94,11 @@ export function CombinationRow(props: {
       ) : null}
       {role !== "member" ? <td className="px-3 py-2">{c.ownerName || c.ownerEmail}</td> : null}
       <td className="px-3 py-2 text-right">
-        {eng.value.toFixed(unitSystem === "metric" ? 1 : 0)} {eng.unit}
+        {eng.value.toFixed(digitsOf("displacement", unitSystem))} {eng.unit}
       </td>
       <td className="px-3 py-2">{c.blowerKind === "roots" ? "Roots" : "Twin-screw"}</td>
       <td className="px-3 py-2 text-right">
-        {pulley.value.toFixed(unitSystem === "metric" ? 0 : 2)} {pulley.unit}
+        {pulley.value.toFixed(digitsOf("length-small", unitSystem))} {pulley.unit}
       </td>
       <td className="px-3 py-2 text-right">
         <Link href={`/combinations/${c.id}/revisions`} className="hover:underline" title="History">
@@ -103,7 +106,7 @@ export function CombinationRow(props: {
         </Link>
       </td>
       <td className="px-3 py-2 whitespace-nowrap">
-        <time dateTime={c.updatedAt}>{new Date(c.updatedAt).toLocaleString()}</time>
+        <time dateTime={c.updatedAt}>{dates.dateTime(c.updatedAt)}</time>
       </td>
       <td className="px-3 py-2">
         <div className="flex flex-wrap justify-end gap-1">

@@ -3,7 +3,7 @@ import { useActionState, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import type { ActionState } from "@/lib/action-state";
-import { unitLabel, type UnitSystem } from "@/calc";
+import { unitLabel, unitsToParam, type UnitSystem } from "@/calc";
 import { MAIN_FIGURES } from "@/lib/combinations/main-figures";
 import { BLANK_START, type TemplateKey } from "@/lib/combinations/templates";
 
@@ -58,7 +58,7 @@ export function NewCombinationForm({ templates, units, staff, createAction }: Ne
         ) : null}
       </fieldset>
 
-      <input type="hidden" name="units" value={units} />
+      <input type="hidden" name="units" value={unitsToParam(units)} />
       <fieldset className="flex flex-col gap-3 rounded-md border border-line p-3">
         <legend className="px-1 text-sm font-medium">Main figures {blank ? "(all needed for a blank start)" : "(optional: blank keeps the starting point's)"}</legend>
         <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">

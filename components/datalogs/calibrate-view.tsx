@@ -236,7 +236,7 @@ export function CalibrateView(props: CalibrateViewProps) {
           </section>
         </>
       ) : null}
-      <p className="text-xs text-muted">Boost is gauge, above the barometer of the log ({fig("pressure", ambient.pressure, unitSystem)} {pUnit} absolute). Figures in {unitSystem} units; change them in Settings.</p>
+      <p className="text-xs text-muted">Boost is gauge, above the barometer of the log ({fig("pressure", ambient.pressure, unitSystem)} {pUnit} absolute). Figures in your units; change them in Settings.</p>
     </div>
   );
 }

@@ -3,9 +3,12 @@ import type { UnitSystem } from "@/calc";
 import type { LogAmbient } from "@/lib/datalogs/parse";
 import { withUnit } from "@/lib/datalogs/format";
 import { BackLink } from "@/components/ui/back-link";
+import { countText, dateText } from "@/lib/format/dates";
 
 export type LogHeaderProps = {
   title: string;
+  /** Locale of the dates shown (lib/format/dates). */
+  locale?: string;
   log: { id: string; name: string; fileName: string; revision: number; pointCount: number; createdAt: Date };
   combination: { id: string; name: string; revision: number };
   ambient: LogAmbient;
@@ -13,7 +16,7 @@ export type LogHeaderProps = {
 };
 
 /** What the log is: its file, the combination and revision it was logged with, and the conditions. */
-export function LogHeader({ title, log, combination, ambient, unitSystem }: LogHeaderProps) {
+export function LogHeader({ title, log, combination, ambient, unitSystem, locale }: LogHeaderProps) {
   return (
     <header className="flex flex-col gap-2">
       <BackLink href="/datalogs" label="Datalogs" />
@@ -21,7 +24,7 @@ export function LogHeader({ title, log, combination, ambient, unitSystem }: LogH
       <dl className="grid grid-cols-[max-content_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="text-muted">File</dt>
         <dd>
-          {log.fileName} · {log.pointCount.toLocaleString("en-US")} samples · uploaded {log.createdAt.toISOString().slice(0, 10)}
+          {log.fileName} · {countText(log.pointCount, locale)} samples · uploaded {dateText(log.createdAt, locale)}
         </dd>
         <dt className="text-muted">Combination</dt>
         <dd>

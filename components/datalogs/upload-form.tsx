@@ -17,7 +17,7 @@ import {
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { withUnit } from "@/lib/datalogs/format";
+import { withUnit, logDigits } from "@/lib/datalogs/format";
 import { guessMapping, type GuessNotes } from "@/lib/datalogs/guess-mapping";
 import { mappingFieldErrors } from "@/lib/datalogs/mapping-errors";
 import { ColumnMapping } from "./column-mapping";
@@ -34,7 +34,7 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
   const [comboId, setComboId] = useState(initialCombinationId ?? combinations[0]?.id ?? "");
   const combo = combinations.find((c) => c.id === comboId);
   const [name, setName] = useState("");
-  const [baro, setBaro] = useState(() => (combo ? fromSI("pressure", combo.ambient.pressure, unitSystem).toFixed(unitSystem === "imperial" ? 2 : 1) : ""));
+  const [baro, setBaro] = useState(() => (combo ? fromSI("pressure", combo.ambient.pressure, unitSystem).toFixed(logDigits("pressure", unitSystem)) : ""));
   const [airT, setAirT] = useState(() => (combo ? fromSI("temperature", combo.ambient.temperature, unitSystem).toFixed(0) : ""));
   const [file, setFile] = useState<{ name: string; text: string } | null>(null);
   const [fileError, setFileError] = useState<string | null>(null);
@@ -52,7 +52,7 @@ export function UploadForm({ combinations, initialCombinationId, unitSystem }: U
     setComboId(id);
     const c = combinations.find((x) => x.id === id);
     if (c) {
-      setBaro(fromSI("pressure", c.ambient.pressure, unitSystem).toFixed(unitSystem === "imperial" ? 2 : 1));
+      setBaro(fromSI("pressure", c.ambient.pressure, unitSystem).toFixed(logDigits("pressure", unitSystem)));
       setAirT(fromSI("temperature", c.ambient.temperature, unitSystem).toFixed(0));
     }
   }

@@ -1,8 +1,9 @@
 // The step's cautions in the classroom: each names the item (curve) it belongs to, none repeats,
-// and the general safety notice comes once at the end. Words come from `cautionWords` only.
+// and the general safety notice comes once at the end. Words come from `cautionText` (the viewer's units) only.
 import type { UnitSystem } from "@/calc";
 import { SEVERITY_TONE, SEVERITY_WORD, SafetyNotice } from "@/components/cautions-panel";
-import { cautionWords, type ItemCaution } from "@/lib/lessons/step-cautions";
+import type { ItemCaution } from "@/lib/lessons/step-cautions";
+import { cautionText } from "@/lib/units/caution-text";
 
 type StepCautionsProps = { cautions: ItemCaution[]; unitSystem: UnitSystem };
 
@@ -21,7 +22,7 @@ export function StepCautions({ cautions, unitSystem }: StepCautionsProps) {
               <span className="font-semibold">
                 {SEVERITY_WORD[caution.severity]} · {item}:{" "}
               </span>
-              {cautionWords(caution, unitSystem)}
+              {cautionText(caution, unitSystem)}
             </li>
           ))}
         </ul>

@@ -10,12 +10,12 @@ import { VE_SCALE_MAX, VE_SCALE_MIN, type WhatIf } from "@/lib/lessons/curves";
 type WhatIfControlProps = { items: StepItemSnapshot[]; unitSystem: UnitSystem; value: WhatIf; onChange: (w: WhatIf) => void };
 
 /** Slider range of the blower pulley, in the user's units (a span most street pulleys fall in). */
-const PULLEY_RANGE = { imperial: { min: 2.4, max: 5, step: 0.05 }, metric: { min: 60, max: 128, step: 1 } } as const;
+const PULLEY_RANGE = { in: { min: 2.4, max: 5, step: 0.05 }, mm: { min: 60, max: 128, step: 1 } } as const;
 
 export function WhatIfControl({ items, unitSystem, value, onChange }: WhatIfControlProps) {
   const id = useId();
   const unit = unitLabel("length-small", unitSystem);
-  const range = PULLEY_RANGE[unitSystem];
+  const range = unit === "mm" ? PULLEY_RANGE.mm : PULLEY_RANGE.in;
   const asBuilt = items[0]?.spec.drive.blowerPulleyDiameter ?? 0.08;
   const pulleyShown = value.kind === "pulley" ? fromSI("length-small", value.diameter, unitSystem) : fromSI("length-small", asBuilt, unitSystem);
   const clamp = (v: number) => Math.min(range.max, Math.max(range.min, v));

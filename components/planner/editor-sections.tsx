@@ -1,7 +1,7 @@
 "use client";
 // The editor's blower (with fill from the shelf or a kind's demo defaults) and ambient sections.
 import { useState } from "react";
-import { BLOWER_DEMO_DEFAULTS, standardAtmosphere } from "@/calc";
+import { BLOWER_DEMO_DEFAULTS, standardAtmosphere, unitLabel } from "@/calc";
 import { Button } from "@/components/ui/button";
 import { editorLabelOf } from "@/lib/combinations/field-table";
 import { fieldFromSI, fieldToSI } from "@/lib/combinations/form-model";
@@ -46,7 +46,7 @@ export function BlowerSection({ form, system, errors, blowers, values }: EditorP
             <option value="">{blowers.length ? "Entered by hand" : "The parts shelf has no blowers yet"}</option>
             {blowers.map((b) => (
               <option key={b.id} value={b.id}>
-                {b.name} ({b.kind === "roots" ? "Roots" : "twin-screw"}, {fieldFromSI("blower-displacement", b.displacementPerRev, system)} {system === "imperial" ? "in³/rev" : "L/rev"}){b.stock > 0 ? "" : " · out of stock"}
+                {b.name} ({b.kind === "roots" ? "Roots" : "twin-screw"}, {fieldFromSI("blower-displacement", b.displacementPerRev, system)} {unitLabel("blower-displacement", system)}){b.stock > 0 ? "" : " · out of stock"}
               </option>
             ))}
           </select>

@@ -18,6 +18,7 @@ import { lineTotal, sumMoney } from "@/lib/shelf/rules";
 import { PulleyHelp } from "@/components/pulleys/pulley-help";
 import { PartsTable } from "./parts-table";
 import type { ShelfPulley } from "@/lib/planner/compute";
+import { digitsOf } from "@/lib/units/format";
 
 export type ShelfPart = { partNumber: string; description: string; price: string; stock: number; diameter?: number; position?: string };
 type FormIn = z.input<typeof recommendationInputSchema>;
@@ -49,7 +50,7 @@ export function RecommendationForm({ mode, id, combination, pulleys, parts, unit
   const chosen = Number(useWatch({ control: form.control, name: "blowerPulleyDiameter" }));
   const watched = useWatch({ control: form.control, name: "parts" }) ?? [];
   const unit = unitLabel("length-small", unitSystem);
-  const size = (m: number) => `${fromSI("length-small", m, unitSystem).toFixed(unitSystem === "metric" ? 1 : 2)} ${unit}`;
+  const size = (m: number) => `${fromSI("length-small", m, unitSystem).toFixed(digitsOf("length-small", unitSystem))} ${unit}`;
 
   const amounts = watched.map((l) => {
     const unit = String(l?.unitPrice ?? "").trim();

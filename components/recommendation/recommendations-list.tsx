@@ -10,6 +10,8 @@ import { Pager } from "@/components/ui/pager";
 import { SelectField } from "@/components/ui/select-field";
 import { Notice } from "@/components/ui/notice";
 import { usePrice } from "@/components/price";
+import { digitsOf } from "@/lib/units/format";
+import { useDates } from "@/components/locale";
 
 type Row = {
   id: string;
@@ -27,6 +29,7 @@ type Row = {
 };
 
 export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) {
+  const dates = useDates();
   const price = usePrice();
   const [search, setSearch] = useState("");
   const [status, setStatus] = useState("");
@@ -95,10 +98,10 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
                 <td className="px-2 py-1.5">
                   {r.combinationName} <span className="text-xs text-muted">rev. {r.revision}</span>
                 </td>
-                <td className="px-2 py-1.5 text-right">{fromSI("length-small", r.blowerPulleyDiameter, unitSystem).toFixed(unitSystem === "metric" ? 1 : 2)}</td>
+                <td className="px-2 py-1.5 text-right">{fromSI("length-small", r.blowerPulleyDiameter, unitSystem).toFixed(digitsOf("length-small", unitSystem))}</td>
                 <td className="px-2 py-1.5 capitalize">{r.status}</td>
                 <td className="px-2 py-1.5 text-right">{price(r.total)}</td>
-                <td className="px-2 py-1.5">{new Date(r.updatedAt).toLocaleDateString("en-GB", { dateStyle: "medium" })}</td>
+                <td className="px-2 py-1.5">{dates.date(r.updatedAt)}</td>
                 <td className="px-2 py-1.5">{r.authorName}</td>
               </tr>
             ))}

@@ -6,12 +6,14 @@ import { apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { useAction } from "@/components/ui/use-action";
+import { useDates } from "@/components/locale";
 
 type Props = { id: string; status: "draft" | "sent" | "accepted" | "declined"; customerEmail: string | null; sentAt: string | null; lastError: string | null };
 
 const STATUS_TEXT = { draft: "Draft", sent: "Sent", accepted: "Accepted", declined: "Declined" } as const;
 
 export function SheetActions({ id, status, customerEmail, sentAt, lastError }: Props) {
+  const dates = useDates();
   const { busy, message, run } = useAction();
   const setStatus = (next: "draft" | "accepted" | "declined") =>
     run(next, async () => {
@@ -24,7 +26,7 @@ export function SheetActions({ id, status, customerEmail, sentAt, lastError }: P
       <div className="flex flex-wrap items-center gap-2">
         <span className="text-sm">
           Status: <strong data-testid="sheet-status">{STATUS_TEXT[status]}</strong>
-          {sentAt ? <span className="text-muted"> · sent {new Date(sentAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}</span> : null}
+          {sentAt ? <span className="text-muted"> · sent {dates.dateTime(sentAt)}</span> : null}
         </span>
         <span className="flex-1" />
         <Link href={`/recommendations/${id}/print`} className="rounded-md border border-line bg-panel px-3 py-1.5 text-sm font-medium hover:bg-bg">

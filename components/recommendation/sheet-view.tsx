@@ -11,6 +11,7 @@ import { formatPrice } from "@/lib/orders/price-text";
 import { computeSheet } from "@/lib/recommendations/sheet-data";
 import { figureOrRange, outsideRangeText, type RangeOf } from "@/lib/planner/range-words";
 import { HeadCells, TotalFoot } from "@/components/ui/data-table";
+import { dateText } from "@/lib/format/dates";
 
 /** What the sheet shows: a sent snapshot has it all, and so does a draft read from the database. */
 export type SheetRecord = Pick<
@@ -19,12 +20,11 @@ export type SheetRecord = Pick<
 >;
 
 /** `currency`: ISO 4217 code of the prices (the shop's, or the one frozen with a sent version). */
-export type SheetViewProps = { sheet: SheetRecord; shop: ShopDetails; currency: string; unitSystem: UnitSystem; print?: boolean };
+export type SheetViewProps = { sheet: SheetRecord; shop: ShopDetails; currency: string; unitSystem: UnitSystem; locale?: string; print?: boolean };
 
 const rpm = (n: number) => `${Math.round(n).toLocaleString("en-US")} rpm`;
-const date = (d: Date) => d.toLocaleDateString("en-GB", { year: "numeric", month: "short", day: "numeric" });
 
-export function SheetView({ sheet, shop, currency, unitSystem, print = false }: SheetViewProps) {
+export function SheetView({ sheet, shop, currency, unitSystem, locale, print = false }: SheetViewProps) {
   const { points, cautions, figures: f } = computeSheet(sheet.spec, sheet.targetRpm);
   const price = (a: string) => formatPrice(a, currency);
   const q = (kind: Parameters<typeof quantityText>[0], si: number) => quantityText(kind, si, unitSystem);
@@ -56,7 +56,7 @@ export function SheetView({ sheet, shop, currency, unitSystem, print = false }: 
             {sheet.title || defaultSheetTitle(sheet.customerName)}
           </h1>
           <p className={`${small} text-muted`}>
-            For <span data-testid="sheet-customer">{sheet.customerName}</span> · {date(sheet.sentAt ?? sheet.createdAt)}
+            For <span data-testid="sheet-customer">{sheet.customerName}</span> · {dateText(sheet.sentAt ?? sheet.createdAt, locale)}
           </p>
         </div>
         <address className={`not-italic ${small} text-right`} aria-label="Shop">
@@ -174,7 +174,7 @@ export function SheetView({ sheet, shop, currency, unitSystem, print = false }: 
       ) : null}
 
       <div className={print ? "text-[10px] leading-snug" : ""}>
-        <CautionsPanel cautions={cautions} compact={print} />
+        <CautionsPanel cautions={cautions} units={unitSystem} compact={print} />
       </div>
       <p className={`text-muted ${print ? "text-[9px]" : "text-xs"}`}>
         Figures are predictions from a simplified model for this combination at revision {sheet.revision}; they are estimates, not measurements. Prices as quoted on the date above.

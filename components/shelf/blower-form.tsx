@@ -4,11 +4,12 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMemo } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { fromSI, type UnitSystem } from "@/calc";
+import { fromSI, type UnitSystem, unitLabel } from "@/calc";
 import { Field } from "@/components/ui/field";
 import { blowerFormSchema } from "@/lib/shelf/rules";
 import type { BlowerRow } from "@/db/schema";
 import { FormSelect, ShelfFormFrame, useShelfSave } from "./shelf-form";
+import { digitsOf } from "@/lib/units/format";
 
 export type BlowerJson = Omit<BlowerRow, "createdAt" | "updatedAt">;
 type Props = { system: UnitSystem; row?: BlowerJson; onDone: (message: string) => void; onCancel: () => void };
@@ -17,14 +18,14 @@ const pct = (f: number) => String(Number((f * 100).toFixed(1)));
 
 export function BlowerForm({ system, row, onDone, onCancel }: Props) {
   const schema = useMemo(() => blowerFormSchema(system), [system]);
-  const unit = system === "metric" ? "L/rev" : "in³/rev";
+  const unit = unitLabel("blower-displacement", system);
   const form = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
     resolver: zodResolver(schema),
     defaultValues: {
       partNumber: row?.partNumber ?? "",
       name: row?.name ?? "",
       kind: row?.kind ?? "roots",
-      displacementPerRev: row ? String(Number(fromSI("blower-displacement", row.displacementPerRev, system).toFixed(system === "metric" ? 3 : 1))) : "",
+      displacementPerRev: row ? String(Number(fromSI("blower-displacement", row.displacementPerRev, system).toFixed(digitsOf("blower-displacement", system) + 1))) : "",
       builtInVolumeRatio: row ? String(row.builtInVolumeRatio) : "1",
       maxRpm: row ? String(row.maxRpm) : "",
       volumetricEfficiencyRef: row ? pct(row.volumetricEfficiencyRef) : "",

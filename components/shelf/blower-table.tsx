@@ -1,12 +1,13 @@
 "use client";
 // The shelf's blowers: their columns and the kind filter; the rest is the shared shelf list.
 import { useState } from "react";
-import { fromSI, type UnitSystem } from "@/calc";
+import { fromSI, type UnitSystem, unitLabel } from "@/calc";
 import { usePrice } from "@/components/price";
 import { BlowerForm, type BlowerJson } from "./blower-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
 import { stockCell, stockClass } from "@/lib/shelf/stock";
 import { SelectField } from "@/components/ui/select-field";
+import { digitsOf } from "@/lib/units/format";
 
 type Sort = "partNumber" | "name" | "displacementPerRev" | "maxRpm" | "price" | "stock";
 
@@ -29,10 +30,10 @@ function columns(system: UnitSystem, price: (amount: string) => string): ShelfCo
     { label: "Kind", cell: (b) => (b.kind === "roots" ? "Roots" : "Twin-screw") },
     {
       label: "Displacement",
-      unit: system === "metric" ? "L/rev" : "in³/rev",
+      unit: unitLabel("blower-displacement", system),
       sortBy: "displacementPerRev",
       align: "right",
-      cell: (b) => fromSI("blower-displacement", b.displacementPerRev, system).toFixed(system === "metric" ? 2 : 0),
+      cell: (b) => fromSI("blower-displacement", b.displacementPerRev, system).toFixed(digitsOf("blower-displacement", system)),
     },
     { label: "Volume ratio", align: "right", cell: (b) => b.builtInVolumeRatio.toFixed(2) },
     { label: "Speed limit", unit: "rpm", sortBy: "maxRpm", align: "right", cell: (b) => rpm(b.maxRpm) },

@@ -4,20 +4,21 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMemo } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { fromSI, type UnitSystem } from "@/calc";
+import { fromSI, type UnitSystem, unitLabel } from "@/calc";
 import { Field } from "@/components/ui/field";
 import { pulleyFormSchema } from "@/lib/shelf/rules";
 import type { PulleyRow } from "@/db/schema";
 import { FormSelect, ShelfFormFrame, useShelfSave } from "./shelf-form";
+import { digitsOf } from "@/lib/units/format";
 
 export type PulleyJson = Omit<PulleyRow, "createdAt" | "updatedAt">;
 type Props = { system: UnitSystem; row?: PulleyJson; onDone: (message: string) => void; onCancel: () => void };
 
-const shown = (m: number, system: UnitSystem) => String(Number(fromSI("length-small", m, system).toFixed(system === "metric" ? 1 : 3)));
+const shown = (m: number, system: UnitSystem) => String(Number(fromSI("length-small", m, system).toFixed(digitsOf("length-small", system) + 1)));
 
 export function PulleyForm({ system, row, onDone, onCancel }: Props) {
   const schema = useMemo(() => pulleyFormSchema(system), [system]);
-  const unit = system === "metric" ? "mm" : "in";
+  const unit = unitLabel("length-small", system);
   const form = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
     resolver: zodResolver(schema),
     defaultValues: {

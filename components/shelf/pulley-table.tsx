@@ -1,18 +1,19 @@
 "use client";
 // The shelf's pulleys: their columns and the position and rib filters; the rest is the shared shelf list.
 import { useState } from "react";
-import { fromSI, type UnitSystem } from "@/calc";
+import { fromSI, type UnitSystem, unitLabel } from "@/calc";
 import { usePrice } from "@/components/price";
 import { PulleyForm, type PulleyJson } from "./pulley-form";
 import { ShelfList, type ShelfColumn } from "./shelf-list";
 import { stockCell, stockClass } from "@/lib/shelf/stock";
 import { SelectField } from "@/components/ui/select-field";
+import { digitsOf } from "@/lib/units/format";
 
 type Sort = "partNumber" | "diameter" | "ribCount" | "price" | "stock";
 
 function columns(system: UnitSystem, price: (amount: string) => string): ShelfColumn<PulleyJson, Sort>[] {
-  const unit = system === "metric" ? "mm" : "in";
-  const len = (m: number) => fromSI("length-small", m, system).toFixed(system === "metric" ? 1 : 2);
+  const unit = unitLabel("length-small", system);
+  const len = (m: number) => fromSI("length-small", m, system).toFixed(digitsOf("length-small", system));
   return [
     { label: "Part number", sortBy: "partNumber", cell: (p) => p.partNumber, cellClassName: () => "font-mono text-xs" },
     { label: "Position", cell: (p) => (p.position === "crank" ? "Crank" : "Blower") },

@@ -180,8 +180,14 @@ export async function setPassword(db: DbOrTx, userId: string, password: string) 
   await db.update(users).set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId));
 }
 
+/** A preset alone (the planner's Imperial/Metric buttons): every kind follows it. */
 export async function setUnitSystem(db: DbOrTx, actor: Actor, unitSystem: "imperial" | "metric") {
-  await db.update(users).set({ unitSystem }).where(eq(users.id, actor.id));
+  await db.update(users).set({ unitSystem, unitChoices: {} }).where(eq(users.id, actor.id));
+}
+
+/** A preset and the kinds that depart from it (settings, PATCH /api/me). Only ever the actor's own row. */
+export async function setUnitPreferences(db: DbOrTx, actor: Actor, prefs: { unitSystem: "imperial" | "metric"; unitChoices: Record<string, string> }) {
+  await db.update(users).set({ unitSystem: prefs.unitSystem, unitChoices: prefs.unitChoices }).where(eq(users.id, actor.id));
 }
 
 // Admin: the accounts table.

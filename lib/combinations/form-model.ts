@@ -14,8 +14,10 @@ import {
   type Combination,
   type CombinationInput,
   type QuantityKind,
+  unitsToParam,
   type UnitSystem,
 } from "@/calc";
+import { inputDigitsOf, roundTo } from "@/lib/units/format";
 import { FORM_ONLY_FIELDS, SPEC_FIELDS, valueAt } from "./field-table";
 
 /** One VE row as edited: engine speed (rpm) and VE in percent. */
@@ -72,9 +74,6 @@ export function unitOf(path: string, system: UnitSystem): string {
   return unitLabel(kind, system);
 }
 
-/** Six significant digits: enough for any shop figure, without binary noise such as 3.4000000000000004. */
-export const tidy = (v: number): number => (Number.isFinite(v) ? Number(v.toPrecision(6)) : v);
-
 /** A form number to SI. */
 export function fieldToSI(kind: FieldKind, v: number, system: UnitSystem): number {
   if (kind === "plain") return v;
@@ -82,11 +81,14 @@ export function fieldToSI(kind: FieldKind, v: number, system: UnitSystem): numbe
   return toSI(kind, v, system);
 }
 
-/** A SI number to the form, tidied. */
+/** Decimal places of a percentage box (a 2.5 % belt slip, an 84.25 % VE cell). */
+const PERCENT_DIGITS = 2;
+
+/** A SI number to the form, at the input precision of its unit (see inputDigitsOf). */
 export function fieldFromSI(kind: FieldKind, v: number, system: UnitSystem): number {
   if (kind === "plain") return v;
-  if (kind === "percent") return tidy(v * 100);
-  return tidy(fromSI(kind, v, system));
+  if (kind === "percent") return roundTo(v * 100, PERCENT_DIGITS);
+  return roundTo(fromSI(kind, v, system), inputDigitsOf(kind, system));
 }
 
 const num = (v: unknown): number => (typeof v === "number" ? v : v === "" || v == null ? Number.NaN : Number(v));
@@ -166,7 +168,7 @@ export function toForm(spec: Combination, system: UnitSystem, altitude = 0): Pla
       displacement: s("engine.displacement", spec.engine.displacement),
       cylinders: spec.engine.cylinders,
       redlineRpm: spec.engine.redlineRpm,
-      veCurve: spec.engine.veCurve.map((p) => ({ rpm: p.rpm, ve: tidy(p.ve * 100) })),
+      veCurve: spec.engine.veCurve.map((p) => ({ rpm: p.rpm, ve: fieldFromSI("percent", p.ve, system) })),
     },
     blower: {
       kind: spec.blower.kind,
@@ -208,12 +210,12 @@ export function toForm(spec: Combination, system: UnitSystem, altitude = 0): Pla
 }
 
 /**
- * Every quantity of the form re-expressed from one unit system in the other (switches and counts
+ * Every quantity of the form re-expressed from one choice of units in another (switches and counts
  * kept). A field still showing its stored value (`base`) is re-expressed from that stored SI value,
  * not from its rounded figure, so a round trip leaves the stored spec byte-identical.
  */
 export function convertForm(f: PlannerForm, from: UnitSystem, to: UnitSystem, base?: Combination): PlannerForm {
-  if (from === to) return f;
+  if (unitsToParam(from) === unitsToParam(to)) return f;
   const c = (path: string, v: number) => {
     const kind = FIELD_KINDS[path];
     const b = storedAt(base, path);
@@ -259,7 +261,8 @@ export function localizeMessage(path: string, message: string, system: UnitSyste
   const a = Number(lo);
   const b = Number(hi);
   if (!Number.isFinite(a) || !Number.isFinite(b)) return message;
-  const inUnits = (v: number) => (kind === "plain" || kind === "speed" ? v : fieldFromSI(kind, v, system));
+  // Unrounded: the limit is rounded inward below, not to the box's precision first.
+  const inUnits = (v: number) => (kind === "plain" || kind === "speed" ? v : kind === "percent" ? v * 100 : fromSI(kind, v, system));
   const u = unitOf(path, system);
   return `${head} between ${inward(inUnits(a), "up")} and ${inward(inUnits(b), "down")}${u ? (u === "%" ? " %" : ` ${u}`) : ""}`;
 }

@@ -1,15 +1,12 @@
 // Figures of the datalog pages in the user's units (boost gauge, temperatures, pulley sizes).
 import { fromSI, unitLabel, type QuantityKind, type UnitSystem } from "@/calc";
+import { digitsOf } from "@/lib/units/format";
 
-const DIGITS: Partial<Record<QuantityKind, Record<UnitSystem, number>>> = {
-  pressure: { imperial: 2, metric: 1 },
-  temperature: { imperial: 0, metric: 0 },
-  "length-small": { imperial: 2, metric: 1 },
-  speed: { imperial: 0, metric: 0 },
-};
+/** Logged boost reads to a hundredth of a psi; everything else as the planner shows it. */
+export const logDigits = (kind: QuantityKind, system: UnitSystem) => (unitLabel(kind, system) === "psi" ? 2 : digitsOf(kind, system));
 
 /** A SI value as text in the user's units, without the unit ("—" for null). */
-export function fig(kind: QuantityKind, si: number | null, system: UnitSystem, digits = DIGITS[kind]?.[system] ?? 1): string {
+export function fig(kind: QuantityKind, si: number | null, system: UnitSystem, digits = logDigits(kind, system)): string {
   if (si === null || !Number.isFinite(si)) return "—";
   return fromSI(kind, si, system).toLocaleString("en-US", { minimumFractionDigits: digits, maximumFractionDigits: digits });
 }

@@ -1,6 +1,6 @@
 // The cautions of a classroom step: each labelled by the curve (item) it belongs to, a caution
 // raised twice for the same item listed once, and the general notice left to the panel (once).
-import { cautions as cautionsOf, type Caution, type UnitSystem } from "@/calc";
+import { cautions as cautionsOf, type Caution } from "@/calc";
 import type { ItemCurve } from "./curves";
 
 export type ItemCaution = { item: string; caution: Caution };
@@ -21,13 +21,4 @@ export function stepCautions(curves: readonly ItemCurve[]): ItemCaution[] {
     }
   }
   return out.sort((a, b) => SEVERITY_ORDER[a.caution.severity] - SEVERITY_ORDER[b.caution.severity]);
-}
-
-/**
- * The one place a classroom caution's words come from. Today the model's message as it stands;
- * `system` is here so the words can follow the viewer's units without touching the callers.
- */
-export function cautionWords(caution: Caution, system: UnitSystem): string {
-  void system;
-  return caution.message;
 }

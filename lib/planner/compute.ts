@@ -14,9 +14,9 @@ import {
   type PulleyForBoostResult,
   type PulleySweepRow,
   type RangeReason,
-  type UnitSystem,
-} from "@/calc";
+  type UnitSystem, unitLabel } from "@/calc";
 import { quantityText } from "@/lib/units/format";
+import { calcErrorText } from "@/lib/units/caution-text";
 
 /** A blower pulley on the parts shelf (diameter in m; price a decimal string). */
 export type ShelfPulley = { id: string; partNumber: string; diameter: number; ribCount: number; price: string; stock: number };
@@ -50,7 +50,7 @@ export function peakPowerRpm(points: readonly OperatingPoint[], fallback: number
 const near = (a: number, b: number) => Math.abs(a - b) < 1e-6;
 
 /** Step between neighbouring pulleys when the shelf has none: 0.1 in, or 2.5 mm. */
-export const neighbourStep = (system: UnitSystem) => (system === "imperial" ? inToM(0.1) : 0.0025);
+export const neighbourStep = (system: UnitSystem) => (unitLabel("length-small", system) === "in" ? inToM(0.1) : 0.0025);
 
 /**
  * The next smaller and next larger blower pulleys to overlay: stocked sizes first, then any on
@@ -166,7 +166,7 @@ export function findPulley(spec: Combination, rpm: number, targetBoostGauge: num
         message: `A boost of ${quantityText("pressure", targetBoostGauge, system)} cannot be reached at ${Math.round(rpm)} rpm with any blower pulley from ${quantityText("length-small", 0.03, system)} to ${quantityText("length-small", 0.5, system)}. The reachable range there is ${lo} to ${hi}.`,
       };
     }
-    if (e instanceof CalcConvergenceError || e instanceof CalcInputError) return { ok: false, message: e.message };
+    if (e instanceof CalcConvergenceError || e instanceof CalcInputError) return { ok: false, message: calcErrorText(e, system) };
     throw e;
   }
 }

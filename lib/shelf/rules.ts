@@ -4,7 +4,8 @@
 import Decimal from "decimal.js";
 import { z } from "zod";
 import { text } from "@/lib/validation/text";
-import { blowerKindSchema, blowerSchema, fromSI, roundInward, toSI, type UnitSystem } from "@/calc";
+import { blowerKindSchema, blowerSchema, fromSI, roundInward, toSI, type UnitSystem, unitLabel } from "@/calc";
+import { digitsOf } from "@/lib/units/format";
 
 // ---------------------------------------------------------------- money
 
@@ -159,9 +160,9 @@ function optionalWithinIn(label: string, unit: string, si: { min: number; max: n
 
 /** The pulley form in the user's units; parses to a SI pulley record. */
 export function pulleyFormSchema(system: UnitSystem) {
-  const unit = system === "metric" ? "mm" : "in";
+  const unit = unitLabel("length-small", system);
   const length = (m: number) => fromSI("length-small", m, system);
-  const digits = system === "metric" ? 1 : 2;
+  const digits = digitsOf("length-small", system);
   return z
     .object({
       partNumber: pulleyRecordSchema.shape.partNumber,
@@ -183,7 +184,7 @@ export function pulleyFormSchema(system: UnitSystem) {
 
 /** The blower form in the user's units (displacement per rev) and percent (efficiencies). */
 export function blowerFormSchema(system: UnitSystem) {
-  const unit = system === "metric" ? "L/rev" : "in³/rev";
+  const unit = unitLabel("blower-displacement", system);
   const displacement = (m3: number) => fromSI("blower-displacement", m3, system);
   const percent = (f: number) => f * 100;
   return z
@@ -191,7 +192,7 @@ export function blowerFormSchema(system: UnitSystem) {
       partNumber: blowerRecordSchema.shape.partNumber,
       name: blowerRecordSchema.shape.name,
       kind: blowerKindSchema,
-      displacementPerRev: withinIn("Blower displacement", unit, blowerLimits("displacementPerRev"), displacement, system === "metric" ? 2 : 1),
+      displacementPerRev: withinIn("Blower displacement", unit, blowerLimits("displacementPerRev"), displacement, Math.max(1, digitsOf("blower-displacement", system))),
       builtInVolumeRatio: numberIn("Built-in volume ratio", "").pipe(blowerSchema.shape.builtInVolumeRatio),
       maxRpm: numberIn("Blower speed limit", "rpm").pipe(blowerSchema.shape.maxRpm),
       volumetricEfficiencyRef: withinIn("Reference volumetric efficiency", "%", blowerLimits("volumetricEfficiencyRef"), percent, 0),

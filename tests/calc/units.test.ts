@@ -150,6 +150,28 @@ describe("units", () => {
         if (cu) expect(relDiff(U.toSI(kind, 7, system), convert(7).from(cu[0] as never).to(cu[1] as never))).toBeLessThan(CU_TOL);
       });
     }
+    // The choices beyond the two presets, each as a person's units with that one kind changed.
+    // source: NIST SP 811 (2008), B.8/B.9: 1 cm³ = 1e-6 m³, 1 bar = 1e5 Pa, 1 h = 3600 s (exact); convert-units agrees.
+    const EXTRA: [U.QuantityKind, string, number, [string, string]][] = [
+      ["displacement", "cc", 1e-6, ["cm3", "m3"]],
+      ["blower-displacement", "cc", 1e-6, ["cm3", "m3"]],
+      ["pressure", "bar", 1e5, ["bar", "Pa"]],
+      ["airflow", "m3h", 1 / 3600, ["m3/h", "m3/s"]],
+    ];
+    it("covers every unit a person can choose", () => {
+      const presetIds = (k: U.QuantityKind) => [U.UNIT_PRESETS.imperial[k], U.UNIT_PRESETS.metric[k]];
+      for (const k of U.QUANTITY_KINDS) {
+        for (const u of U.unitChoices(k)) expect(presetIds(k).includes(u.id) || EXTRA.some(([ek, id]) => ek === k && id === u.id), `${k}/${u.id}`).toBe(true);
+      }
+    });
+    for (const [kind, unitId, si, cu] of EXTRA) {
+      const units = U.resolveUnits("metric", { [kind]: unitId });
+      it(`${kind} (${U.unitLabel(kind, units)}): 1 unit = ${si} SI`, () => {
+        expect(relDiff(U.toSI(kind, 7, units), 7 * si)).toBeLessThan(1e-12);
+        expect(relDiff(U.fromSI(kind, 7 * si, units), 7)).toBeLessThan(1e-12);
+        expect(relDiff(U.toSI(kind, 7, units), convert(7).from(cu[0] as never).to(cu[1] as never))).toBeLessThan(CU_TOL);
+      });
+    }
     it("temperature: °F and °C at the ice and steam points", () => {
       // source: NIST SP 811, B.8: T(K) = t(°C) + 273.15 = (t(°F) + 459.67)/1.8, exact; convert-units agrees
       for (const [f, c, k] of [[32, 0, 273.15], [212, 100, 373.15], [-40, -40, 233.15]]) {
@@ -158,6 +180,40 @@ describe("units", () => {
         expect(U.fromSI("temperature", k, "imperial")).toBeCloseTo(f, 9);
         expect(U.fromSI("temperature", k, "metric")).toBeCloseTo(c, 9);
         expect(U.toSI("temperature", f, "imperial")).toBeCloseTo(convert(f).from("F").to("K"), 6);
+      }
+    });
+  });
+
+  describe("a person's units", () => {
+    it("resolves a preset with per-kind choices, ignoring unknown kinds and units", () => {
+      const mixed = U.resolveUnits("imperial", { displacement: "L", pressure: "bar", torque: "furlong", nonsense: "x" });
+      expect(U.unitLabel("displacement", mixed)).toBe("L");
+      expect(U.unitLabel("pressure", mixed)).toBe("bar");
+      expect(U.unitLabel("torque", mixed)).toBe("lb·ft");
+      expect(U.unitLabel("temperature", mixed)).toBe("°F");
+      expect(U.presetOf(mixed)).toBeNull();
+      expect(U.presetOf(U.resolveUnits("metric", {}))).toBe("metric");
+      expect(U.nearestPreset(mixed)).toBe("imperial");
+    });
+
+    it("a choice survives its link parameter (property)", () => {
+      const unitsArb = fc.record(Object.fromEntries(U.QUANTITY_KINDS.map((k) => [k, fc.constantFrom(...U.unitChoices(k).map((u) => u.id))]))) as unknown as fc.Arbitrary<U.Units>;
+      fc.assert(
+        fc.property(unitsArb, (units) => {
+          const back = U.unitsFromParam(U.unitsToParam(units));
+          for (const k of U.QUANTITY_KINDS) expect(U.unitOfKind(k, back).id).toBe(units[k]);
+        }),
+      );
+      expect(U.unitsToParam("metric")).toBe("metric");
+      expect(U.unitsToParam(U.resolveUnits("imperial", { displacement: "L" }))).toBe("imperial~displacement.L");
+      expect(U.unitsFromParam("junk")).toBe("imperial");
+    });
+
+    it("every unit choice round-trips through SI", () => {
+      for (const k of U.QUANTITY_KINDS) {
+        for (const u of U.unitChoices(k)) {
+          for (const v of [-1234.5, 0.75, 98765]) expect(relDiff(u.fromSI(u.toSI(v)), v)).toBeLessThan(1e-12);
+        }
       }
     });
   });

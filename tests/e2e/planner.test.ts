@@ -153,7 +153,8 @@ describe("planner in Chromium", () => {
     const want = pulleyForBoost(demoSpec, 5000, psiToPa(8)).diameter;
     expect(Math.abs(shown - want) / want).toBeLessThan(1e-4); // six significant digits in the form, as above
     await page.getByRole("button", { name: "Use the exact size in the editor" }).click();
-    await expect(pulleyField(page).inputValue().then(Number)).resolves.toBeCloseTo(mToIn(want), 4);
+    // The inch box keeps 0.001 in (lib/units/format.ts input digits): the exact size to that precision.
+    await expect(pulleyField(page).inputValue().then(Number)).resolves.toBe(Math.round(mToIn(want) * 1000) / 1000);
     // One speed for both: the ladder now reads at 5,000 rpm and its current row gives the finder's boost.
     await page.getByTestId("ladder-rpm").filter({ hasText: "5,000" }).waitFor();
     // The results follow the form a moment later (deferred): wait for the ladder's current row to be the found size.

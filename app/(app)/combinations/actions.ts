@@ -18,12 +18,13 @@ import {
   renameCombination,
   undoDelete,
 } from "@/db/repo/combinations";
+import { unitsParamSchema } from "@/lib/units/person";
 
 const figure = z.string().max(40).optional();
 const newCombinationForm = z.object({
   name: z.string({ error: "Give the combination a name." }),
   template: z.enum([...TEMPLATE_KEYS, BLANK_START], { error: "Choose a starting point." }),
-  units: z.enum(["imperial", "metric"], { error: "Units must be imperial or metric." }).optional(),
+  units: unitsParamSchema.optional(),
   displacement: figure,
   cylinders: figure,
   redlineRpm: figure,

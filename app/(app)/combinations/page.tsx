@@ -9,6 +9,7 @@ import {
   renameCombinationAction,
   undoDeleteAction,
 } from "./actions";
+import { personUnits } from "@/lib/units/person";
 
 const LIST_ACTIONS = {
   rename: renameCombinationAction,
@@ -26,7 +27,7 @@ export default async function CombinationsPage({ searchParams }: { searchParams:
   return (
     <div className="flex flex-col gap-4">
       {denied ? <Notice tone="warning">That page is not open to your role ({user.role}).</Notice> : null}
-      <CombinationsList role={user.role} unitSystem={user.unitSystem} actions={LIST_ACTIONS} />
+      <CombinationsList role={user.role} unitSystem={personUnits(user)} actions={LIST_ACTIONS} />
     </div>
   );
 }

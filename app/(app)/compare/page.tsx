@@ -6,6 +6,7 @@ import { getCombination, getRevision, listCombinations, listRevisions } from "@/
 import { toActor } from "@/db/repo/users";
 import { CompareView, type ResolvedItem } from "./compare-view";
 import { parseItems, parseSpeeds } from "./items";
+import { personUnits } from "@/lib/units/person";
 
 export const metadata = { title: "Side by side · Pulleywright" };
 
@@ -80,7 +81,7 @@ export default async function ComparePage({ searchParams }: { searchParams: Sear
         items={shown}
         combinations={list.items.map((c) => ({ id: c.id, name: c.name, revision: c.revision, customerName: c.customerName, ownerEmail: c.ownerEmail }))}
         revisionsFor={revisionsFor}
-        unitSystem={user.unitSystem}
+        unitSystem={personUnits(user)}
         speeds={speeds}
       />
     </div>

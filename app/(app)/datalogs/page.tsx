@@ -5,11 +5,14 @@ import { getDb } from "@/db/client";
 import { isShopStaff } from "@/db/policy";
 import { listDatalogs } from "@/db/repo/datalogs";
 import { toActor } from "@/db/repo/users";
+import { dateText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Datalogs" };
 
 export default async function DatalogsPage() {
   const user = await requirePageUser();
+  const locale = await requestLocale();
   const actor = toActor(user);
   const logs = await listDatalogs(getDb(), actor);
   const staff = isShopStaff(actor);
@@ -53,7 +56,7 @@ export default async function DatalogsPage() {
                   <td className="px-3 py-2">{l.revision}</td>
                   <td className="px-3 py-2 text-right">{l.pointCount.toLocaleString("en-US")}</td>
                   {staff ? <td className="px-3 py-2">{l.ownerName}</td> : null}
-                  <td className="px-3 py-2">{l.createdAt.toISOString().slice(0, 10)}</td>
+                  <td className="px-3 py-2">{dateText(l.createdAt, locale)}</td>
                 </tr>
               ))}
             </tbody>

@@ -7,6 +7,8 @@ import { toActor } from "@/db/repo/users";
 import { formatPrice } from "@/lib/orders/money";
 import { ORDER_STATUSES, ORDER_STATUS_LABELS, orderListQuerySchema } from "@/lib/orders/status";
 import { HeadCells } from "@/components/ui/data-table";
+import { dateText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Orders" };
 
@@ -17,6 +19,7 @@ const one = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
 /** The shop's orders: a customer accepted a sheet and paid (or is paying) its deposit. */
 export default async function OrdersPage({ searchParams }: Props) {
   const user = await requirePageUser(["sales", "tuner", "admin"]);
+  const locale = await requestLocale();
   const sp = await searchParams;
   const parsed = orderListQuerySchema.safeParse({ status: one(sp.status) ?? "", search: one(sp.search) ?? "", page: one(sp.page) ?? 1 });
   const q = parsed.success ? parsed.data : orderListQuerySchema.parse({});
@@ -76,7 +79,7 @@ export default async function OrdersPage({ searchParams }: Props) {
                 </td>
                 <td className="px-2 py-1.5 text-right tabular-nums">{formatPrice(o.deposit, o.currency)}</td>
                 <td className="px-2 py-1.5 text-right tabular-nums">{formatPrice(o.total, o.currency)}</td>
-                <td className="px-2 py-1.5">{o.updatedAt.toLocaleDateString("en-GB", { dateStyle: "medium" })}</td>
+                <td className="px-2 py-1.5">{dateText(o.updatedAt, locale)}</td>
               </tr>
             ))}
             {list.rows.length === 0 ? (

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { RecommendationsList } from "@/components/recommendation/recommendations-list";
+import { personUnits } from "@/lib/units/person";
 
 export const metadata: Metadata = { title: "Recommendations" };
 
@@ -18,7 +19,7 @@ export default async function RecommendationsPage() {
           Make a recommendation
         </Link>
       </div>
-      <RecommendationsList unitSystem={user.unitSystem} />
+      <RecommendationsList unitSystem={personUnits(user)} />
     </div>
   );
 }

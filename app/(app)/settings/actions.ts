@@ -1,20 +1,30 @@
 "use server";
 import { revalidatePath } from "next/cache";
-import { z } from "zod";
 import { act, formFields } from "@/app/_lib/action";
 import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
-import { endAllSessions, setUnitSystem } from "@/db/repo/users";
+import { endAllSessions, setUnitPreferences } from "@/db/repo/users";
+import { resolveUnits } from "@/calc";
+import { toPreferences, unitPreferencesSchema } from "@/lib/units/person";
 
-const schema = z.object({ unitSystem: z.enum(["imperial", "metric"], { error: "Units must be imperial or metric." }) });
+/** The form's "units.<kind>" fields folded into the shape /api/me takes. */
+function unitFields(fields: Record<string, unknown>) {
+  const units: Record<string, unknown> = {};
+  const rest: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(fields)) {
+    if (k.startsWith("units.")) units[k.slice("units.".length)] = v;
+    else rest[k] = v;
+  }
+  return { ...rest, units };
+}
 
-/** Saves the user's choice of units (imperial or metric), used on every screen. */
-export async function saveUnitSystem(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
+/** Saves the person's units (a preset and a unit per kind), used on every screen. */
+export async function saveUnitPreferences(_prev: ActionState | undefined, form: FormData): Promise<ActionState> {
   return act(async () => {
     const actor = await requireActor();
-    const { unitSystem } = schema.parse(formFields(form));
-    await setUnitSystem(getDb(), actor, unitSystem);
+    const body = unitPreferencesSchema.parse(unitFields(formFields(form)));
+    await setUnitPreferences(getDb(), actor, toPreferences(resolveUnits(body.unitSystem, body.units), body.unitSystem));
     revalidatePath("/", "layout");
   });
 }

@@ -21,7 +21,7 @@ export default async function SettingsPage() {
         <dt className="text-muted">Role</dt>
         <dd>{user.role}</dd>
       </dl>
-      <UnitsForm current={user.unitSystem} />
+      <UnitsForm preset={user.unitSystem} choices={user.unitChoices} />
       {user.role === "admin" ? <ShopTerms /> : null}
       <SignOutEverywhere />
     </div>

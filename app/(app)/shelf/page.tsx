@@ -3,6 +3,7 @@ import { requirePageUser } from "@/app/_lib/session";
 import { ShelfTables } from "@/components/shelf/shelf-tables";
 import { canEditShelf } from "@/db/policy";
 import { toActor } from "@/db/repo/users";
+import { personUnits } from "@/lib/units/person";
 
 export const metadata: Metadata = { title: "Parts shelf" };
 
@@ -17,7 +18,7 @@ export default async function ShelfPage() {
           The shop&apos;s blowers and pulleys with price and stock. {isAdmin ? "You can edit the shelf and import or export it as CSV." : "Only the admin changes the shelf."}
         </p>
       </div>
-      <ShelfTables system={user.unitSystem} isAdmin={isAdmin} />
+      <ShelfTables system={personUnits(user)} isAdmin={isAdmin} />
     </div>
   );
 }

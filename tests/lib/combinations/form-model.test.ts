@@ -1,7 +1,7 @@
 // The planner's form: user units in, SI out, and calc's rules as field errors in the user's units.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { combinationSchema, type Combination, type UnitSystem } from "@/calc";
+import { combinationSchema, QUANTITY_KINDS, unitChoices, type Combination, type Units, type UnitSystem } from "@/calc";
 import { convertForm, localizeMessage, sameSpec, toForm, toSpec, unitOf, validateForm } from "@/lib/combinations/form-model";
 import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import { combinationArb } from "@/tests/calc/support/arbitraries";
@@ -22,10 +22,29 @@ describe("form values and SI", () => {
     expect(metric.engine.displacement).toBeCloseTo(4.3, 9);
   });
 
-  it("round-trips a form in either system to the same SI combination", () => {
+  it("round-trips a form in either system to the same figures in its boxes", () => {
+    // Boxes show a unit's input precision, so without the stored spec to fall back on the SI
+    // value may move by up to half a last digit, but the figures shown come back unchanged.
     for (const system of ["imperial", "metric"] as const) {
-      const back = combinationSchema.parse(toSpec(toForm(demo, system), system));
-      expect(sameSpec(back, demo)).toBe(true);
+      const f = toForm(demo, system);
+      const back = combinationSchema.parse(toSpec(f, system));
+      expect(toForm(back, system)).toEqual(f);
+    }
+  });
+
+  it("shows sensible precision in the boxes, not conversion noise", () => {
+    // source: 101 325 Pa = 14.6959 psi (1 psi = 6 894.757 Pa, NIST SP 811, App. B); the box shows 14.7.
+    const f = toForm(demo, "imperial");
+    expect(f.ambient.pressure).toBe(14.7);
+    // source: 4.3 L = 262.40 in³ (1 in³ = 16.387064 cm³, NIST SP 811); shown to 0.1 in³.
+    expect(f.engine.displacement).toBe(262.4);
+    // Every quantity box has at most its unit's input digits (author's choice per unit, lib/units/format.ts).
+    const decimals = (v: number) => (String(v).split(".")[1] ?? "").length;
+    for (const system of ["imperial", "metric"] as const) {
+      const g = toForm(demo, system);
+      expect(decimals(g.ambient.pressure)).toBeLessThanOrEqual(2);
+      expect(decimals(g.fuel.bsfc)).toBeLessThanOrEqual(3);
+      expect(decimals(g.intercooler.pressureDrop)).toBeLessThanOrEqual(2);
     }
   });
 
@@ -73,10 +92,12 @@ describe("form values and SI", () => {
 
   it("converts imperial to metric and back without drift", () => {
     const f = toForm(demo, "imperial");
-    const again = convertForm(convertForm(f, "imperial", "metric"), "metric", "imperial");
-    expect(again.drive.blowerPulleyDiameter).toBe(3.4);
-    expect(again.ambient.temperature).toBeCloseTo(f.ambient.temperature, 3);
-    expect(sameSpec(toSpec(again, "imperial"), toSpec(f, "imperial"))).toBe(true);
+    // A typed pulley size survives in → mm → in without the stored spec: mm boxes keep 0.01 mm.
+    const typed = { ...f, drive: { ...f.drive, blowerPulleyDiameter: 3.375 } };
+    expect(convertForm(convertForm(typed, "imperial", "metric"), "metric", "imperial").drive.blowerPulleyDiameter).toBe(3.375);
+    const again = convertForm(convertForm(f, "imperial", "metric", demo), "metric", "imperial", demo);
+    expect(again).toEqual(f);
+    expect(toSpec(again, "imperial", demo)).toEqual(toSpec(f, "imperial", demo));
     // source: 25 °C = 77 °F (°F = °C × 9/5 + 32)
     expect(f.ambient.temperature).toBeCloseTo(77, 6);
   });
@@ -96,6 +117,27 @@ describe("form values and SI", () => {
     );
   });
 
+  it("leaves the stored spec byte-identical through any chain of mixed units (property)", () => {
+    const unitsArb = fc.record(Object.fromEntries(QUANTITY_KINDS.map((k) => [k, fc.constantFrom(...unitChoices(k).map((u) => u.id))]))) as unknown as fc.Arbitrary<Units>;
+    fc.assert(
+      fc.property(combinationArb, fc.array(unitsArb, { minLength: 1, maxLength: 4 }), (input, chain) => {
+        const spec = combinationSchema.parse(input);
+        const start = chain[0];
+        const f = toForm(spec, start);
+        let cur = f;
+        let from: UnitSystem = start;
+        for (const to of [...chain.slice(1), "metric" as const, "imperial" as const, start]) {
+          cur = convertForm(cur, from, to, spec);
+          from = to;
+        }
+        expect(cur).toEqual(f);
+        const v = validateForm(cur, start, spec);
+        if (v.ok) expect(JSON.stringify(v.spec)).toBe(JSON.stringify(spec));
+      }),
+      { numRuns: 80 },
+    );
+  });
+
   it("leaves out a switched-off intercooler and injectors", () => {
     const f = toForm(demo, "metric");
     expect(f.intercoolerOn).toBe(false);
@@ -108,9 +150,11 @@ describe("form values and SI", () => {
 
   it("notices a 0.1 in pulley change as an unsaved edit, and a unit round trip as none", () => {
     const f = toForm(demo, "imperial");
-    expect(sameSpec(toSpec(f, "imperial"), demo)).toBe(true);
+    expect(sameSpec(toSpec(f, "imperial", demo), demo)).toBe(true);
+    const round = convertForm(convertForm(f, "imperial", "metric", demo), "metric", "imperial", demo);
+    expect(sameSpec(toSpec(round, "imperial", demo), demo)).toBe(true);
     f.drive.blowerPulleyDiameter = 3.3;
-    expect(sameSpec(toSpec(f, "imperial"), demo)).toBe(false);
+    expect(sameSpec(toSpec(f, "imperial", demo), demo)).toBe(false);
   });
 });
 

@@ -3,11 +3,14 @@
 import { getDb } from "@/db/client";
 import type { Actor } from "@/db/policy";
 import { listOutbox } from "@/db/repo/outbox";
+import { dateTimeText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
-const when = (d: Date | null) => (d ? d.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" }) : "");
+const when = (d: Date | null, locale: string) => (d ? dateTimeText(d, locale) : "");
 const TONE: Record<string, string> = { queued: "text-muted", sending: "text-muted", sent: "text-ok", failed: "text-danger" };
 
 export async function OutboxList({ actor }: { actor: Actor }) {
+  const locale = await requestLocale();
   const rows = await listOutbox(getDb(), actor);
   if (!rows.length) return <p className="text-sm">Nothing sent or queued yet.</p>;
   return (
@@ -31,10 +34,10 @@ export async function OutboxList({ actor }: { actor: Actor }) {
               <td className="py-1 pr-3">{m.subject}</td>
               <td className="py-1 pr-3">{m.attempts}</td>
               <td className="py-1 pr-3">
-                <time dateTime={m.createdAt.toISOString()}>{when(m.createdAt)}</time>
+                <time dateTime={m.createdAt.toISOString()}>{when(m.createdAt, locale)}</time>
               </td>
               <td className="py-1">
-                {m.status === "sent" ? when(m.sentAt) : m.status === "failed" ? `Gave up: ${m.lastError ?? ""}` : `${when(m.nextAttemptAt)}${m.lastError ? ` · ${m.lastError}` : ""}`}
+                {m.status === "sent" ? when(m.sentAt, locale) : m.status === "failed" ? `Gave up: ${m.lastError ?? ""}` : `${when(m.nextAttemptAt, locale)}${m.lastError ? ` · ${m.lastError}` : ""}`}
               </td>
             </tr>
           ))}

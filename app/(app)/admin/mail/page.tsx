@@ -6,6 +6,8 @@ import { requirePageUser } from "@/app/_lib/session";
 import { toActor } from "@/db/repo/users";
 import { OutboxList } from "./outbox-list";
 import { Notice } from "@/components/ui/notice";
+import { dateTimeText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Mailbox" };
 export const dynamic = "force-dynamic";
@@ -47,7 +49,7 @@ export default async function MailboxPage() {
 }
 
 async function Inbox({ base }: { base: string }) {
-  const inbox = await readInbox(base);
+  const [inbox, locale] = await Promise.all([readInbox(base), requestLocale()]);
   if ("error" in inbox) return <Notice tone="danger">{inbox.error}</Notice>;
   if (!inbox.messages.length) return <p className="text-sm">No messages yet.</p>;
   return (
@@ -58,7 +60,7 @@ async function Inbox({ base }: { base: string }) {
             <summary className="cursor-pointer px-3 py-2">
               <span className="font-medium">{m.subject || "(no subject)"}</span>
               <span className="ml-2 text-sm text-muted">
-                to {m.to.join(", ")} · <time dateTime={m.date}>{new Date(m.date).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "medium" })}</time>
+                to {m.to.join(", ")} · <time dateTime={m.date}>{dateTimeText(m.date, locale)}</time>
               </span>
             </summary>
             <pre className="overflow-x-auto border-t border-line px-3 py-2 text-xs whitespace-pre-wrap">{m.text}</pre>

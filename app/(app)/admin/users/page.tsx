@@ -6,6 +6,8 @@ import { EmptyRow, HeadCells } from "@/components/ui/data-table";
 import { setUserDisabledAction, setUserRoleAction } from "./actions";
 import { getDb } from "@/db/client";
 import { listUsers, toActor } from "@/db/repo/users";
+import { dateText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Accounts" };
 
@@ -13,6 +15,7 @@ const PAGE_SIZE = 25;
 
 export default async function AdminUsersPage({ searchParams }: { searchParams: Promise<{ q?: string; page?: string }> }) {
   const user = await requirePageUser(["admin"]);
+  const locale = await requestLocale();
   const sp = await searchParams;
   const search = (sp.q ?? "").slice(0, 100);
   const page = Math.max(1, Math.min(10_000, Number.parseInt(sp.page ?? "1", 10) || 1));
@@ -51,7 +54,7 @@ export default async function AdminUsersPage({ searchParams }: { searchParams: P
               <tr key={r.id} className="border-b border-line last:border-0 align-top">
                 <td className="px-3 py-2">{r.name || <span className="text-muted">—</span>}</td>
                 <td className="px-3 py-2">{r.email}</td>
-                <td className="px-3 py-2 whitespace-nowrap tabular-nums">{r.createdAt.toISOString().slice(0, 10)}</td>
+                <td className="px-3 py-2 whitespace-nowrap tabular-nums">{dateText(r.createdAt, locale)}</td>
                 <td className="px-3 py-2">
                   <UserAccessControls id={r.id} email={r.email} role={r.role} disabled={r.disabled} self={r.id === user.id} actions={{ setRole: setUserRoleAction, setDisabled: setUserDisabledAction }} />
                 </td>

@@ -9,9 +9,8 @@ import { type ActionState } from "@/lib/action-state";
 import { requireActor } from "@/app/_lib/session";
 import { getDb } from "@/db/client";
 import { duplicateCombination, saveCombination } from "@/db/repo/combinations";
-import { setUnitSystem } from "@/db/repo/users";
-
-const unitsSchema = z.enum(["imperial", "metric"], { error: "Units must be imperial or metric." });
+import { setUnitPreferences } from "@/db/repo/users";
+import { toPreferences, unitsParamSchema } from "@/lib/units/person";
 
 /** Saves the planner's spec as a new revision; `id` is bound on the server. */
 export async function saveRevision(
@@ -44,10 +43,11 @@ export async function duplicateToEdit(id: string): Promise<ActionState> {
   redirect(`/combinations/${row.id}`);
 }
 
-/** Remembers the user's choice of units from the planner's switch. */
-export async function savePlannerUnits(unitSystem: string): Promise<ActionState> {
+/** Remembers the user's choice of units from the planner's switch (a preset, or their own mix back). */
+export async function savePlannerUnits(units: string): Promise<ActionState> {
   return act(async () => {
     const actor = await requireActor();
-    await setUnitSystem(getDb(), actor, unitsSchema.parse(unitSystem));
+    const chosen = unitsParamSchema.parse(units);
+    await setUnitPreferences(getDb(), actor, toPreferences(chosen));
   });
 }

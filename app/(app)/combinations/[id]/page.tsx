@@ -10,6 +10,7 @@ import { toActor } from "@/db/repo/users";
 import { duplicateToEdit, savePlannerUnits, saveRevision } from "./actions";
 import { Planner } from "./planner";
 import { Breadcrumb } from "@/components/ui/breadcrumb";
+import { personUnits } from "@/lib/units/person";
 
 export async function generateMetadata({ params }: { params: Promise<{ id: string }> }) {
   void params;
@@ -42,7 +43,7 @@ export default async function PlannerPage({ params }: { params: Promise<{ id: st
         revision={row.revision}
         isDemo={row.isDemo}
         spec={spec}
-        unitSystem={user.unitSystem}
+        unitSystem={personUnits(user)}
         canWrite={canWrite}
         shelf={shelf}
         save={saveRevision.bind(null, row.id)}

@@ -1,13 +1,21 @@
 "use client";
 // The planner's heading (name, revision, links, units) and the offer of a kept draft.
 import Link from "next/link";
-import type { UnitSystem } from "@/calc";
+import { presetOf, unitsToParam, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
+import { useDates } from "@/components/locale";
 
-type PlannerHeaderProps = { name: string; combinationId: string; baseRevision: number; isDemo: boolean; system: UnitSystem; onUnits: (u: UnitSystem) => void; unitsMessage: string | null };
+type PlannerHeaderProps = { name: string; combinationId: string; baseRevision: number; isDemo: boolean; system: UnitSystem; own: UnitSystem; onUnits: (u: UnitSystem) => void; unitsMessage: string | null };
 
-export function PlannerHeader({ name, combinationId, baseRevision, isDemo, system, onUnits, unitsMessage }: PlannerHeaderProps) {
+export function PlannerHeader({ name, combinationId, baseRevision, isDemo, system, own, onUnits, unitsMessage }: PlannerHeaderProps) {
+  // The presets, plus the person's own mix of units (set in Settings) when they have one.
+  const choices: { key: string; label: string; units: UnitSystem }[] = [
+    { key: "imperial", label: "Imperial", units: "imperial" },
+    { key: "metric", label: "Metric", units: "metric" },
+    ...(presetOf(own) === null ? [{ key: "own", label: "My units", units: own }] : []),
+  ];
+  const current = unitsToParam(system);
   return (
     <>
       <header className="flex flex-wrap items-start gap-x-6 gap-y-2">
@@ -30,12 +38,15 @@ export function PlannerHeader({ name, combinationId, baseRevision, isDemo, syste
           <span aria-hidden="true" className="text-muted">
             Units
           </span>
-          {(["imperial", "metric"] as const).map((u) => (
-            <label key={u} className="flex items-center gap-1">
-              <input type="radio" name="planner-units" value={u} checked={system === u} onChange={() => onUnits(u)} />
-              {u === "imperial" ? "Imperial" : "Metric"}
+          {choices.map((c) => (
+            <label key={c.key} className="flex items-center gap-1">
+              <input type="radio" name="planner-units" value={c.key} checked={unitsToParam(c.units) === current} onChange={() => onUnits(c.units)} />
+              {c.label}
             </label>
           ))}
+          <Link href="/settings#units" className="text-accent underline underline-offset-2">
+            Per quantity…
+          </Link>
         </fieldset>
       </header>
       {unitsMessage ? (
@@ -48,10 +59,11 @@ export function PlannerHeader({ name, combinationId, baseRevision, isDemo, syste
 }
 
 export function DraftOffer({ revision, savedAt, onRestore, onDiscard }: { revision: number; savedAt: number; onRestore: () => void; onDiscard: () => void }) {
+  const dates = useDates();
   return (
     <Notice tone="warning" title="Unsaved changes found">
       <p>
-        This browser kept changes to revision {revision} from {new Date(savedAt).toLocaleString()} that were never saved.
+        This browser kept changes to revision {revision} from {dates.dateTime(savedAt)} that were never saved.
       </p>
       <div className="mt-2 flex gap-2">
         <Button type="button" onClick={onRestore}>

@@ -2,12 +2,13 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { FieldErrors, Resolver } from "react-hook-form";
 import { z } from "zod";
-import { combinationSchema, type UnitSystem } from "@/calc";
+import { combinationSchema, type Combination, type UnitSystem } from "@/calc";
 import { localizeMessage, toSpec, type PlannerForm } from "@/lib/combinations/form-model";
 
-export function plannerResolver(s: UnitSystem): Resolver<PlannerForm> {
+/** `base`: the stored spec, whose untouched values are checked as stored, not as their rounded figures. */
+export function plannerResolver(s: UnitSystem, base?: Combination): Resolver<PlannerForm> {
   return async (values, context, options) => {
-    const schema = z.preprocess((v) => toSpec(v as PlannerForm, s), combinationSchema);
+    const schema = z.preprocess((v) => toSpec(v as PlannerForm, s, base), combinationSchema);
     const result = await (zodResolver(schema as never) as unknown as Resolver<PlannerForm>)(values, context, options);
     const walk = (node: unknown, path: string[]) => {
       if (!node || typeof node !== "object") return;

@@ -5,7 +5,7 @@
 // (curves, ladder, chart), and the views (header, save bar, readouts, chart, ladder, finder).
 import { memo, useCallback, useDeferredValue, useMemo, useState, useTransition } from "react";
 import { useForm, useWatch } from "react-hook-form";
-import type { Combination, UnitSystem } from "@/calc";
+import { unitsToParam, type Combination, type UnitSystem } from "@/calc";
 import { CautionsPanel } from "@/components/cautions-panel";
 import { Editor } from "@/components/planner/editor";
 import { EditorTabs } from "@/components/planner/editor-tabs";
@@ -16,6 +16,7 @@ import { Notice } from "@/components/ui/notice";
 import type { ActionState } from "@/lib/action-state";
 import { convertForm, fieldFromSI, sameSpec, toForm, toSpec, validateForm, type PlannerForm } from "@/lib/combinations/form-model";
 import { finderStock, type Shelf } from "@/lib/planner/compute";
+import { unitsName } from "@/lib/units/person";
 import { PlannerChart } from "./planner-chart";
 import { DraftOffer, PlannerHeader } from "./planner-header";
 import { PlannerReadouts } from "./planner-readouts";
@@ -47,12 +48,12 @@ export type PlannerProps = {
 export function Planner(props: PlannerProps) {
   const { combinationId, canWrite, shelf } = props;
   const [system, setSystem] = useState<UnitSystem>(props.unitSystem);
-  const resolver = useMemo(() => plannerResolver(system), [system]);
+  const [baseSpec, setBaseSpec] = useState<Combination>(props.spec);
+  const resolver = useMemo(() => plannerResolver(system, baseSpec), [system, baseSpec]);
   const form = useForm<PlannerForm>({ defaultValues: toForm(props.spec, props.unitSystem), resolver, mode: "onSubmit" });
   const values = useWatch({ control: form.control }) as PlannerForm;
 
   const [baseRevision, setBaseRevision] = useState(props.revision);
-  const [baseSpec, setBaseSpec] = useState<Combination>(props.spec);
   const [note, setNote] = useState("");
   const [saveMsg, setSaveMsg] = useState<SaveMessage | null>(null);
   const [unitsMsg, setUnitsMsg] = useState<string | null>(null);
@@ -72,7 +73,7 @@ export function Planner(props: PlannerProps) {
   const spec = live.ok ? live.spec : lastGood;
   const deferredSpec = useDeferredValue(spec);
   const errors = live.ok ? NO_ERRORS : live.errors;
-  const dirty = useMemo(() => !sameSpec(toSpec(values, system), baseSpec), [valuesKey, baseSpec]); // eslint-disable-line react-hooks/exhaustive-deps
+  const dirty = useMemo(() => !sameSpec(toSpec(values, system, baseSpec), baseSpec), [valuesKey, baseSpec]); // eslint-disable-line react-hooks/exhaustive-deps
 
   useUnsavedGuard(dirty && canWrite);
   const draft = usePlannerDraft({ form, canWrite, combinationId, openedRevision: props.revision, baseRevision, system, values, valuesKey, dirty });
@@ -83,8 +84,8 @@ export function Planner(props: PlannerProps) {
     setSystem(next);
     setUnitsMsg(null);
     startUnits(async () => {
-      const r = await props.saveUnits(next);
-      setUnitsMsg(r.ok ? `Units set to ${next}; saved as your preference.` : `Units changed here, but not saved as your preference: ${r.message}`);
+      const r = await props.saveUnits(unitsToParam(next));
+      setUnitsMsg(r.ok ? `Units set to ${unitsName(next)}; saved as your preference.` : `Units changed here, but not saved as your preference: ${r.message}`);
     });
   };
 
@@ -131,7 +132,7 @@ export function Planner(props: PlannerProps) {
 
   return (
     <div className="flex flex-col gap-4">
-      <PlannerHeader name={props.name} combinationId={combinationId} baseRevision={baseRevision} isDemo={props.isDemo} system={system} onUnits={switchUnits} unitsMessage={unitsMsg} />
+      <PlannerHeader name={props.name} combinationId={combinationId} baseRevision={baseRevision} isDemo={props.isDemo} system={system} own={props.unitSystem} onUnits={switchUnits} unitsMessage={unitsMsg} />
       {draft.offer ? <DraftOffer revision={baseRevision} savedAt={draft.offer.savedAt} onRestore={draft.restoreDraft} onDiscard={draft.discardDraft} /> : null}
       <SaveBar invalid={!live.ok} canWrite={canWrite} note={note} onNote={setNote} onSave={(e) => void onSave(e)} saving={saving} dirty={dirty} onDuplicate={duplicate} duplicating={duplicating} message={saveMsg} />
 
@@ -171,7 +172,7 @@ export function Planner(props: PlannerProps) {
                 <StillLadder rows={results.rows} system={system} rpm={results.rpm} fromShelf={shelf.blowerPulleys.length > 0} onUse={applyPulley} />
                 <StillFinder spec={results.spec} system={system} rpms={results.rpms} stock={stock} defaultRpm={results.rpm} onRpm={setChosenRpm} onApply={applyPulley} />
               </div>
-              <CautionsPanel cautions={results.cautions} />
+              <CautionsPanel cautions={results.cautions} units={system} />
             </>
           ) : (
             <Notice tone="danger" title="No prediction">

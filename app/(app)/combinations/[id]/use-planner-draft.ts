@@ -2,11 +2,12 @@
 // Drafts: unsaved edits kept in this browser per combination and revision, offered back on return.
 import { useEffect, useRef, useState } from "react";
 import type { UseFormReturn } from "react-hook-form";
-import type { UnitSystem } from "@/calc";
+import { unitsFromParam, unitsToParam, type UnitSystem } from "@/calc";
 import { convertForm, type PlannerForm } from "@/lib/combinations/form-model";
 import { draftKey } from "@/components/planner/use-unsaved-guard";
 
-export type Draft = { system: UnitSystem; values: PlannerForm; savedAt: number };
+/** A kept draft; its units as a link parameter ("imperial", "metric~pressure.psi"). */
+export type Draft = { system: string; values: PlannerForm; savedAt: number };
 
 type DraftInput = {
   form: UseFormReturn<PlannerForm>;
@@ -32,7 +33,7 @@ export function usePlannerDraft({ form, canWrite, combinationId, openedRevision,
     try {
       const raw = window.localStorage.getItem(draftKey(combinationId, openedRevision));
       const d = raw ? (JSON.parse(raw) as Draft) : null;
-      if (d && d.values && (d.system === "imperial" || d.system === "metric")) found = d;
+      if (d && d.values && typeof d.system === "string" && /^(imperial|metric)/.test(d.system)) found = d;
     } catch {
       found = null;
     }
@@ -43,7 +44,7 @@ export function usePlannerDraft({ form, canWrite, combinationId, openedRevision,
     if (!decided.current || !canWrite) return;
     const t = window.setTimeout(() => {
       try {
-        if (dirty) window.localStorage.setItem(key, JSON.stringify({ system, values, savedAt: Date.now() } satisfies Draft));
+        if (dirty) window.localStorage.setItem(key, JSON.stringify({ system: unitsToParam(system), values, savedAt: Date.now() } satisfies Draft));
         else window.localStorage.removeItem(key);
       } catch {
         // Private browsing or a full store: the leave warning still guards the edits.
@@ -54,7 +55,7 @@ export function usePlannerDraft({ form, canWrite, combinationId, openedRevision,
 
   const restoreDraft = () => {
     if (!offer) return;
-    form.reset(convertForm(offer.values, offer.system, system));
+    form.reset(convertForm(offer.values, unitsFromParam(offer.system), system));
     decided.current = true;
     setOffer(null);
   };

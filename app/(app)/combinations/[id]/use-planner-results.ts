@@ -3,19 +3,20 @@
 // the neighbouring pulleys, the ladder at the one chosen speed, the cautions, the what-if pulley
 // and the chart's series.
 import { useMemo } from "react";
-import { cautions as calcCautions, trySolvePoint, type Caution, type Combination, type UnitSystem } from "@/calc";
+import { cautions as calcCautions, trySolvePoint, type Caution, type Combination, type UnitSystem, unitLabel } from "@/calc";
 import type { BoostExtra } from "@/components/charts/boost-power-charts";
 import type { CurveSeries } from "@/components/charts/curve-chart";
 import { fieldFromSI } from "@/lib/combinations/form-model";
 import { ladder, ladderDiameters, ladderSpeed, neighbourPulleys, peakPowerRpm, rpmGrid, safeCurve, withPulley, type ShelfPulley } from "@/lib/planner/compute";
 import { explainSentence } from "@/lib/planner/explain-words";
 import { quantityText } from "@/lib/units/format";
+import { calcErrorText } from "@/lib/units/caution-text";
 
 export type ChartOptions = { showNeighbours: boolean; extra: BoostExtra };
 
 type ResultsInput = { spec: Combination; baseSpec: Combination; chosenRpm: number | null; whatIf: number | null; blowerPulleys: ShelfPulley[]; system: UnitSystem };
 
-const unsolved = (e: unknown) => ({ ok: false as const, message: e instanceof Error ? e.message : "The model could not solve this combination." });
+const unsolved = (e: unknown, system: UnitSystem) => ({ ok: false as const, message: calcErrorText(e, system) });
 
 export function usePlannerResults({ spec: s, baseSpec, chosenRpm, whatIf, blowerPulleys, system }: ResultsInput) {
   // Everything but the what-if, so a slider move recomputes only the what-if curve and the why.
@@ -32,7 +33,7 @@ export function usePlannerResults({ spec: s, baseSpec, chosenRpm, whatIf, blower
       const list: Caution[] = calcCautions(s, current);
       return { ok: true as const, spec: s, rpms, curve: current, peak, rpm, smaller, larger, rows, cautions: list, here: trySolvePoint(s, rpm) };
     } catch (e) {
-      return unsolved(e);
+      return unsolved(e, system);
     }
   }, [s, chosenRpm, blowerPulleys, system]);
   return useMemo(() => {
@@ -47,7 +48,7 @@ export function usePlannerResults({ spec: s, baseSpec, chosenRpm, whatIf, blower
           : explainSentence(trySolvePoint(baseSpec, rpm), here, system);
       return { ...fixed, whatIf: what, why };
     } catch (e) {
-      return unsolved(e);
+      return unsolved(e, system);
     }
   }, [fixed, baseSpec, whatIf, system]);
 }
@@ -74,6 +75,6 @@ export function usePulleySlider(current: number, blowerPulleys: ShelfPulley[], s
     const ds = ladderDiameters(current, blowerPulleys);
     const lo = Math.min(ds[0], current);
     const hi = Math.max(ds[ds.length - 1], current);
-    return { min: fieldFromSI("length-small", lo, system), max: fieldFromSI("length-small", hi, system), step: system === "imperial" ? 0.05 : 1 };
+    return { min: fieldFromSI("length-small", lo, system), max: fieldFromSI("length-small", hi, system), step: unitLabel("length-small", system) === "in" ? 0.05 : 1 };
   }, [current, blowerPulleys, system]);
 }

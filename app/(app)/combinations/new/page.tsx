@@ -5,6 +5,7 @@ import { TEMPLATES } from "@/lib/combinations/templates";
 import { specRows } from "@/lib/combinations/spec-fields";
 import { createCombinationAction } from "../actions";
 import { BackLink } from "@/components/ui/back-link";
+import { personUnits } from "@/lib/units/person";
 
 export const metadata: Metadata = { title: "New combination" };
 
@@ -17,7 +18,7 @@ export default async function NewCombinationPage() {
   const templates = TEMPLATES.map((t) => ({
     key: t.key,
     label: t.label,
-    summary: specRows(t.spec, user.unitSystem)
+    summary: specRows(t.spec, personUnits(user))
       .filter((r) => SUMMARY.includes(r.path))
       .map((r) => `${r.label}: ${r.value}`)
       .join(" · "),
@@ -30,7 +31,7 @@ export default async function NewCombinationPage() {
         Pick a starting point (or a blank start), type the main figures you know, and give it a name; the planner opens next, where you change the engine, blower and pulleys to
         match the real car. The starting points are invented demo values.
       </p>
-      <NewCombinationForm templates={templates} units={user.unitSystem} staff={staff} createAction={createCombinationAction} />
+      <NewCombinationForm templates={templates} units={personUnits(user)} staff={staff} createAction={createCombinationAction} />
     </div>
   );
 }

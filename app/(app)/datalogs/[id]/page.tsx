@@ -8,6 +8,8 @@ import { canWriteOwned } from "@/db/policy";
 import { Notice } from "@/components/ui/notice";
 import { datalogMappingSchema, parseLog } from "@/lib/datalogs/parse";
 import { loadAnalysis } from "./load";
+import { personUnits } from "@/lib/units/person";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Datalog" };
 
@@ -19,7 +21,7 @@ export default async function DatalogPage({ params, searchParams }: { params: Pr
   const skipped = mapping.success ? parseLog(log.rawText, mapping.data, ambient.pressure).skipped : [];
   return (
     <div className="flex flex-col gap-5">
-      <LogHeader title={log.name} log={log} combination={combination} ambient={ambient} unitSystem={user.unitSystem} />
+      <LogHeader title={log.name} log={log} combination={combination} ambient={ambient} unitSystem={personUnits(user)} locale={await requestLocale()} />
       {skipped.length ? (
         <Notice tone="warning" title={`${skipped.length} unreadable ${skipped.length === 1 ? "line was" : "lines were"} left out at upload; ${log.pointCount} rows kept.`}>
           <ul className="list-disc pl-5" aria-label="Skipped lines">
@@ -32,7 +34,7 @@ export default async function DatalogPage({ params, searchParams }: { params: Pr
           {skipped.length > 50 ? <p>…and {skipped.length - 50} more.</p> : null}
         </Notice>
       ) : null}
-      <LogAnalysis logId={log.id} points={points} ambient={ambient} loggedSpec={loggedSpec} unitSystem={user.unitSystem} initial={cleaningFromQuery(query)} />
+      <LogAnalysis logId={log.id} points={points} ambient={ambient} loggedSpec={loggedSpec} unitSystem={personUnits(user)} initial={cleaningFromQuery(query)} />
       <SafetyNotes />
       {canWriteOwned(actor, log.ownerId) ? (
         <div>

@@ -7,6 +7,7 @@ import { canWriteOwned } from "@/db/policy";
 import { getCombination, listCombinations } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { BackLink } from "@/components/ui/back-link";
+import { personUnits } from "@/lib/units/person";
 
 export const metadata: Metadata = { title: "Upload a log" };
 
@@ -30,7 +31,7 @@ export default async function NewDatalogPage({ searchParams }: { searchParams: P
     <div className="flex max-w-4xl flex-col gap-4">
       <BackLink href="/datalogs" label="Datalogs" />
       <h1 className="text-2xl font-semibold">Upload a log</h1>
-      <UploadForm combinations={combos} initialCombinationId={initial} unitSystem={user.unitSystem} />
+      <UploadForm combinations={combos} initialCombinationId={initial} unitSystem={personUnits(user)} />
     </div>
   );
 }

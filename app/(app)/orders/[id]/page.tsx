@@ -11,15 +11,18 @@ import { toActor } from "@/db/repo/users";
 import { formatPrice } from "@/lib/orders/money";
 import { ORDER_STATUS_LABELS, canCancel, canMarkFitted, isPaidOpen } from "@/lib/orders/status";
 import { OrderActions } from "./order-actions";
+import { dateText, dateTimeText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Order" };
 
 type Props = { params: Promise<{ id: string }> };
 
-const when = (d: Date) => d.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" });
+
 
 export default async function OrderPage({ params }: Props) {
   const user = await requirePageUser(["sales", "tuner", "admin"]);
+  const locale = await requestLocale();
   const actor = toActor(user);
   const { id } = await params;
   const db = getDb();
@@ -50,7 +53,7 @@ export default async function OrderPage({ params }: Props) {
         </dd>
         <dt className="text-muted">Deposit</dt>
         <dd className="tabular-nums">
-          {price(order.deposit)} {order.paidAt ? <span className="text-muted">paid {when(order.paidAt)}</span> : <span className="text-muted">not paid</span>}
+          {price(order.deposit)} {order.paidAt ? <span className="text-muted">paid {dateTimeText(order.paidAt, locale)}</span> : <span className="text-muted">not paid</span>}
         </dd>
         <dt className="text-muted">Quoted total</dt>
         <dd className="tabular-nums">{price(order.total)}</dd>
@@ -60,7 +63,7 @@ export default async function OrderPage({ params }: Props) {
           <>
             <dt className="text-muted">Fitted</dt>
             <dd>
-              {when(order.fittedAt)}
+              {dateTimeText(order.fittedAt, locale)}
               {order.fittedDatalogId ? (
                 <>
                   {" · "}
@@ -114,7 +117,7 @@ export default async function OrderPage({ params }: Props) {
         <ol className="flex max-w-2xl flex-col gap-1 text-sm" data-testid="payment-trail">
           {order.events.map((e) => (
             <li key={e.id} className="border-l-2 border-line pl-3">
-              <span className="text-muted">{when(e.createdAt)}</span> · {e.message}
+              <span className="text-muted">{dateTimeText(e.createdAt, locale)}</span> · {e.message}
               {e.amount ? <span className="tabular-nums"> ({price(e.amount)})</span> : null}
               {e.reference ? <span className="block text-xs text-muted">ref. {e.reference}</span> : null}
             </li>
@@ -128,7 +131,7 @@ export default async function OrderPage({ params }: Props) {
         canCancel={canCancel(order.status) && (!isPaidOpen(order.status) || canRefundOrders(actor))}
         refunds={isPaidOpen(order.status)}
         deposit={price(order.deposit)}
-        datalogs={logs.map((l) => ({ id: l.id, name: `${l.name} (rev. ${l.revision}, ${l.createdAt.toLocaleDateString("en-GB")})` }))}
+        datalogs={logs.map((l) => ({ id: l.id, name: `${l.name} (rev. ${l.revision}, ${dateText(l.createdAt, locale)})` }))}
       />
     </div>
   );

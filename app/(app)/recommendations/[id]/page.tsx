@@ -9,6 +9,7 @@ import { getDb } from "@/db/client";
 import { getLatestSentVersion } from "@/db/repo/sheet-versions";
 import { toActor } from "@/db/repo/users";
 import { SendPanel } from "./send-panel";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Recommendation sheet" };
 
@@ -23,7 +24,7 @@ export default async function RecommendationPage({ params }: { params: Promise<{
       <SendPanel id={sheet.id} status={sheet.status} customerEmail={sheet.customerEmail} shareUrl={version ? sentVersionLink(version, unitSystem).url : null} version={version?.version ?? null} />
       <SheetActions id={sheet.id} status={sheet.status} customerEmail={sheet.customerEmail} sentAt={sheet.sentAt ? sheet.sentAt.toISOString() : null} lastError={sheet.lastError} />
       <div className="rounded-md border border-line bg-panel p-4">
-        <SheetView sheet={sheet} shop={shop} currency={currency} unitSystem={unitSystem} />
+        <SheetView sheet={sheet} shop={shop} currency={currency} unitSystem={unitSystem} locale={await requestLocale()} />
       </div>
     </div>
   );

@@ -8,6 +8,7 @@ import { getDb } from "@/db/client";
 import { NotFoundError } from "@/lib/errors";
 import { getCombination, getRevision, listCombinations, listRevisions } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
+import { personUnits } from "@/lib/units/person";
 
 export const metadata: Metadata = { title: "New recommendation" };
 
@@ -125,7 +126,7 @@ export default async function NewRecommendationPage({ searchParams }: Props) {
         combination={{ id: combo.id, name: combo.name, revision, spec }}
         pulleys={shelf.pulleys}
         parts={shelf.parts}
-        unitSystem={user.unitSystem}
+        unitSystem={personUnits(user)}
         initial={{
           revision,
           title: "",

@@ -8,6 +8,7 @@ import { NotFoundError } from "@/lib/errors";
 import { getLesson } from "@/db/repo/lessons";
 import { toActor } from "@/db/repo/users";
 import { ClassroomView } from "@/components/lessons/classroom-view";
+import { personUnits } from "@/lib/units/person";
 
 export const metadata: Metadata = { title: "Classroom" };
 
@@ -41,7 +42,7 @@ export default async function ClassroomPage({ params, searchParams }: { params: 
         title={lesson.title}
         ownerName={lesson.ownerName}
         steps={lesson.steps}
-        unitSystem={user.unitSystem}
+        unitSystem={personUnits(user)}
         initialStep={start}
         copyItem={copyItemAction.bind(null, lesson.id)}
       />

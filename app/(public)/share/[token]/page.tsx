@@ -8,6 +8,9 @@ import { formatPrice } from "@/lib/orders/money";
 import { ORDER_STATUS_LABELS } from "@/lib/orders/status";
 import { AnswerSheet } from "./answer-sheet";
 import { loadSentSheet, type CustomerAnswer } from "./sent-sheet";
+import { presetOf } from "@/calc";
+import { dateText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
 /** A token with a broken %-escape is simply not a token (refused below), never an error. */
 function safeDecode(s: string): string {
@@ -52,10 +55,11 @@ function AnswerState({ answer, token, justPaid, cancelled }: { answer: CustomerA
 /** A customer's view of one sheet as it was sent, opened from the e-mailed link; no account needed. */
 export default async function SharedSheetPage({ params, searchParams }: Props) {
   const [{ token: raw }, sp] = await Promise.all([params, searchParams]);
+  const locale = await requestLocale();
   const token = safeDecode(raw);
   const loaded = await loadSentSheet(token, sp.units);
   if (!loaded.ok) return <LinkRefused reason={loaded.reason} />;
-  const other = loaded.unitSystem === "metric" ? "imperial" : "metric";
+  const other = presetOf(loaded.unitSystem) === "imperial" ? "metric" : "imperial";
   return (
     <div className="flex min-w-0 flex-col gap-4">
       <div className="no-print flex flex-wrap items-center gap-3 text-sm">
@@ -64,11 +68,11 @@ export default async function SharedSheetPage({ params, searchParams }: Props) {
           Show in {other} units
         </Link>
         <span className="text-muted">
-          {loaded.version ? `Version ${loaded.version}, as sent. ` : ""}This link works until {loaded.expiresAt.toLocaleDateString("en-GB", { year: "numeric", month: "long", day: "numeric" })}.
+          {loaded.version ? `Version ${loaded.version}, as sent. ` : ""}This link works until {dateText(loaded.expiresAt, locale)}.
         </span>
       </div>
       <AnswerState answer={loaded.answer} token={token} justPaid={sp.paid === "1"} cancelled={sp.checkout === "cancelled"} />
-      <SheetView sheet={loaded.sheet} shop={loaded.shop} currency={loaded.currency} unitSystem={loaded.unitSystem} />
+      <SheetView sheet={loaded.sheet} shop={loaded.shop} currency={loaded.currency} unitSystem={loaded.unitSystem} locale={locale} />
     </div>
   );
 }

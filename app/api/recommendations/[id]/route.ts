@@ -1,5 +1,5 @@
 import { route, parseJson } from "@/app/_lib/http";
-import { getCurrentUser, requireActor } from "@/app/_lib/session";
+import { currentUnits, requireActor } from "@/app/_lib/session";
 import { sentVersionLink } from "@/app/_lib/share-url";
 import { getDb } from "@/db/client";
 import { getRecommendation, updateRecommendation } from "@/db/repo/recommendations";
@@ -16,7 +16,7 @@ export const GET = route(async (_req, { params }: Ctx) => {
   const db = getDb();
   const rec = await getRecommendation(db, actor, id);
   const version = await getLatestSentVersion(db, actor, id);
-  const unitSystem = (await getCurrentUser())?.unitSystem ?? "imperial";
+  const unitSystem = await currentUnits();
   return { ...rec, shareUrl: version ? sentVersionLink(version, unitSystem).url : null };
 });
 

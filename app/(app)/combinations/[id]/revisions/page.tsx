@@ -14,6 +14,9 @@ import { canWriteOwned } from "@/db/policy";
 import { getCombination, listRevisions } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
+import { personUnits, unitsName } from "@/lib/units/person";
+import { dateTimeText } from "@/lib/format/dates";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "History" };
 
@@ -23,6 +26,7 @@ const int = (s: string | undefined) => (s && /^\d{1,6}$/.test(s) ? Number(s) : u
 
 export default async function RevisionsPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<Search> }) {
   const user = await requirePageUser();
+  const locale = await requestLocale();
   const actor = toActor(user);
   const [{ id }, sp] = await Promise.all([params, searchParams]);
   const db = getDb();
@@ -37,7 +41,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
   const writable = canWriteOwned(actor, combination.ownerId);
   const byNumber = new Map(revisions.map((r) => [r.number, r]));
   const current = combination.revision;
-  const units = user.unitSystem;
+  const units = personUnits(user);
 
   const viewed = int(sp.view) !== undefined ? byNumber.get(int(sp.view)!) : undefined;
   const newest = revisions[0]?.number ?? current;
@@ -57,7 +61,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
         <h1 className="text-2xl font-semibold">History of “{combination.name}”</h1>
         <p className="text-sm text-muted">
           Now at revision {current}. Each save is a revision; restoring one saves its spec again as the newest, so nothing is
-          lost. Values in {units} units.
+          lost. Values in {unitsName(units)}.
         </p>
         {!writable ? <p className="mt-1 text-sm text-muted">You can view this history but not change it. Duplicate the combination to make your own copy.</p> : null}
       </div>
@@ -83,7 +87,7 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
                   <td className="px-3 py-2">{r.note ?? <span className="text-muted">—</span>}</td>
                   <td className="px-3 py-2">{r.authorName ?? <span className="text-muted">a removed account</span>}</td>
                   <td className="px-3 py-2 whitespace-nowrap">
-                    <time dateTime={r.createdAt.toISOString()}>{r.createdAt.toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}</time>
+                    <time dateTime={r.createdAt.toISOString()}>{dateTimeText(r.createdAt, locale)}</time>
                   </td>
                   <td className="px-3 py-2">
                     <div className="flex flex-wrap items-start justify-end gap-2">

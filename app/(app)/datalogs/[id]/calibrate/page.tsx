@@ -6,6 +6,8 @@ import { SafetyNotes } from "@/components/datalogs/safety";
 import { combinationSchema } from "@/calc";
 import { canWriteOwned } from "@/db/policy";
 import { loadAnalysis, loadCombinationLogs } from "../load";
+import { personUnits } from "@/lib/units/person";
+import { requestLocale } from "@/app/_lib/locale";
 
 export const metadata: Metadata = { title: "Calibrate from a log" };
 
@@ -15,7 +17,7 @@ export default async function CalibratePage({ params, searchParams }: { params: 
   const logs = await loadCombinationLogs(actor, combination.id);
   return (
     <div className="flex flex-col gap-5">
-      <LogHeader title={`Calibrate from “${log.name}”`} log={log} combination={combination} ambient={ambient} unitSystem={user.unitSystem} />
+      <LogHeader title={`Calibrate from “${log.name}”`} log={log} combination={combination} ambient={ambient} unitSystem={personUnits(user)} locale={await requestLocale()} />
       <CalibrateView
         logId={log.id}
         logName={log.name}
@@ -25,7 +27,7 @@ export default async function CalibratePage({ params, searchParams }: { params: 
         current={{ id: combination.id, name: combination.name, revision: combination.revision, spec: combinationSchema.parse(combination.spec) }}
         loggedRevision={log.revision}
         canSave={canWriteOwned(actor, combination.ownerId)}
-        unitSystem={user.unitSystem}
+        unitSystem={personUnits(user)}
         initial={cleaningFromQuery(query)}
         logs={logs}
       />

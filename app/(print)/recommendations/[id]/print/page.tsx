@@ -4,6 +4,8 @@ import { LinkRefused } from "@/components/recommendation/link-refused";
 import { loadByToken, loadForStaff } from "@/app/_lib/recommendation-load";
 import { PrintButton } from "@/components/recommendation/print-button";
 import { SheetView } from "@/components/recommendation/sheet-view";
+import { requestLocale } from "@/app/_lib/locale";
+import { resolveLocale } from "@/lib/format/dates";
 
 export const metadata: Metadata = { title: "Print recommendation", robots: { index: false, follow: false } };
 
@@ -15,6 +17,8 @@ export default async function PrintRecommendationPage({ params, searchParams }: 
   const token = typeof sp.t === "string" ? sp.t : undefined;
   const loaded = token ? await loadByToken(token, sp.units, id) : await loadForStaff(id);
   if (!loaded.ok) return <LinkRefused reason={loaded.reason} />;
+  // The server's PDF renderer passes the requester's locale; a person printing sends their own.
+  const locale = typeof sp.lang === "string" ? resolveLocale(sp.lang) : await requestLocale();
   return (
     <div className="print-sheet">
       {token ? null : (
@@ -26,7 +30,7 @@ export default async function PrintRecommendationPage({ params, searchParams }: 
           <span className="text-xs text-muted">Fits one A4 or Letter page.</span>
         </div>
       )}
-      <SheetView sheet={loaded.sheet} shop={loaded.shop} currency={loaded.currency} unitSystem={loaded.unitSystem} print />
+      <SheetView sheet={loaded.sheet} shop={loaded.shop} currency={loaded.currency} unitSystem={loaded.unitSystem} locale={locale} print />
     </div>
   );
 }

@@ -1,8 +1,9 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { route, parseQuery } from "@/app/_lib/http";
-import { getCurrentUser, requireActor } from "@/app/_lib/session";
+import { currentUnits, requireActor } from "@/app/_lib/session";
 import { sheetPdf } from "@/app/_lib/sheet-mail";
+import { requestLocale } from "@/app/_lib/locale";
 import { getDb } from "@/db/client";
 import { getRecommendation } from "@/db/repo/recommendations";
 
@@ -14,11 +15,11 @@ export const GET = route(async (req, { params }: Ctx) => {
   const actor = await requireActor(["sales", "tuner", "admin"]);
   const { id } = await params;
   const rec = await getRecommendation(getDb(), actor, id);
-  const units = (await getCurrentUser())?.unitSystem ?? "imperial";
+  const units = await currentUnits();
   const { paper } = parseQuery(req, querySchema);
   let pdf;
   try {
-    pdf = await sheetPdf(rec, units, paper);
+    pdf = await sheetPdf(rec, units, paper, await requestLocale());
   } catch (err) {
     console.error("[pdf]", err);
     return NextResponse.json({ error: "The PDF could not be made right now. Use Print on the sheet instead, or try again in a moment." }, { status: 503 });

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { route } from "@/app/_lib/http";
 import { queueAndTry } from "@/app/_lib/mail-sender";
-import { getCurrentUser, requireActor } from "@/app/_lib/session";
+import { currentUnits, requireActor } from "@/app/_lib/session";
 import { composeSheetMail, sheetPdfAttachment } from "@/app/_lib/sheet-mail";
 import { sentVersionLink } from "@/app/_lib/share-url";
 import { getDb } from "@/db/client";
@@ -10,6 +10,7 @@ import { getRecommendation } from "@/db/repo/recommendations";
 import { takeHit } from "@/db/repo/rate-limits";
 import { recordSentVersion } from "@/db/repo/sheet-versions";
 import { getShopTerms } from "@/db/repo/shop";
+import { requestLocale } from "@/app/_lib/locale";
 
 type Ctx = { params: Promise<{ id: string }> };
 
@@ -28,14 +29,15 @@ export const POST = route(async (_req, { params }: Ctx) => {
   const draft = await getRecommendation(db, actor, id);
   if (!draft.customerEmail) throw new FieldError("customerEmail", "Add the customer's e-mail address to the sheet before sending it.");
   const to = draft.customerEmail;
-  const unitSystem = (await getCurrentUser())?.unitSystem ?? "imperial";
+  const unitSystem = await currentUnits();
   const allowed = (await takeHit(db, `mail-account:${actor.id}`, 100, 3600_000)) && (await takeHit(db, `mail-to:${to.toLowerCase()}`, 10, 3600_000));
   if (!allowed) return NextResponse.json({ error: "Too many e-mails were sent in the last hour; try again later." }, { status: 429, headers: { "Retry-After": "600" } });
   const version = await recordSentVersion(db, actor, draft, (await getShopTerms(db)).currency);
   // Read again: the send moved the sheet's share version, which the PDF's print token must carry.
   const rec = await getRecommendation(db, actor, id);
   const link = sentVersionLink(version, unitSystem);
-  const [{ mail }, pdf] = await Promise.all([composeSheetMail(db, rec, unitSystem, link), sheetPdfAttachment(rec, unitSystem)]);
+  const locale = await requestLocale();
+  const [{ mail }, pdf] = await Promise.all([composeSheetMail(db, rec, unitSystem, link, locale), sheetPdfAttachment(rec, unitSystem, locale)]);
   const attachments = pdf ? [{ filename: pdf.filename, contentType: pdf.contentType, base64: pdf.content.toString("base64") }] : undefined;
   const sent = await queueAndTry({ to, ...mail, attachments, purpose: `recommendation:${id}` }, db);
   if (sent.status !== "sent") {
