@@ -14,8 +14,9 @@ describe("datalog figures", () => {
     expect(fig("length-small", 0.07366, "imperial")).toBe("2.90");
     expect(fig("length-small", 0.07366, "metric")).toBe("73.7");
     expect(fig("speed", 12_345.6, "metric")).toBe("12,346");
-    // A kind without its own digits gets one.
-    expect(fig("power", 1000, "metric")).toBe("1.0");
+    // Other kinds as the planner shows them: power in whole kW (1,000 W = 1 kW).
+    expect(fig("power", 1000, "metric")).toBe("1");
+    expect(fig("power", 1499, "metric")).toBe("1");
     expect(fig("pressure", 6894.757, "imperial", 0)).toBe("1");
   });
 

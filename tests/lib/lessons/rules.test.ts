@@ -23,7 +23,8 @@ describe("lesson records", () => {
   });
 
   it("an item is a combination id, a revision (a number from 1, or current) and a label of at most 40 characters", () => {
-    expect(stepItemInputSchema.parse(it2)).toEqual({ ...it2, revision: 2 });
+    // No what-if given: the item is shown as built (change null).
+    expect(stepItemInputSchema.parse(it2)).toEqual({ ...it2, revision: 2, change: null });
     expect(stepItemInputSchema.parse(it1).revision).toBe("current");
     expect(first(stepItemInputSchema.safeParse({ ...it1, combinationId: "x" }))).toMatchObject({ path: ["combinationId"], message: "Pick a combination." });
     expect(first(stepItemInputSchema.safeParse({ ...it1, revision: "0" }))?.path).toEqual(["revision"]);
@@ -41,7 +42,7 @@ describe("lesson records", () => {
     expect(first(stepInputSchema.safeParse({ ...step, items: [it1, it2, it1, it2, it1] }))?.message).toBe("A step compares at most four items.");
     expect(first(stepInputSchema.safeParse({ ...step, series: [] }))?.message).toBe("Pick at least one chart series.");
     expect(first(stepInputSchema.safeParse({ ...step, series: ["lap-time"] }))?.message).toBe(`Series must be one of ${LESSON_SERIES.join(", ")}.`);
-    expect(first(stepInputSchema.safeParse({ ...step, title: "" }))?.message).toBe("Give the step a title.");
+    expect(first(stepInputSchema.safeParse({ ...step, title: "" }))?.message).toBe("Give the step a title (without a number: steps are numbered for you).");
   });
 
   it("a snapshot holds a valid spec and a revision from 1", () => {
