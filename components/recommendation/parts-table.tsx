@@ -1,14 +1,11 @@
 "use client";
 // The sheet's parts list as a table: description, price each, quantity, amount, and the total.
 import type { useFieldArray, UseFormReturn } from "react-hook-form";
-import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { HeadCells, TotalFoot } from "@/components/ui/data-table";
-import type { recommendationInputSchema } from "@/lib/recommendations/rules";
 import { usePrice } from "@/components/price";
+import type { FormIn, FormOut } from "./use-recommendation-form";
 
-type FormIn = z.input<typeof recommendationInputSchema>;
-type FormOut = z.output<typeof recommendationInputSchema>;
 export type LineField = "description" | "unitPrice" | "quantity" | "partNumber";
 
 type PartsTableProps = {
