@@ -7,6 +7,7 @@ import { formatQuantity, type UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
 import type { Role } from "@/db/schema";
 import { must, type CombinationListActions, type ListedCombination } from "./use-combinations-list";
+import { FieldError } from "@/components/ui/field";
 
 export function CombinationRow(props: {
   c: ListedCombination;
@@ -70,11 +71,7 @@ export function CombinationRow(props: {
                 Cancel
               </Button>
             </div>
-            {rename.isError ? (
-              <p id={`${inputId}-error`} role="alert" className="text-xs text-danger">
-                {rename.error.message}
-              </p>
-            ) : null}
+            <FieldError id={`${inputId}-error`}>{rename.isError ? rename.error.message : null}</FieldError>
           </form>
         ) : (
           <Link href={`/combinations/${c.id}`} className="font-medium text-accent underline underline-offset-2">

@@ -7,7 +7,7 @@ import { fromSI, unitLabel, type Combination, type UnitSystem } from "@/calc";
 import { usePrice } from "@/components/price";
 import { PulleyHelp } from "@/components/pulleys/pulley-help";
 import { Button } from "@/components/ui/button";
-import { Field } from "@/components/ui/field";
+import { Field, FieldError } from "@/components/ui/field";
 import type { ShelfPulley } from "@/lib/planner/compute";
 import type { RecommendationFormState } from "./use-recommendation-form";
 
@@ -68,11 +68,7 @@ export function PulleyChoice({ state, combination, pulleys, unitSystem, initialD
               </option>
             ))}
           </select>
-          {errors.blowerPulleyDiameter ? (
-            <p id="f-blowerPulleyDiameter-error" role="alert" className="text-xs text-danger">
-              {errors.blowerPulleyDiameter.message}
-            </p>
-          ) : null}
+          <FieldError id="f-blowerPulleyDiameter-error">{errors.blowerPulleyDiameter?.message}</FieldError>
         </div>
         {ribCounts.length > 1 ? (
           <div className="flex flex-col gap-1">

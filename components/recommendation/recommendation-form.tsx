@@ -6,7 +6,7 @@
 import type { UseFormRegisterReturn } from "react-hook-form";
 import type { Combination, UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
-import { Field } from "@/components/ui/field";
+import { Field, FieldError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import type { ShelfPulley } from "@/lib/planner/compute";
 import { PartsSection } from "./parts-section";
@@ -77,11 +77,7 @@ function NotesField({ id, label, rows, registration, error }: { id: string; labe
         {label}
       </label>
       <textarea id={id} rows={rows} {...registration} aria-describedby={error ? `${id}-error` : undefined} className="rounded-md border border-line bg-panel px-2.5 py-1.5 text-sm" />
-      {error ? (
-        <p id={`${id}-error`} role="alert" className="text-xs text-danger">
-          {error}
-        </p>
-      ) : null}
+      <FieldError id={`${id}-error`}>{error}</FieldError>
     </div>
   );
 }
