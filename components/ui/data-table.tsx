@@ -97,8 +97,8 @@ export type Column<R, K extends string = string> = {
   testId?: string;
 };
 
-/** How roomy the cells are: "compact" for dense staff lists, "roomy" for the rest. */
-const PADDING = { compact: "px-2 py-1.5", roomy: "px-3 py-2" } as const;
+/** How roomy the cells are: "compact" for dense staff lists, "roomy" for the rest, "figures" for a table of results. */
+const PADDING = { compact: "px-2 py-1.5", roomy: "px-3 py-2", figures: "pr-5" } as const;
 
 export type DataTableProps<R, K extends string = string> = {
   /** Columns in order; a `false` one (a column the viewer's role does not see) is left out. */
@@ -128,6 +128,8 @@ export function DataTable<R, K extends string = string>(props: DataTableProps<R,
   const { rows, rowKey, caption, empty, loading, sort, density = "compact", className = "", headClassName = "", rowProps, renderRow, testId } = props;
   const columns = props.columns.filter((c): c is Column<R, K> => c !== false);
   const pad = PADDING[density];
+  // A table of results sits bare in its section: no frame, no rules between rows.
+  const bare = density === "figures";
   const keyOf = (c: Column<R, K>, i: number) => c.key ?? (typeof c.label === "string" ? c.label : String(i));
   const whole = (text: React.ReactNode) => (
     <EmptyRow colSpan={columns.length} className={`${pad} py-4 text-center text-muted`}>
@@ -136,10 +138,10 @@ export function DataTable<R, K extends string = string>(props: DataTableProps<R,
   );
   return (
     // relative: a visually hidden header label is absolutely placed and must scroll with the table.
-    <div className="relative overflow-x-auto rounded-md border border-line bg-panel">
-      <table className={`w-full text-sm ${className}`} aria-busy={loading || undefined} data-testid={testId}>
+    <div className={bare ? "overflow-x-auto" : "relative overflow-x-auto rounded-md border border-line bg-panel"}>
+      <table className={`${bare ? "" : "w-full"} text-sm ${className}`} aria-busy={loading || undefined} data-testid={testId}>
         <caption className="sr-only">{caption}</caption>
-        <thead className={`border-b border-line text-left ${headClassName}`}>
+        <thead className={`${bare ? "text-muted" : "border-b border-line"} text-left ${headClassName}`}>
           <tr>
             {columns.map((c, i) =>
               c.sortBy && sort ? (
@@ -158,7 +160,7 @@ export function DataTable<R, K extends string = string>(props: DataTableProps<R,
             if (renderRow) return renderRow(row);
             const extra = rowProps?.(row) ?? {};
             return (
-              <tr key={rowKey(row)} {...extra} className={`border-b border-line last:border-0 ${extra.className ?? ""}`}>
+              <tr key={rowKey(row)} {...extra} className={`${bare ? "" : "border-b border-line last:border-0"} ${extra.className ?? ""}`}>
                 {columns.map((c, i) => {
                   const own = typeof c.cellClassName === "function" ? c.cellClassName(row) : (c.cellClassName ?? "");
                   return (
