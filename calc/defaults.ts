@@ -64,22 +64,18 @@ export const FUEL_DEMO_DEFAULTS = {
   evaporatedBeforeBlower: 0,
 } as const;
 
+/**
+ * An engine as a tuner writes it down: displacement (m³), cylinders, redline (rev/min) and the VE
+ * curve as [engine speed (rev/min), VE (fraction)] pairs. Demo data and test engines use it.
+ */
+export function engineOf(displacement: number, cylinders: number, redlineRpm: number, curve: readonly (readonly [number, number])[]): Combination["engine"] {
+  return { displacement, cylinders, redlineRpm, veCurve: curve.map(([rpm, ve]) => ({ rpm, ve })) };
+}
+
 /** DEMO combination: a generic ~4.6 L V8 under a generic Roots blower, sea level, 25 °C (fresh object, SI). */
 export function exampleCombination(): Combination {
   return {
-    engine: {
-      displacement: 0.0046,
-      cylinders: 8,
-      veCurve: [
-        { rpm: 1500, ve: 0.72 },
-        { rpm: 2500, ve: 0.8 },
-        { rpm: 3500, ve: 0.86 },
-        { rpm: 4500, ve: 0.88 },
-        { rpm: 5500, ve: 0.85 },
-        { rpm: 6500, ve: 0.78 },
-      ],
-      redlineRpm: 6500,
-    },
+    engine: engineOf(0.0046, 8, 6500, [[1500, 0.72], [2500, 0.8], [3500, 0.86], [4500, 0.88], [5500, 0.85], [6500, 0.78]]),
     blower: { kind: "roots", ...BLOWER_DEMO_DEFAULTS.roots },
     drive: { crankPulleyDiameter: 0.16, blowerPulleyDiameter: 0.08, beltSlip: DRIVE_DEMO_DEFAULTS.beltSlip },
     ambient: { pressure: 101_325, temperature: cToK(25), inletLoss: 1500 },

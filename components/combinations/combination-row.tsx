@@ -9,6 +9,7 @@ import type { Role } from "@/db/schema";
 import { must, type CombinationListActions, type ListedCombination } from "./use-combinations-list";
 import { digitsOf } from "@/lib/units/format";
 import { useDates } from "@/components/locale";
+import { FieldError } from "@/components/ui/field";
 
 export function CombinationRow(props: {
   c: ListedCombination;
@@ -73,11 +74,7 @@ export function CombinationRow(props: {
                 Cancel
               </Button>
             </div>
-            {rename.isError ? (
-              <p id={`${inputId}-error`} role="alert" className="text-xs text-danger">
-                {rename.error.message}
-              </p>
-            ) : null}
+            <FieldError id={`${inputId}-error`}>{rename.isError ? rename.error.message : null}</FieldError>
           </form>
         ) : (
           <Link href={`/combinations/${c.id}`} className="font-medium text-accent underline underline-offset-2">

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import type { UnitSystem } from "@/calc";
 import { Button } from "@/components/ui/button";
-import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
+import { ACTIONS_COLUMN, DataTable } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 import { Pager } from "@/components/ui/pager";
 import type { Role } from "@/db/schema";
@@ -111,48 +111,50 @@ export function CombinationsList({ role, unitSystem, actions }: { role: Role; un
             Try again
           </Button>
         </Notice>
-      ) : data && data.items.length === 0 ? (
-        <div className="rounded-lg border border-line bg-panel p-6 text-sm">
-          {search ? (
-            <p>No combination matches “{search}”.</p>
-          ) : (
-            <p>
-              Nothing saved yet. <Link href="/combinations/new" className="underline">Start a new combination</Link> from one of the demo engines, or import a JSON file.
-            </p>
-          )}
-        </div>
       ) : data ? (
         <>
-          {/* relative: the header's visually hidden "Actions" is absolutely placed and must scroll with the table, not widen the page. */}
-          <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
-            <table className="w-full text-sm tabular-nums">
-              <caption className="sr-only">Combinations, page {data.page} of {pages}</caption>
-              <thead className="border-b border-line text-left text-muted">
-                <tr>
-                  <HeadCells
-                    cell="px-3 py-2 font-medium"
-                    columns={["Name", staff && "Customer", role !== "member" && "Owner", { label: "Engine", right: true }, "Blower", { label: "Blower pulley", right: true }, { label: "Revision", right: true }, "Last saved", ACTIONS_COLUMN]}
-                  />
-                </tr>
-              </thead>
-              <tbody>
-                {data.items.map((c) => (
-                  <Row
-                    key={c.id}
-                    c={c}
-                    role={role}
-                    staff={staff}
-                    unitSystem={unitSystem}
-                    rename={actions.rename}
-                    onRenamed={() => void refresh()}
-                    onDuplicate={() => duplicate.mutate(c)}
-                    onDelete={() => remove.mutate(c)}
-                    busy={(duplicate.isPending && duplicate.variables?.id === c.id) || (remove.isPending && remove.variables?.id === c.id)}
-                  />
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <DataTable
+            caption={`Combinations, page ${data.page} of ${pages}`}
+            density="roomy"
+            className="tabular-nums"
+            headClassName="text-muted"
+            rows={data.items}
+            rowKey={(c) => c.id}
+            empty={
+              search ? (
+                <>No combination matches “{search}”.</>
+              ) : (
+                <>
+                  Nothing saved yet. <Link href="/combinations/new" className="underline">Start a new combination</Link> from one of the demo engines, or import a JSON file.
+                </>
+              )
+            }
+            columns={[
+              { label: "Name" },
+              staff && { label: "Customer" },
+              role !== "member" && { label: "Owner" },
+              { label: "Engine", align: "right" },
+              { label: "Blower" },
+              { label: "Blower pulley", align: "right" },
+              { label: "Revision", align: "right" },
+              { label: "Last saved" },
+              ACTIONS_COLUMN,
+            ]}
+            renderRow={(c) => (
+              <Row
+                key={c.id}
+                c={c}
+                role={role}
+                staff={staff}
+                unitSystem={unitSystem}
+                rename={actions.rename}
+                onRenamed={() => void refresh()}
+                onDuplicate={() => duplicate.mutate(c)}
+                onDelete={() => remove.mutate(c)}
+                busy={(duplicate.isPending && duplicate.variables?.id === c.id) || (remove.isPending && remove.variables?.id === c.id)}
+              />
+            )}
+          />
           <Pager label="Combinations" ariaLabel="Pages" page={page} pageSize={data.pageSize} total={data.total} onPage={setPage} noun={["combination", "combinations"]}>
             {list.isFetching ? <span className="ml-2 text-muted">updating…</span> : null}
           </Pager>

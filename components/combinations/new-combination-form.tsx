@@ -1,7 +1,7 @@
 "use client";
 import { useActionState, useState } from "react";
 import { Button } from "@/components/ui/button";
-import { Field } from "@/components/ui/field";
+import { Field, FieldError } from "@/components/ui/field";
 import type { ActionState } from "@/lib/action-state";
 import { unitLabel, unitsToParam, type UnitSystem } from "@/calc";
 import { MAIN_FIGURES } from "@/lib/combinations/main-figures";
@@ -51,11 +51,7 @@ export function NewCombinationForm({ templates, units, staff, createAction }: Ne
             <span className="block text-xs text-muted">Your main figures below (all of them); generic defaults for the rest, to check in the planner.</span>
           </span>
         </label>
-        {fe.template ? (
-          <p id="template-error" role="alert" className="text-xs text-danger">
-            {fe.template.join(" ")}
-          </p>
-        ) : null}
+        <FieldError id="template-error">{fe.template?.join(" ")}</FieldError>
       </fieldset>
 
       <input type="hidden" name="units" value={unitsToParam(units)} />

@@ -8,6 +8,7 @@ import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "
 import { ApiError, apiJson } from "@/components/client-json";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { DataTable } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 import { fitVe, pulleyComparison, smallerPulleys, withFittedVe, type VeFit } from "@/lib/datalogs/analysis";
 import { CleaningControls } from "./cleaning-controls";
@@ -124,35 +125,22 @@ export function CalibrateView(props: CalibrateViewProps) {
               ]}
             />
             <div className="overflow-x-auto">
-              <table className="text-sm" aria-label="Stored and fitted volumetric efficiency with residuals">
-                <thead>
-                  <tr className="text-left text-muted">
-                    <th className="pr-5 font-medium">Engine speed (rpm)</th>
-                    <th className="pr-5 text-right font-medium">Stored VE (%)</th>
-                    <th className="pr-5 text-right font-medium">Fitted VE (%)</th>
-                    <th className="pr-5 text-right font-medium">Change (%)</th>
-                    <th className="pr-5 text-right font-medium">Measured boost ({pUnit})</th>
-                    <th className="pr-5 text-right font-medium">Fitted model ({pUnit})</th>
-                    <th className="pr-5 text-right font-medium">Residual ({pUnit})</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {fit.fit.rows.map((r, i) => {
-                    const res = fit.fit.residuals[i];
-                    return (
-                      <tr key={r.rpm}>
-                        <td className="pr-5">{rpmText(r.rpm)}</td>
-                        <td className="pr-5 text-right">{(100 * r.oldVe).toFixed(1)}</td>
-                        <td className="pr-5 text-right">{(100 * r.fittedVe).toFixed(1)}</td>
-                        <td className="pr-5 text-right">{`${r.fittedVe >= r.oldVe ? "+" : ""}${(100 * (r.fittedVe / r.oldVe - 1)).toFixed(1)}`}</td>
-                        <td className="pr-5 text-right">{fig("pressure", res.measuredBoostGauge, unitSystem)}</td>
-                        <td className="pr-5 text-right">{fig("pressure", res.predictedBoostGauge, unitSystem)}</td>
-                        <td className="pr-5 text-right">{fig("pressure", res.boostResidual, unitSystem, 3)}</td>
-                      </tr>
-                    );
-                  })}
-                </tbody>
-              </table>
+              <DataTable
+                density="figures"
+                caption="Stored and fitted volumetric efficiency with residuals"
+                rows={fit.fit.rows.map((r, i) => ({ ...r, res: fit.fit.residuals[i] }))}
+                rowKey={(r) => String(r.rpm)}
+                empty="No rows."
+                columns={[
+                  { label: "Engine speed (rpm)", cell: (r) => rpmText(r.rpm) },
+                  { label: "Stored VE (%)", align: "right", cell: (r) => (100 * r.oldVe).toFixed(1) },
+                  { label: "Fitted VE (%)", align: "right", cell: (r) => (100 * r.fittedVe).toFixed(1) },
+                  { label: "Change (%)", align: "right", cell: (r) => `${r.fittedVe >= r.oldVe ? "+" : ""}${(100 * (r.fittedVe / r.oldVe - 1)).toFixed(1)}` },
+                  { label: `Measured boost (${pUnit})`, align: "right", cell: (r) => fig("pressure", r.res.measuredBoostGauge, unitSystem) },
+                  { label: `Fitted model (${pUnit})`, align: "right", cell: (r) => fig("pressure", r.res.predictedBoostGauge, unitSystem) },
+                  { label: `Residual (${pUnit})`, align: "right", cell: (r) => fig("pressure", r.res.boostResidual, unitSystem, 3) },
+                ]}
+              />
               <p className="mt-1 text-xs text-muted">
                 Outside the logged speeds ({rpmText(range[0])}–{rpmText(range[1])} rpm) the log says nothing: the saved curve keeps the stored curve&apos;s shape there, scaled to meet
                 the fit at its ends (the &ldquo;Saved&rdquo; line), so it is not flat.
@@ -166,33 +154,32 @@ export function CalibrateView(props: CalibrateViewProps) {
             </h2>
             <Field className="max-w-xs" label="At engine speed" name="ladderRpm" unit="rpm" inputMode="numeric" value={rpmText_} onChange={(e) => setRpmText(e.target.value)} errors={rpmError} />
             {ladder ? (
-              <div className="overflow-x-auto">
-                <table className="text-sm" aria-label="Boost per blower pulley with the stored and the measured engine">
-                  <thead>
-                    <tr className="text-left text-muted">
-                      <th className="pr-5 font-medium">Blower pulley ({dUnit})</th>
-                      <th className="pr-5 text-right font-medium">Boost, stored VE ({pUnit})</th>
-                      <th className="pr-5 text-right font-medium">Boost, measured engine ({pUnit})</th>
-                      <th className="pr-5 text-right font-medium">Blower speed (rpm)</th>
-                      <th className="pr-5 font-medium">Warnings</th>
-                    </tr>
-                  </thead>
-                  <tbody>
-                    {ladder.map((r, i) => (
-                      <tr key={r.diameter}>
-                        <td className="pr-5">
-                          {fig("length-small", r.diameter, unitSystem)}
-                          {i === 0 ? <span className="text-muted"> (current)</span> : null}
-                        </td>
-                        <td className="pr-5 text-right">{fig("pressure", r.oldBoost, unitSystem)}</td>
-                        <td className="pr-5 text-right">{fig("pressure", r.measuredBoost, unitSystem)}</td>
-                        <td className="pr-5 text-right">{rpmText(r.blowerRpm)}</td>
-                        <td className="pr-5 text-warn">{[r.overspeed ? "blower over its speed limit at redline" : null, r.belowBeltMinimum ? "below the belt's minimum diameter" : null].filter(Boolean).join("; ")}</td>
-                      </tr>
-                    ))}
-                  </tbody>
-                </table>
-              </div>
+              <DataTable
+                density="figures"
+                caption="Boost per blower pulley with the stored and the measured engine"
+                rows={ladder.map((r, i) => ({ ...r, current: i === 0 }))}
+                rowKey={(r) => String(r.diameter)}
+                empty="No pulleys."
+                columns={[
+                  {
+                    label: `Blower pulley (${dUnit})`,
+                    cell: (r) => (
+                      <>
+                        {fig("length-small", r.diameter, unitSystem)}
+                        {r.current ? <span className="text-muted"> (current)</span> : null}
+                      </>
+                    ),
+                  },
+                  { label: `Boost, stored VE (${pUnit})`, align: "right", cell: (r) => fig("pressure", r.oldBoost, unitSystem) },
+                  { label: `Boost, measured engine (${pUnit})`, align: "right", cell: (r) => fig("pressure", r.measuredBoost, unitSystem) },
+                  { label: "Blower speed (rpm)", align: "right", cell: (r) => rpmText(r.blowerRpm) },
+                  {
+                    label: "Warnings",
+                    cellClassName: "text-warn",
+                    cell: (r) => [r.overspeed ? "blower over its speed limit at redline" : null, r.belowBeltMinimum ? "below the belt's minimum diameter" : null].filter(Boolean).join("; "),
+                  },
+                ]}
+              />
             ) : null}
           </section>
 

@@ -1,7 +1,7 @@
 "use client";
 // Step 4 of the log upload: what will be stored, and every line that cannot be read.
 import type { UnitSystem } from "@/calc";
-import { HeadCells } from "@/components/ui/data-table";
+import { DataTable } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 import { fig, rpmText } from "@/lib/datalogs/format";
 import type { parseLog } from "@/lib/datalogs/parse";
@@ -47,31 +47,22 @@ export function LogPreview({ parsed, skip, ambientPa, unitSystem, pressureUnit, 
         </Notice>
       ) : null}
       {r && r.points.length ? (
-        <div className="overflow-x-auto">
-          <table className="text-sm" aria-label="First rows as they will be stored">
-            <thead>
-              <tr className="text-left text-muted">
-                <HeadCells
-                  cell="pr-4 font-medium"
-                  columns={["Line", "Engine speed (rpm)", `Boost (${pressureUnit})`, `Manifold absolute (${pressureUnit})`, `Intake air (${temperatureUnit})`, "Throttle (%)", "Time (s)"]}
-                />
-              </tr>
-            </thead>
-            <tbody>
-              {r.points.slice(0, 8).map((p) => (
-                <tr key={p.line}>
-                  <td className="pr-4">{p.line}</td>
-                  <td className="pr-4">{rpmText(p.rpm)}</td>
-                  <td className="pr-4">{fig("pressure", p.manifoldPressure - ambientPa, unitSystem)}</td>
-                  <td className="pr-4">{fig("pressure", p.manifoldPressure, unitSystem)}</td>
-                  <td className="pr-4">{fig("temperature", p.intakeTemperature, unitSystem)}</td>
-                  <td className="pr-4">{p.throttle ?? "—"}</td>
-                  <td className="pr-4">{p.time ?? "—"}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          density="figures"
+          caption="First rows as they will be stored"
+          rows={r.points.slice(0, 8)}
+          rowKey={(p) => String(p.line)}
+          empty="No rows."
+          columns={[
+            { label: "Line", cell: (p) => p.line },
+            { label: "Engine speed (rpm)", cell: (p) => rpmText(p.rpm) },
+            { label: `Boost (${pressureUnit})`, cell: (p) => fig("pressure", p.manifoldPressure - ambientPa, unitSystem) },
+            { label: `Manifold absolute (${pressureUnit})`, cell: (p) => fig("pressure", p.manifoldPressure, unitSystem) },
+            { label: `Intake air (${temperatureUnit})`, cell: (p) => fig("temperature", p.intakeTemperature, unitSystem) },
+            { label: "Throttle (%)", cell: (p) => p.throttle ?? "—" },
+            { label: "Time (s)", cell: (p) => p.time ?? "—" },
+          ]}
+        />
       ) : null}
     </section>
   );

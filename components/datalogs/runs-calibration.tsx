@@ -6,7 +6,7 @@ import { unitLabel, type Combination, type UnitSystem } from "@/calc";
 import { cleanLog, type CleaningOptions, type LogAmbient, type LogPoint } from "@/lib/datalogs/parse";
 import { fitRuns, predictNextPulley, type LogRun } from "@/lib/datalogs/runs";
 import { fig, rpmText } from "@/lib/datalogs/format";
-import { HeadCells } from "@/components/ui/data-table";
+import { DataTable } from "@/components/ui/data-table";
 import { Notice } from "@/components/ui/notice";
 
 export type CalibrationLog = { id: string; name: string; revision: number; blowerPulleyDiameter: number; points: LogPoint[]; ambient: LogAmbient };
@@ -71,29 +71,20 @@ export function RunsCalibration({ thisLogId, logs, current, options, unitSystem,
               ),
             )}
           </ul>
-          <div className="overflow-x-auto">
-            <table className="text-sm" aria-label="Residuals before and after the fit">
-              <thead>
-                <tr className="text-left text-muted">
-                  <HeadCells
-                    cell="pr-5 font-medium"
-                    columns={["Pulley", "Engine speed (rpm)", ...[`Measured (${pUnit})`, `Residual before (${pUnit})`, `Residual after (${pUnit})`].map((label) => ({ label, key: label, right: true }))]}
-                  />
-                </tr>
-              </thead>
-              <tbody>
-                {fit.residuals.map((r) => (
-                  <tr key={`${r.run}-${r.rpm}`}>
-                    <td className="pr-5">{fig("length-small", r.blowerPulleyDiameter, unitSystem)}</td>
-                    <td className="pr-5">{rpmText(r.rpm)}</td>
-                    <td className="pr-5 text-right">{fig("pressure", r.measuredBoostGauge, unitSystem)}</td>
-                    <td className="pr-5 text-right">{fig("pressure", r.residualBefore, unitSystem, 3)}</td>
-                    <td className="pr-5 text-right">{fig("pressure", r.residualAfter, unitSystem, 3)}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <DataTable
+            density="figures"
+            caption="Residuals before and after the fit"
+            rows={fit.residuals}
+            rowKey={(r) => `${r.run}-${r.rpm}`}
+            empty="No residuals."
+            columns={[
+              { label: "Pulley", cell: (r) => fig("length-small", r.blowerPulleyDiameter, unitSystem) },
+              { label: "Engine speed (rpm)", cell: (r) => rpmText(r.rpm) },
+              { label: `Measured (${pUnit})`, align: "right", cell: (r) => fig("pressure", r.measuredBoostGauge, unitSystem) },
+              { label: `Residual before (${pUnit})`, align: "right", cell: (r) => fig("pressure", r.residualBefore, unitSystem, 3) },
+              { label: `Residual after (${pUnit})`, align: "right", cell: (r) => fig("pressure", r.residualAfter, unitSystem, 3) },
+            ]}
+          />
           {next ? (
             <p className="text-sm" data-testid="next-pulley">
               Next pulley, {fig("length-small", next.diameter, unitSystem)} {unitLabel("length-small", unitSystem)}, at {rpmText(topRpm)} rpm:{" "}

@@ -5,6 +5,7 @@ import type { UseFormReturn } from "react-hook-form";
 import type { UnitSystem } from "@/calc";
 import type { PlannerForm } from "@/lib/combinations/form-model";
 import type { ShelfBlower } from "@/lib/planner/compute";
+import { AdvancedSection } from "./advanced-section";
 import { AmbientSection, BlowerSection } from "./editor-sections";
 import { EditorBox, grid } from "./editor-box";
 import { NumField } from "./num-field";
@@ -17,7 +18,6 @@ export type EditorProps = {
   blowers: ShelfBlower[];
   values: PlannerForm;
 };
-
 
 export function Editor({ form, system, errors, blowers, values }: EditorProps) {
   const { register } = form;
@@ -70,6 +70,7 @@ export function Editor({ form, system, errors, blowers, values }: EditorProps) {
           </div>
         ) : null}
       </EditorBox>
+      <AdvancedSection form={form} system={system} errors={errors} values={values} />
     </div>
   );
 }

@@ -1,14 +1,12 @@
 "use client";
 // The sheet's parts list as a table: description, price each, quantity, amount, and the total.
 import type { useFieldArray, UseFormReturn } from "react-hook-form";
-import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { HeadCells, TotalFoot } from "@/components/ui/data-table";
-import type { recommendationInputSchema } from "@/lib/recommendations/rules";
 import { usePrice } from "@/components/price";
+import type { FormIn, FormOut } from "./use-recommendation-form";
+import { FieldError } from "@/components/ui/field";
 
-type FormIn = z.input<typeof recommendationInputSchema>;
-type FormOut = z.output<typeof recommendationInputSchema>;
 export type LineField = "description" | "unitPrice" | "quantity" | "partNumber";
 
 type PartsTableProps = {
@@ -58,11 +56,7 @@ export function PartsTable({ form, lines, watched, amounts, total, lineError }: 
                   className="w-full rounded-md border border-line bg-panel px-2 py-1 read-only:border-transparent read-only:bg-transparent"
                 />
                 {fromShelf ? <span className="text-xs text-muted">{watched[i]?.partNumber} · shelf price</span> : null}
-                {lineError(i, "description") || lineError(i, "partNumber") ? (
-                  <p id={`line-${i}-description-error`} role="alert" className="text-xs text-danger">
-                    {lineError(i, "description") ?? lineError(i, "partNumber")}
-                  </p>
-                ) : null}
+                <FieldError id={`line-${i}-description-error`}>{lineError(i, "description") || lineError(i, "partNumber")}</FieldError>
               </td>
               <td className="py-1 pr-2 text-right">
                 <label htmlFor={`line-${i}-price`} className="sr-only">
@@ -77,11 +71,7 @@ export function PartsTable({ form, lines, watched, amounts, total, lineError }: 
                   aria-describedby={lineError(i, "unitPrice") ? `line-${i}-price-error` : undefined}
                   className="w-full rounded-md border border-line bg-panel px-2 py-1 text-right read-only:border-transparent read-only:bg-transparent"
                 />
-                {lineError(i, "unitPrice") ? (
-                  <p id={`line-${i}-price-error`} role="alert" className="text-xs text-danger">
-                    {lineError(i, "unitPrice")}
-                  </p>
-                ) : null}
+                <FieldError id={`line-${i}-price-error`}>{lineError(i, "unitPrice")}</FieldError>
               </td>
               <td className="py-1 pr-2 text-right">
                 <label htmlFor={`line-${i}-quantity`} className="sr-only">
@@ -95,11 +85,7 @@ export function PartsTable({ form, lines, watched, amounts, total, lineError }: 
                   aria-describedby={lineError(i, "quantity") ? `line-${i}-quantity-error` : undefined}
                   className="w-full rounded-md border border-line bg-panel px-2 py-1 text-right"
                 />
-                {lineError(i, "quantity") ? (
-                  <p id={`line-${i}-quantity-error`} role="alert" className="text-xs text-danger">
-                    {lineError(i, "quantity")}
-                  </p>
-                ) : null}
+                <FieldError id={`line-${i}-quantity-error`}>{lineError(i, "quantity")}</FieldError>
               </td>
               <td className="py-1 text-right num">{amounts[i] == null ? "–" : price(amounts[i]!)}</td>
               <td className="py-1 text-right">

@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { fromSI, unitLabel, type UnitSystem } from "@/calc";
 import { apiJson, queryString } from "@/components/client-json";
-import { EmptyRow, HeadCells } from "@/components/ui/data-table";
+import { DataTable } from "@/components/ui/data-table";
 import { Pager } from "@/components/ui/pager";
 import { SelectField } from "@/components/ui/select-field";
 import { Notice } from "@/components/ui/notice";
@@ -72,47 +72,40 @@ export function RecommendationsList({ unitSystem }: { unitSystem: UnitSystem }) 
         />
       </div>
       {q.isError ? <Notice tone="danger">{q.error.message}</Notice> : null}
-      <div className="relative overflow-x-auto rounded-md border border-line bg-panel">
-        <table className="w-full text-sm" aria-busy={q.isFetching}>
-          <caption className="sr-only">Recommendation sheets</caption>
-          <thead className="border-b border-line text-left">
-            <tr>
-              <th scope="col" className="px-2 py-1.5 font-medium">Customer</th>
-              <th scope="col" className="px-2 py-1.5 font-medium">Combination</th>
-              <th scope="col" className="px-2 py-1.5 text-right font-medium">
-                Pulley <span className="font-normal text-muted">({unitLabel("length-small", unitSystem)})</span>
-              </th>
-              <HeadCells cell="px-2 py-1.5 font-medium" columns={["Status", { label: "Total", right: true }, "Updated", "By"]} />
-            </tr>
-          </thead>
-          <tbody>
-            {q.data?.rows.map((r) => (
-              <tr key={r.id} className="border-b border-line last:border-0">
-                <td className="px-2 py-1.5">
-                  <Link href={`/recommendations/${r.id}`} className="font-medium underline">
-                    {r.customerName}
-                  </Link>
-                  {r.title ? <span className="block text-xs">{r.title}</span> : null}
-                  {r.customerEmail ? <span className="block text-xs text-muted">{r.customerEmail}</span> : null}
-                </td>
-                <td className="px-2 py-1.5">
-                  {r.combinationName} <span className="text-xs text-muted">rev. {r.revision}</span>
-                </td>
-                <td className="px-2 py-1.5 text-right">{fromSI("length-small", r.blowerPulleyDiameter, unitSystem).toFixed(digitsOf("length-small", unitSystem))}</td>
-                <td className="px-2 py-1.5 capitalize">{r.status}</td>
-                <td className="px-2 py-1.5 text-right">{price(r.total)}</td>
-                <td className="px-2 py-1.5">{dates.date(r.updatedAt)}</td>
-                <td className="px-2 py-1.5">{r.authorName}</td>
-              </tr>
-            ))}
-            {q.data && q.data.rows.length === 0 ? (
-              <EmptyRow colSpan={7} className="px-2 py-4 text-center text-muted">
-                No sheets match.
-              </EmptyRow>
-            ) : null}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        caption="Recommendation sheets"
+        rows={q.data?.rows}
+        rowKey={(r) => r.id}
+        loading={q.isFetching}
+        empty="No sheets match."
+        columns={[
+          {
+            label: "Customer",
+            cell: (r) => (
+              <>
+                <Link href={`/recommendations/${r.id}`} className="font-medium underline">
+                  {r.customerName}
+                </Link>
+                {r.title ? <span className="block text-xs">{r.title}</span> : null}
+                {r.customerEmail ? <span className="block text-xs text-muted">{r.customerEmail}</span> : null}
+              </>
+            ),
+          },
+          {
+            label: "Combination",
+            cell: (r) => (
+              <>
+                {r.combinationName} <span className="text-xs text-muted">rev. {r.revision}</span>
+              </>
+            ),
+          },
+          { label: "Pulley", unit: unitLabel("length-small", unitSystem), align: "right", cell: (r) => fromSI("length-small", r.blowerPulleyDiameter, unitSystem).toFixed(digitsOf("length-small", unitSystem)) },
+          { label: "Status", cellClassName: "capitalize", cell: (r) => r.status },
+          { label: "Total", align: "right", cell: (r) => price(r.total) },
+          { label: "Updated", cell: (r) => dates.date(r.updatedAt) },
+          { label: "By", cell: (r) => r.authorName },
+        ]}
+      />
       {q.data ? <Pager label="Recommendations" page={page} pageSize={pageSize} total={q.data.total} onPage={setPage} /> : null}
     </div>
   );

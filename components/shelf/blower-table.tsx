@@ -39,7 +39,7 @@ function columns(system: UnitSystem, price: (amount: string) => string): ShelfCo
     { label: "Speed limit", unit: "rpm", sortBy: "maxRpm", align: "right", cell: (b) => rpm(b.maxRpm) },
     {
       label: "Efficiencies",
-      note: "VE @ rpm / internal / drive",
+      unit: "VE @ rpm / internal / drive",
       title: "Reference volumetric efficiency at the reference speed; internal and drive efficiencies",
       align: "right",
       cell: (b) => `${pct(b.volumetricEfficiencyRef)} @ ${rpm(b.referenceRpm)} / ${pct(b.internalEfficiency)} / ${pct(b.mechanicalEfficiency)}`,

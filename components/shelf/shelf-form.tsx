@@ -9,6 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { ApiError, apiJson } from "@/components/client-json";
 import type { ShelfKind } from "./shelf-list";
+import { FieldError } from "@/components/ui/field";
 
 /** The submit handler: POST a new part or PUT an edited one, then refresh every shelf list. */
 export function useShelfSave<In extends FieldValues, Out extends { partNumber: string }>(
@@ -83,11 +84,7 @@ export function FormSelect({ id, label, field, error, options }: { id: string; l
           </option>
         ))}
       </select>
-      {error ? (
-        <p id={`${id}-error`} role="alert" className="text-xs text-danger">
-          {error}
-        </p>
-      ) : null}
+      <FieldError id={`${id}-error`}>{error}</FieldError>
     </div>
   );
 }

@@ -7,24 +7,13 @@ import { useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { apiJson, queryString } from "@/components/client-json";
-import { SortHeader, type SortState } from "@/components/ui/data-table";
+import { ACTIONS_COLUMN, DataTable, type Column, type SortState } from "@/components/ui/data-table";
 import { Pager } from "@/components/ui/pager";
 
 export type ShelfKind = "blowers" | "pulleys";
 
 /** A column: its header (sortable when `sortBy` is given) and how a row fills its cell. */
-export type ShelfColumn<Row, Sort extends string> = {
-  label: string;
-  unit?: string;
-  /** Shown after the label in the muted style, for headers that need a word of explanation. */
-  note?: string;
-  title?: string;
-  sortBy?: Sort;
-  align?: "left" | "right";
-  cell: (row: Row) => ReactNode;
-  cellClassName?: (row: Row) => string;
-  testId?: string;
-};
+export type ShelfColumn<Row, Sort extends string> = Column<Row, Sort>;
 
 type Part = { id: string; partNumber: string };
 type PageOf<T> = { rows: T[]; total: number; page: number; pageSize: number };
@@ -83,16 +72,6 @@ export function ShelfList<Row extends Part, Sort extends string>(props: Props<Ro
     }
   }
 
-  const span = columns.length + (isAdmin ? 1 : 0);
-  const wholeRow = (text: string) => (
-    <tr>
-      <td colSpan={span} className="px-2 py-4 text-center text-muted">
-        {text}
-      </td>
-    </tr>
-  );
-  const alignClass = (c: ShelfColumn<Row, Sort>) => (c.align === "right" ? "text-right" : "text-left");
-
   return (
     <section aria-labelledby={`${kind}-heading`} className="flex flex-col gap-3">
       <h2 id={`${kind}-heading`} className="sr-only">
@@ -141,53 +120,33 @@ export function ShelfList<Row extends Part, Sort extends string>(props: Props<Ro
         </div>
       ) : null}
       {q.isError ? <Notice tone="danger">{q.error.message}</Notice> : null}
-      <div className="relative overflow-x-auto rounded-md border border-line bg-panel">
-        <table className="w-full text-sm" aria-busy={q.isFetching}>
-          <caption className="sr-only">{many} on the shelf</caption>
-          <thead className="border-b border-line">
-            <tr>
-              {columns.map((c) =>
-                c.sortBy ? (
-                  <SortHeader key={c.label} label={c.label} unit={c.unit} column={c.sortBy} state={sort} onChange={setSort} align={c.align} />
-                ) : (
-                  <th key={c.label} scope="col" title={c.title} className={`px-2 py-1.5 font-medium ${alignClass(c)}`}>
-                    {c.label}
-                    {c.unit || c.note ? <span className="font-normal text-muted"> ({c.unit ?? c.note})</span> : null}
-                  </th>
-                ),
-              )}
-              {isAdmin ? (
-                <th scope="col" className="px-2 py-1.5">
-                  <span className="sr-only">Actions</span>
-                </th>
-              ) : null}
-            </tr>
-          </thead>
-          <tbody>
-            {q.data?.rows.map((row) => (
-              <tr key={row.id} className={`border-b border-line last:border-0 ${props.rowClassName ?? ""}`} data-part={row.partNumber}>
-                {columns.map((c) => (
-                  <td key={c.label} className={`px-2 py-1.5 ${c.align === "right" ? "text-right" : ""} ${c.cellClassName?.(row) ?? ""}`} data-testid={c.testId}>
-                    {c.cell(row)}
-                  </td>
-                ))}
-                {isAdmin ? (
-                  <td className="whitespace-nowrap px-2 py-1.5 text-right">
-                    <Button type="button" variant="ghost" onClick={() => setEditing(row)} aria-label={`Edit ${row.partNumber}`}>
-                      Edit
-                    </Button>
-                    <Button type="button" variant="ghost" onClick={() => remove(row)} aria-label={`Remove ${row.partNumber}`}>
-                      Remove
-                    </Button>
-                  </td>
-                ) : null}
-              </tr>
-            ))}
-            {q.data && q.data.rows.length === 0 ? wholeRow(`No ${many.toLowerCase()} match.`) : null}
-            {q.isPending ? wholeRow("Loading…") : null}
-          </tbody>
-        </table>
-      </div>
+      <DataTable
+        caption={`${many} on the shelf`}
+        rows={q.data?.rows}
+        rowKey={(row) => row.id}
+        loading={q.isFetching}
+        empty={`No ${many.toLowerCase()} match.`}
+        sort={{ state: sort, onChange: setSort }}
+        rowProps={(row) => ({ className: props.rowClassName, "data-part": row.partNumber })}
+        columns={[
+          ...columns,
+          isAdmin && {
+            ...ACTIONS_COLUMN,
+            align: "right",
+            cellClassName: "whitespace-nowrap",
+            cell: (row: Row) => (
+              <>
+                <Button type="button" variant="ghost" onClick={() => setEditing(row)} aria-label={`Edit ${row.partNumber}`}>
+                  Edit
+                </Button>
+                <Button type="button" variant="ghost" onClick={() => remove(row)} aria-label={`Remove ${row.partNumber}`}>
+                  Remove
+                </Button>
+              </>
+            ),
+          },
+        ]}
+      />
       {q.data ? <Pager label={many} page={page} pageSize={PAGE_SIZE} total={q.data.total} onPage={setPage} /> : null}
     </section>
   );

@@ -8,6 +8,16 @@ type FieldProps = InputHTMLAttributes<HTMLInputElement> & {
   errors?: string[] | string;
 };
 
+/** A field's error message, tied to it by `id` (its `aria-describedby`); nothing when there is none. */
+export function FieldError({ id, children }: { id?: string; children: ReactNode }) {
+  if (!children) return null;
+  return (
+    <p id={id} role="alert" className="text-xs text-danger">
+      {children}
+    </p>
+  );
+}
+
 /** A labelled input with its unit and its error messages tied to it for screen readers. */
 export function Field({ label, name, unit, hint, errors, id, className = "", ...input }: FieldProps) {
   const inputId = id ?? `f-${name}`;
@@ -39,11 +49,7 @@ export function Field({ label, name, unit, hint, errors, id, className = "", ...
           {hint}
         </p>
       ) : null}
-      {list.length ? (
-        <p id={errorId} className="text-xs text-danger" role="alert">
-          {list.join(" ")}
-        </p>
-      ) : null}
+      <FieldError id={errorId}>{list.join(" ")}</FieldError>
     </div>
   );
 }

@@ -5,7 +5,7 @@
 // - a 7.4 L V8 on a twin-screw: an intercooler added, then larger injectors;
 // - a 5.7 L vintage V8 on a draw-through Roots under a carburettor: a cam-only change;
 // - a 2.4 L four-cylinder road car on a small twin-screw: its owner moves to altitude.
-import type { CombinationInput } from "@/calc";
+import { BLOWER_DEMO_DEFAULTS, engineOf, type CombinationInput } from "@/calc";
 
 const inch = 0.0254;
 const litre = 0.001;
@@ -16,32 +16,13 @@ const lbPerHour = (x: number) => (x * 0.45359237) / 3600;
 /** cfm in m³/s. */
 const cfm = (x: number) => x * 0.00047194745;
 
+// Blowers start from their kind's demo defaults (calc/defaults.ts) and state only where they differ.
 const seaLevel = { pressure: 101_325, temperature: 298.15, inletLoss: 1_500 };
 
 /** Work truck: a 4.3 L V6 under a 1.6 L Roots, as it came in (3.4 in blower pulley). */
 export const workTruckV6: CombinationInput = {
-  engine: {
-    displacement: 4.3 * litre,
-    cylinders: 6,
-    redlineRpm: 5200,
-    veCurve: [
-      { rpm: 1500, ve: 0.8 },
-      { rpm: 2500, ve: 0.86 },
-      { rpm: 3500, ve: 0.88 },
-      { rpm: 4500, ve: 0.85 },
-      { rpm: 5200, ve: 0.8 },
-    ],
-  },
-  blower: {
-    kind: "roots",
-    displacementPerRev: 1.6 * litre,
-    builtInVolumeRatio: 1,
-    maxRpm: 14_000,
-    volumetricEfficiencyRef: 0.82,
-    referenceRpm: 10_000,
-    internalEfficiency: 0.85,
-    mechanicalEfficiency: 0.95,
-  },
+  engine: engineOf(4.3 * litre, 6, 5200, [[1500, 0.8], [2500, 0.86], [3500, 0.88], [4500, 0.85], [5200, 0.8]]),
+  blower: { kind: "roots", ...BLOWER_DEMO_DEFAULTS.roots, displacementPerRev: 1.6 * litre, maxRpm: 14_000, volumetricEfficiencyRef: 0.82, referenceRpm: 10_000 },
   drive: { crankPulleyDiameter: 6.0 * inch, blowerPulleyDiameter: 3.4 * inch, beltSlip: 0.02 },
   ambient: seaLevel,
   intercooler: null,
@@ -56,28 +37,8 @@ export const workTruckV6SmallerPulley: CombinationInput = {
 
 /** Big-inch V8: 7.4 L under a 2.9 L twin-screw, first without an intercooler. */
 export const bigInchTwinScrew: CombinationInput = {
-  engine: {
-    displacement: 7.4 * litre,
-    cylinders: 8,
-    redlineRpm: 6000,
-    veCurve: [
-      { rpm: 2000, ve: 0.82 },
-      { rpm: 3000, ve: 0.88 },
-      { rpm: 4000, ve: 0.91 },
-      { rpm: 5000, ve: 0.9 },
-      { rpm: 6000, ve: 0.84 },
-    ],
-  },
-  blower: {
-    kind: "twin-screw",
-    displacementPerRev: 2.9 * litre,
-    builtInVolumeRatio: 1.6,
-    maxRpm: 16_000,
-    volumetricEfficiencyRef: 0.92,
-    referenceRpm: 10_000,
-    internalEfficiency: 0.88,
-    mechanicalEfficiency: 0.95,
-  },
+  engine: engineOf(7.4 * litre, 8, 6000, [[2000, 0.82], [3000, 0.88], [4000, 0.91], [5000, 0.9], [6000, 0.84]]),
+  blower: { kind: "twin-screw", ...BLOWER_DEMO_DEFAULTS["twin-screw"], displacementPerRev: 2.9 * litre, maxRpm: 16_000, internalEfficiency: 0.88 },
   drive: { crankPulleyDiameter: 7.0 * inch, blowerPulleyDiameter: 3.8 * inch, beltSlip: 0.02 },
   ambient: seaLevel,
   intercooler: null,
@@ -98,28 +59,8 @@ export const bigInchLargerInjectors: CombinationInput = {
 
 /** Vintage V8: 5.7 L with a 2.3 L Roots drawing through a carburettor, mild cam. */
 export const vintageV8DrawThrough: CombinationInput = {
-  engine: {
-    displacement: 5.7 * litre,
-    cylinders: 8,
-    redlineRpm: 5500,
-    veCurve: [
-      { rpm: 1500, ve: 0.8 },
-      { rpm: 2500, ve: 0.85 },
-      { rpm: 3500, ve: 0.86 },
-      { rpm: 4500, ve: 0.82 },
-      { rpm: 5500, ve: 0.76 },
-    ],
-  },
-  blower: {
-    kind: "roots",
-    displacementPerRev: 2.3 * litre,
-    builtInVolumeRatio: 1,
-    maxRpm: 13_000,
-    volumetricEfficiencyRef: 0.8,
-    referenceRpm: 9_000,
-    internalEfficiency: 0.85,
-    mechanicalEfficiency: 0.95,
-  },
+  engine: engineOf(5.7 * litre, 8, 5500, [[1500, 0.8], [2500, 0.85], [3500, 0.86], [4500, 0.82], [5500, 0.76]]),
+  blower: { kind: "roots", ...BLOWER_DEMO_DEFAULTS.roots, displacementPerRev: 2.3 * litre, referenceRpm: 9_000 },
   drive: { crankPulleyDiameter: 7.0 * inch, blowerPulleyDiameter: 3.6 * inch, beltSlip: 0.02 },
   ambient: { ...seaLevel, inletLoss: 0, inletRestriction: { ratedFlow: cfm(1000), ratingDepression: 5079 } },
   intercooler: null,
@@ -145,28 +86,8 @@ export const vintageV8Cam: CombinationInput = {
 
 /** Road car: a 2.4 L four-cylinder under a 1.2 L twin-screw, at its owner's old home by the coast. */
 export const roadCarFour: CombinationInput = {
-  engine: {
-    displacement: 2.4 * litre,
-    cylinders: 4,
-    redlineRpm: 6800,
-    veCurve: [
-      { rpm: 2000, ve: 0.82 },
-      { rpm: 3500, ve: 0.9 },
-      { rpm: 5000, ve: 0.93 },
-      { rpm: 6000, ve: 0.9 },
-      { rpm: 6800, ve: 0.84 },
-    ],
-  },
-  blower: {
-    kind: "twin-screw",
-    displacementPerRev: 1.2 * litre,
-    builtInVolumeRatio: 1.5,
-    maxRpm: 18_000,
-    volumetricEfficiencyRef: 0.9,
-    referenceRpm: 12_000,
-    internalEfficiency: 0.86,
-    mechanicalEfficiency: 0.95,
-  },
+  engine: engineOf(2.4 * litre, 4, 6800, [[2000, 0.82], [3500, 0.9], [5000, 0.93], [6000, 0.9], [6800, 0.84]]),
+  blower: { kind: "twin-screw", ...BLOWER_DEMO_DEFAULTS["twin-screw"], displacementPerRev: 1.2 * litre, builtInVolumeRatio: 1.5, volumetricEfficiencyRef: 0.9, referenceRpm: 12_000, internalEfficiency: 0.86 },
   drive: { crankPulleyDiameter: 5.5 * inch, blowerPulleyDiameter: 3.2 * inch, beltSlip: 0.02 },
   ambient: { pressure: 101_325, temperature: 293.15, inletLoss: 1_000 },
   intercooler: { effectiveness: 0.65, pressureDrop: 5_000, coolantTemperature: 308.15 },

@@ -19,6 +19,10 @@ export type SpecField = {
   quantity: FieldQuantity;
   /** Digits shown in the summary and the diff (quantities and plain numbers). */
   digits?: number;
+  /** What the summary says where a spec leaves the field out (default "—"). */
+  absent?: string;
+  /** An optional refinement of the model (calc/README.md, "Refinements"): the editor's advanced inputs. */
+  advanced?: true;
 };
 
 /** Every field of a combination people edit, in the order the summary shows them. */
@@ -27,6 +31,9 @@ export const SPEC_FIELDS: readonly SpecField[] = [
   { path: "engine.cylinders", label: "Cylinders", quantity: "count" },
   { path: "engine.redlineRpm", label: "Redline", quantity: "speed", digits: 0 },
   { path: "engine.veCurve", label: "Volumetric efficiency curve", quantity: "ve-curve" },
+  { path: "engine.chargeTemperatureExponent", label: "Charge temperature exponent", quantity: "plain", digits: 2, absent: "model default (0.5)", advanced: true },
+  { path: "engine.compressionRatio", label: "Compression ratio", quantity: "plain", digits: 1, absent: "not given (residual gas left out)", advanced: true },
+  { path: "engine.exhaustBackPressure", label: "Exhaust back pressure (gauge)", quantity: "pressure", digits: 2, absent: "model default (0)", advanced: true },
   { path: "blower.kind", label: "Blower kind", quantity: "text" },
   { path: "blower.displacementPerRev", label: "Blower displacement", quantity: "blower-displacement", digits: 2 },
   { path: "blower.builtInVolumeRatio", label: "Built-in volume ratio", quantity: "plain", digits: 2 },
@@ -41,15 +48,19 @@ export const SPEC_FIELDS: readonly SpecField[] = [
   { path: "ambient.pressure", label: "Ambient pressure (absolute)", editorLabel: "Barometer (absolute)", quantity: "pressure", digits: 1 },
   { path: "ambient.temperature", label: "Ambient temperature", quantity: "temperature", digits: 0 },
   { path: "ambient.inletLoss", label: "Inlet pressure loss", quantity: "pressure", digits: 2 },
-  { path: "intercooler.effectiveness", label: "Intercooler effectiveness", quantity: "percent" },
-  { path: "intercooler.pressureDrop", label: "Intercooler pressure drop", quantity: "pressure", digits: 2 },
-  { path: "intercooler.coolantTemperature", label: "Intercooler coolant temperature", editorLabel: "Coolant temperature", quantity: "temperature", digits: 0 },
+  { path: "ambient.inletRestriction.ratedFlow", label: "Rated flow of the inlet", quantity: "airflow", digits: 0, absent: "no flow-rated inlet", advanced: true },
+  { path: "ambient.inletRestriction.ratingDepression", label: "Inlet rating depression", quantity: "pressure", digits: 2, absent: "model default (1.5 inHg)", advanced: true },
+  { path: "intercooler.effectiveness", label: "Intercooler effectiveness", quantity: "percent", absent: "no intercooler" },
+  { path: "intercooler.pressureDrop", label: "Intercooler pressure drop", quantity: "pressure", digits: 2, absent: "no intercooler" },
+  { path: "intercooler.coolantTemperature", label: "Intercooler coolant temperature", editorLabel: "Coolant temperature", quantity: "temperature", digits: 0, absent: "no intercooler" },
   { path: "fuel.afr", label: "Air-fuel ratio", quantity: "plain", digits: 1 },
   { path: "fuel.bsfc", label: "BSFC", quantity: "bsfc", digits: 2 },
   { path: "fuel.injectorCount", label: "Injectors", editorLabel: "Number of injectors", quantity: "count" },
   { path: "fuel.injectorFlow", label: "Injector flow (each)", editorLabel: "Flow of one injector", quantity: "injector-flow", digits: 0 },
   { path: "fuel.maxDuty", label: "Maximum injector duty", quantity: "percent" },
   { path: "fuel.evaporatedBeforeBlower", label: "Fuel evaporated before the blower", quantity: "percent" },
+  { path: "fuel.evaporatedInBlower", label: "Fuel evaporated in the blower", quantity: "percent", absent: "model default (0 %)", advanced: true },
+  { path: "fuel.evaporatedInPort", label: "Fuel evaporated in the port", quantity: "percent", absent: "model default (0 %)", advanced: true },
 ];
 
 /** Fields the editor has that the spec does not store (VE rows by "#", the altitude for the barometer). */

@@ -25,7 +25,16 @@ export type VeRow = { rpm: number; ve: number };
 
 /** The planner's form values: user units, percentages for fractions; NaN where a box is empty. */
 export type PlannerForm = {
-  engine: { displacement: number; cylinders: number; redlineRpm: number; veCurve: VeRow[] };
+  engine: {
+    displacement: number;
+    cylinders: number;
+    redlineRpm: number;
+    veCurve: VeRow[];
+    /** Optional refinements (calc/README.md): NaN leaves each out, so the model's default applies. */
+    chargeTemperatureExponent: number;
+    compressionRatio: number;
+    exhaustBackPressure: number;
+  };
   blower: {
     kind: BlowerKind;
     displacementPerRev: number;
@@ -37,7 +46,15 @@ export type PlannerForm = {
     mechanicalEfficiency: number;
   };
   drive: { crankPulleyDiameter: number; blowerPulleyDiameter: number; beltSlip: number };
-  ambient: { altitude: number; pressure: number; temperature: number; inletLoss: number };
+  ambient: {
+    altitude: number;
+    pressure: number;
+    temperature: number;
+    inletLoss: number;
+    /** A flow-rated inlet (optional refinement); its rating depression may be left empty (NaN). */
+    inletRestrictionOn: boolean;
+    inletRestriction: { ratedFlow: number; ratingDepression: number };
+  };
   intercoolerOn: boolean;
   intercooler: { effectiveness: number; pressureDrop: number; coolantTemperature: number };
   fuel: {
@@ -48,6 +65,8 @@ export type PlannerForm = {
     injectorFlow: number;
     maxDuty: number;
     evaporatedBeforeBlower: number;
+    evaporatedInBlower: number;
+    evaporatedInPort: number;
   };
 };
 
@@ -109,12 +128,19 @@ export function toSpec(f: PlannerForm, system: UnitSystem, base?: Combination): 
     const b = stored(path);
     return typeof b === "number" && fieldFromSI(kind, b, system) === n ? b : fieldToSI(kind, n, system);
   };
+  // An optional field left empty is left out again, or stays null where the stored spec said null.
+  const opt = (path: string, v: unknown) => (Number.isNaN(num(v)) ? (stored(path) === null ? null : undefined) : q(path, v));
+  const optional = (path: string, v: unknown) => opt(path, v) ?? undefined;
+  const restriction = f.ambient.inletRestriction ?? NO_RESTRICTION; // a draft kept before these fields
   return {
     engine: {
       displacement: q("engine.displacement", f.engine.displacement),
       cylinders: num(f.engine.cylinders),
       redlineRpm: num(f.engine.redlineRpm),
       veCurve: f.engine.veCurve.map((r, i) => ({ rpm: num(r.rpm), ve: q(`engine.veCurve.${i}.ve`, r.ve) })),
+      chargeTemperatureExponent: optional("engine.chargeTemperatureExponent", f.engine.chargeTemperatureExponent),
+      compressionRatio: opt("engine.compressionRatio", f.engine.compressionRatio),
+      exhaustBackPressure: optional("engine.exhaustBackPressure", f.engine.exhaustBackPressure),
     },
     blower: {
       kind: f.blower.kind,
@@ -135,6 +161,14 @@ export function toSpec(f: PlannerForm, system: UnitSystem, base?: Combination): 
       pressure: q("ambient.pressure", f.ambient.pressure),
       temperature: q("ambient.temperature", f.ambient.temperature),
       inletLoss: q("ambient.inletLoss", f.ambient.inletLoss),
+      inletRestriction: f.ambient.inletRestrictionOn
+        ? {
+            ratedFlow: q("ambient.inletRestriction.ratedFlow", restriction.ratedFlow),
+            ratingDepression: optional("ambient.inletRestriction.ratingDepression", restriction.ratingDepression),
+          }
+        : stored("ambient.inletRestriction") === null
+          ? null
+          : undefined,
     },
     intercooler: f.intercoolerOn
       ? {
@@ -150,17 +184,25 @@ export function toSpec(f: PlannerForm, system: UnitSystem, base?: Combination): 
       injectorFlow: f.fuel.injectorsOn ? q("fuel.injectorFlow", f.fuel.injectorFlow) : null,
       maxDuty: q("fuel.maxDuty", f.fuel.maxDuty),
       evaporatedBeforeBlower: q("fuel.evaporatedBeforeBlower", f.fuel.evaporatedBeforeBlower),
+      evaporatedInBlower: optional("fuel.evaporatedInBlower", f.fuel.evaporatedInBlower),
+      evaporatedInPort: optional("fuel.evaporatedInPort", f.fuel.evaporatedInPort),
     },
   };
 }
 
+const NO_RESTRICTION = { ratedFlow: Number.NaN, ratingDepression: Number.NaN };
+
 /** Demo starting values for parts a saved spec leaves out (an intercooler, injectors): invented. */
 const SPARE_INTERCOOLER = { effectiveness: 0.7, pressureDrop: 3000, coolantTemperature: 308.15 };
 const SPARE_INJECTORS = { injectorCount: 8, injectorFlow: 0.005 };
+/** About 750 cfm, rating depression left to calc's default. */
+const SPARE_INLET_RESTRICTION = { ratedFlow: 0.354, ratingDepression: undefined };
 
 /** A saved combination (SI) as form values in `system`. */
 export function toForm(spec: Combination, system: UnitSystem, altitude = 0): PlannerForm {
   const s = (path: string, v: number) => fieldFromSI(FIELD_KINDS[path], v, system);
+  const opt = (path: string, v: number | null | undefined) => (v == null ? Number.NaN : s(path, v));
+  const inlet = spec.ambient.inletRestriction ?? SPARE_INLET_RESTRICTION;
   const ic = spec.intercooler ?? SPARE_INTERCOOLER;
   const hasInjectors = spec.fuel.injectorCount != null && spec.fuel.injectorFlow != null;
   return {
@@ -169,6 +211,9 @@ export function toForm(spec: Combination, system: UnitSystem, altitude = 0): Pla
       cylinders: spec.engine.cylinders,
       redlineRpm: spec.engine.redlineRpm,
       veCurve: spec.engine.veCurve.map((p) => ({ rpm: p.rpm, ve: fieldFromSI("percent", p.ve, system) })),
+      chargeTemperatureExponent: opt("engine.chargeTemperatureExponent", spec.engine.chargeTemperatureExponent),
+      compressionRatio: opt("engine.compressionRatio", spec.engine.compressionRatio),
+      exhaustBackPressure: opt("engine.exhaustBackPressure", spec.engine.exhaustBackPressure),
     },
     blower: {
       kind: spec.blower.kind,
@@ -190,6 +235,11 @@ export function toForm(spec: Combination, system: UnitSystem, altitude = 0): Pla
       pressure: s("ambient.pressure", spec.ambient.pressure),
       temperature: s("ambient.temperature", spec.ambient.temperature),
       inletLoss: s("ambient.inletLoss", spec.ambient.inletLoss),
+      inletRestrictionOn: spec.ambient.inletRestriction != null,
+      inletRestriction: {
+        ratedFlow: s("ambient.inletRestriction.ratedFlow", inlet.ratedFlow),
+        ratingDepression: opt("ambient.inletRestriction.ratingDepression", inlet.ratingDepression),
+      },
     },
     intercoolerOn: spec.intercooler !== null,
     intercooler: {
@@ -205,6 +255,8 @@ export function toForm(spec: Combination, system: UnitSystem, altitude = 0): Pla
       injectorFlow: s("fuel.injectorFlow", spec.fuel.injectorFlow ?? SPARE_INJECTORS.injectorFlow),
       maxDuty: s("fuel.maxDuty", spec.fuel.maxDuty),
       evaporatedBeforeBlower: s("fuel.evaporatedBeforeBlower", spec.fuel.evaporatedBeforeBlower),
+      evaporatedInBlower: opt("fuel.evaporatedInBlower", spec.fuel.evaporatedInBlower),
+      evaporatedInPort: opt("fuel.evaporatedInPort", spec.fuel.evaporatedInPort),
     },
   };
 }
@@ -216,6 +268,7 @@ export function toForm(spec: Combination, system: UnitSystem, altitude = 0): Pla
  */
 export function convertForm(f: PlannerForm, from: UnitSystem, to: UnitSystem, base?: Combination): PlannerForm {
   if (unitsToParam(from) === unitsToParam(to)) return f;
+  const restriction = f.ambient.inletRestriction ?? NO_RESTRICTION;
   const c = (path: string, v: number) => {
     const kind = FIELD_KINDS[path];
     const b = storedAt(base, path);
@@ -224,7 +277,12 @@ export function convertForm(f: PlannerForm, from: UnitSystem, to: UnitSystem, ba
   };
   return {
     ...f,
-    engine: { ...f.engine, displacement: c("engine.displacement", f.engine.displacement), veCurve: f.engine.veCurve.map((r) => ({ ...r })) },
+    engine: {
+      ...f.engine,
+      displacement: c("engine.displacement", f.engine.displacement),
+      veCurve: f.engine.veCurve.map((r) => ({ ...r })),
+      exhaustBackPressure: c("engine.exhaustBackPressure", f.engine.exhaustBackPressure),
+    },
     blower: { ...f.blower, displacementPerRev: c("blower.displacementPerRev", f.blower.displacementPerRev) },
     drive: {
       ...f.drive,
@@ -232,10 +290,15 @@ export function convertForm(f: PlannerForm, from: UnitSystem, to: UnitSystem, ba
       blowerPulleyDiameter: c("drive.blowerPulleyDiameter", f.drive.blowerPulleyDiameter),
     },
     ambient: {
+      ...f.ambient,
       altitude: c("ambient.altitude", f.ambient.altitude),
       pressure: c("ambient.pressure", f.ambient.pressure),
       temperature: c("ambient.temperature", f.ambient.temperature),
       inletLoss: c("ambient.inletLoss", f.ambient.inletLoss),
+      inletRestriction: {
+        ratedFlow: c("ambient.inletRestriction.ratedFlow", restriction.ratedFlow),
+        ratingDepression: c("ambient.inletRestriction.ratingDepression", restriction.ratingDepression),
+      },
     },
     intercooler: {
       ...f.intercooler,
@@ -293,7 +356,7 @@ export function issuesToErrors(issues: readonly z.core.$ZodIssue[], system: Unit
   return out;
 }
 
-/** Relative closeness of two saved specs, so a unit round trip is not mistaken for an edit. */
+/** Relative closeness of two saved specs, so a unit round trip is not mistaken for an edit (null ≡ left out). */
 export function sameSpec(a: unknown, b: unknown, rel = 1e-5): boolean {
   if (typeof a === "number" && typeof b === "number") {
     if (Number.isNaN(a) || Number.isNaN(b)) return Number.isNaN(a) && Number.isNaN(b);
@@ -301,8 +364,9 @@ export function sameSpec(a: unknown, b: unknown, rel = 1e-5): boolean {
   }
   if (a === null || b === null || typeof a !== "object" || typeof b !== "object") return a === b;
   if (Array.isArray(a) !== Array.isArray(b)) return false;
-  const ka = Object.keys(a as object).filter((k) => (a as Record<string, unknown>)[k] !== undefined);
-  const kb = Object.keys(b as object).filter((k) => (b as Record<string, unknown>)[k] !== undefined);
+  // A refinement given as null and one left out mean the same to calc (off, or its default).
+  const ka = Object.keys(a as object).filter((k) => (a as Record<string, unknown>)[k] != null);
+  const kb = Object.keys(b as object).filter((k) => (b as Record<string, unknown>)[k] != null);
   if (ka.length !== kb.length) return false;
   return ka.every((k) => sameSpec((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], rel));
 }

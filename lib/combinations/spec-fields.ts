@@ -9,7 +9,7 @@ const num = (v: number, digits: number) => v.toLocaleString("en-US", { minimumFr
 
 /** One value as text in the user's units ("—" when absent, e.g. no intercooler). */
 export function showValue(def: SpecField, value: unknown, system: UnitSystem): string {
-  if (value === undefined || value === null) return def.path.startsWith("intercooler.") ? "no intercooler" : "—";
+  if (value === undefined || value === null) return def.absent ?? "—";
   const s = def.quantity;
   if (s === "text") return String(value);
   if (s === "count") return typeof value === "number" ? num(value, 0) : String(value);

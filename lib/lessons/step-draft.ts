@@ -1,6 +1,6 @@
 // The step editor's drafts: what the form holds per item (strings, in the author's units) and how
 // it becomes the API's input (SI), so the form and its tests share one conversion.
-import { fromSI, toSI, type UnitSystem } from "@/calc";
+import { fromSI, toSI, unitLabel, type UnitSystem } from "@/calc";
 import { displayValue } from "@/lib/units/format";
 import type { ItemChange, ItemChangeInput, StepInput } from "./rules";
 
@@ -15,9 +15,9 @@ export const blankItem = (): ItemDraft => ({ combinationId: "", revision: "curre
 /** What the value of each kind is typed in, and a value to start from. */
 export const CHANGE_KINDS: Record<Exclude<ChangeKind, "none">, { label: string; unit: (s: UnitSystem) => string; start: (s: UnitSystem) => string }> = {
   ve: { label: "VE scaled by", unit: () => "% change, e.g. 8 or −5", start: () => "8" },
-  pulley: { label: "Blower pulley diameter", unit: (s) => (s === "imperial" ? "in" : "mm"), start: (s) => (s === "imperial" ? "2.8" : "71") },
+  pulley: { label: "Blower pulley diameter", unit: (s) => unitLabel("length-small", s), start: (s) => String(displayValue("length-small", 0.0711, s)) },
   intercooler: { label: "Intercooler added, effectiveness", unit: () => "%", start: () => "70" },
-  altitude: { label: "Altitude", unit: (s) => (s === "imperial" ? "ft" : "m"), start: (s) => (s === "imperial" ? "5000" : "1500") },
+  altitude: { label: "Altitude", unit: (s) => unitLabel("altitude", s), start: (s) => String(Math.round(fromSI("altitude", 1524, s) / 100) * 100) },
 };
 
 /** A typed number ("−5" and "2,8" allowed), or NaN, which the schema refuses naming the field. */

@@ -5,7 +5,7 @@ import { getDb } from "@/db/client";
 import { canAuthorLessons } from "@/db/policy";
 import { listLessons } from "@/db/repo/lessons";
 import { toActor } from "@/db/repo/users";
-import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
+import { ACTIONS_COLUMN, DataTable } from "@/components/ui/data-table";
 import { NewLessonForm } from "./new-lesson-form";
 
 export const metadata: Metadata = { title: "Lessons" };
@@ -31,37 +31,30 @@ export default async function LessonsPage() {
             {actor.role === "admin" ? "All lessons" : "Your lessons"}
           </h2>
           <NewLessonForm />
-          {authored.length === 0 ? (
-            <p className="text-sm text-muted">No lessons yet. Give the first one a title above.</p>
-          ) : (
-            <table className="w-full border-collapse text-sm">
-              <thead>
-                <tr className="border-b border-line text-left">
-                  <HeadCells
-                    cell="py-2 pr-3 font-medium"
-                    columns={["Title", actor.role === "admin" && "Instructor", "Steps", "Status", "Class code", { ...ACTIONS_COLUMN, className: "py-2 font-medium" }]}
-                  />
-                </tr>
-              </thead>
-              <tbody>
-                {authored.map((l) => (
-                  <tr key={l.id} className="border-b border-line">
-                    <td className="py-2 pr-3">
-                      <Link href={`/lessons/${l.id}/edit`} className="font-medium hover:underline">{l.title}</Link>
-                    </td>
-                    {actor.role === "admin" ? <td className="py-2 pr-3">{l.ownerName}</td> : null}
-                    <td className="py-2 pr-3 tabular-nums">{l.steps}</td>
-                    <td className="py-2 pr-3">{l.published ? <span className="text-ok">Published</span> : <span className="text-muted">Draft</span>}</td>
-                    <td className="py-2 pr-3 font-mono tracking-widest">{l.classCode}</td>
-                    <td className="py-2 text-right whitespace-nowrap">
-                      <Link href={`/lessons/${l.id}/edit`} className="mr-3 text-accent underline underline-offset-2">Edit</Link>
-                      <Link href={`/classroom/${l.id}`} className="text-accent underline underline-offset-2">Classroom view</Link>
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          )}
+          <DataTable
+            caption={actor.role === "admin" ? "All lessons" : "Your lessons"}
+            rows={authored}
+            rowKey={(l) => l.id}
+            empty="No lessons yet. Give the first one a title above."
+            columns={[
+              { label: "Title", cell: (l) => <Link href={`/lessons/${l.id}/edit`} className="font-medium hover:underline">{l.title}</Link> },
+              actor.role === "admin" && { label: "Instructor", cell: (l) => l.ownerName },
+              { label: "Steps", cellClassName: "tabular-nums", cell: (l) => l.steps },
+              { label: "Status", cell: (l) => (l.published ? <span className="text-ok">Published</span> : <span className="text-muted">Draft</span>) },
+              { label: "Class code", cellClassName: "font-mono tracking-widest", cell: (l) => l.classCode },
+              {
+                ...ACTIONS_COLUMN,
+                align: "right",
+                cellClassName: "whitespace-nowrap",
+                cell: (l) => (
+                  <>
+                    <Link href={`/lessons/${l.id}/edit`} className="mr-3 text-accent underline underline-offset-2">Edit</Link>
+                    <Link href={`/classroom/${l.id}`} className="text-accent underline underline-offset-2">Classroom view</Link>
+                  </>
+                ),
+              },
+            ]}
+          />
         </section>
       ) : null}
 

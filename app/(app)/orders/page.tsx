@@ -6,9 +6,10 @@ import { listOrders } from "@/db/repo/orders";
 import { toActor } from "@/db/repo/users";
 import { formatPrice } from "@/lib/orders/money";
 import { ORDER_STATUSES, ORDER_STATUS_LABELS, orderListQuerySchema } from "@/lib/orders/status";
-import { HeadCells } from "@/components/ui/data-table";
 import { dateText } from "@/lib/format/dates";
 import { requestLocale } from "@/app/_lib/locale";
+import { DataTable } from "@/components/ui/data-table";
+import { Pager } from "@/components/ui/pager";
 
 export const metadata: Metadata = { title: "Orders" };
 
@@ -24,7 +25,6 @@ export default async function OrdersPage({ searchParams }: Props) {
   const parsed = orderListQuerySchema.safeParse({ status: one(sp.status) ?? "", search: one(sp.search) ?? "", page: one(sp.page) ?? 1 });
   const q = parsed.success ? parsed.data : orderListQuerySchema.parse({});
   const list = await listOrders(getDb(), toActor(user), q);
-  const pages = Math.max(1, Math.ceil(list.total / list.pageSize));
   const pageHref = (p: number) => `/orders?${new URLSearchParams({ status: q.status ?? "", search: q.search ?? "", page: String(p) })}`;
   return (
     <div className="flex flex-col gap-4">
@@ -56,51 +56,32 @@ export default async function OrdersPage({ searchParams }: Props) {
           Show
         </button>
       </form>
-      <div className="overflow-x-auto rounded-md border border-line bg-panel">
-        <table className="w-full text-sm" data-testid="orders-table">
-          <caption className="sr-only">Orders</caption>
-          <thead className="border-b border-line text-left">
-            <tr>
-              <HeadCells cell="px-2 py-1.5 font-medium" columns={["Customer", "Sheet", "Status", { label: "Deposit", right: true }, { label: "Total", right: true }, "Updated"]} />
-            </tr>
-          </thead>
-          <tbody>
-            {list.rows.map((o) => (
-              <tr key={o.id} className="border-b border-line last:border-0">
-                <td className="px-2 py-1.5">
-                  <Link href={`/orders/${o.id}`} className="font-medium underline">
-                    {o.customerName}
-                  </Link>
-                  {o.customerEmail ? <span className="block text-xs text-muted">{o.customerEmail}</span> : null}
-                </td>
-                <td className="px-2 py-1.5">{o.title || "–"}</td>
-                <td className="px-2 py-1.5" data-testid="order-status">
-                  {ORDER_STATUS_LABELS[o.status]}
-                </td>
-                <td className="px-2 py-1.5 text-right tabular-nums">{formatPrice(o.deposit, o.currency)}</td>
-                <td className="px-2 py-1.5 text-right tabular-nums">{formatPrice(o.total, o.currency)}</td>
-                <td className="px-2 py-1.5">{dateText(o.updatedAt, locale)}</td>
-              </tr>
-            ))}
-            {list.rows.length === 0 ? (
-              <tr>
-                <td colSpan={6} className="px-2 py-4 text-center text-muted">
-                  No orders match.
-                </td>
-              </tr>
-            ) : null}
-          </tbody>
-        </table>
-      </div>
-      {pages > 1 ? (
-        <nav aria-label="Orders pages" className="flex items-center gap-3 text-sm">
-          {list.page > 1 ? <Link href={pageHref(list.page - 1)}>Previous</Link> : null}
-          <span>
-            Page {list.page} of {pages}
-          </span>
-          {list.page < pages ? <Link href={pageHref(list.page + 1)}>Next</Link> : null}
-        </nav>
-      ) : null}
+      <DataTable
+        testId="orders-table"
+        caption="Orders"
+        rows={list.rows}
+        rowKey={(o) => o.id}
+        empty="No orders match."
+        columns={[
+          {
+            label: "Customer",
+            cell: (o) => (
+              <>
+                <Link href={`/orders/${o.id}`} className="font-medium underline">
+                  {o.customerName}
+                </Link>
+                {o.customerEmail ? <span className="block text-xs text-muted">{o.customerEmail}</span> : null}
+              </>
+            ),
+          },
+          { label: "Sheet", cell: (o) => o.title || "–" },
+          { label: "Status", cell: (o) => ORDER_STATUS_LABELS[o.status], testId: "order-status" },
+          { label: "Deposit", align: "right", cellClassName: "tabular-nums", cell: (o) => formatPrice(o.deposit, o.currency) },
+          { label: "Total", align: "right", cellClassName: "tabular-nums", cell: (o) => formatPrice(o.total, o.currency) },
+          { label: "Updated", cell: (o) => dateText(o.updatedAt, locale) },
+        ]}
+      />
+      <Pager label="Orders" page={list.page} pageSize={list.pageSize} total={list.total} href={pageHref} noun={["order", "orders"]} />
     </div>
   );
 }

@@ -1,6 +1,6 @@
 // Invented test engines (numbers are made up; check values come from the sources named in the
 // tests). Each is a plausible street set-up of a kind the trade fits blowers to.
-import { exampleCombination, exampleTwinScrewCombination, type Combination } from "@/calc";
+import { engineOf, exampleCombination, exampleTwinScrewCombination, type Combination } from "@/calc";
 
 const noIntercooler = (c: Combination): Combination => ({ ...c, intercooler: null });
 
@@ -9,17 +9,7 @@ export function smallFourRoots(): Combination {
   const c = exampleCombination();
   return {
     ...c,
-    engine: {
-      displacement: 0.002,
-      cylinders: 4,
-      veCurve: [
-        { rpm: 2000, ve: 0.78 },
-        { rpm: 4000, ve: 0.9 },
-        { rpm: 6000, ve: 0.88 },
-        { rpm: 7200, ve: 0.8 },
-      ],
-      redlineRpm: 7200,
-    },
+    engine: engineOf(0.002, 4, 7200, [[2000, 0.78], [4000, 0.9], [6000, 0.88], [7200, 0.8]]),
     blower: { ...c.blower, displacementPerRev: 0.001, maxRpm: 16_000, volumetricEfficiencyRef: 0.78, referenceRpm: 10_000 },
     drive: { crankPulleyDiameter: 0.14, blowerPulleyDiameter: 0.085, beltSlip: 0.02 },
   };
@@ -30,17 +20,7 @@ export function bigEightScrew(): Combination {
   const c = noIntercooler(exampleTwinScrewCombination());
   return {
     ...c,
-    engine: {
-      displacement: 0.007,
-      cylinders: 8,
-      veCurve: [
-        { rpm: 1500, ve: 0.8 },
-        { rpm: 3000, ve: 0.88 },
-        { rpm: 4500, ve: 0.9 },
-        { rpm: 6200, ve: 0.82 },
-      ],
-      redlineRpm: 6200,
-    },
+    engine: engineOf(0.007, 8, 6200, [[1500, 0.8], [3000, 0.88], [4500, 0.9], [6200, 0.82]]),
     blower: { ...c.blower, displacementPerRev: 0.0024, maxRpm: 15_000 },
     drive: { crankPulleyDiameter: 0.17, blowerPulleyDiameter: 0.095, beltSlip: 0.02 },
   };
@@ -51,16 +31,7 @@ export function midSixRootsIntercooled(): Combination {
   const c = exampleCombination();
   return {
     ...c,
-    engine: {
-      displacement: 0.0038,
-      cylinders: 6,
-      veCurve: [
-        { rpm: 2000, ve: 0.8 },
-        { rpm: 4000, ve: 0.86 },
-        { rpm: 6000, ve: 0.8 },
-      ],
-      redlineRpm: 6000,
-    },
+    engine: engineOf(0.0038, 6, 6000, [[2000, 0.8], [4000, 0.86], [6000, 0.8]]),
     blower: { ...c.blower, displacementPerRev: 0.0015 },
     drive: { crankPulleyDiameter: 0.15, blowerPulleyDiameter: 0.085, beltSlip: 0.02 },
     intercooler: { effectiveness: 0.7, pressureDrop: 3000, coolantTemperature: 308.15 },

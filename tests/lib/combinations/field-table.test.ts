@@ -1,25 +1,12 @@
 // The combination field table against calc's schema: every field people edit is in it once, and
 // it names nothing calc does not have, so a new calc field cannot be left out of the editor,
-// the summary or the history diff.
+// the summary or the history diff (the optional refinements included: saving from the planner
+// must never drop them).
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { combinationSchema } from "@/calc";
+import { combinationSchema, REFINEMENT_DEFAULTS } from "@/calc";
 import { editorLabelOf, FORM_ONLY_FIELDS, SPEC_FIELDS } from "@/lib/combinations/field-table";
 import { FIELD_KINDS } from "@/lib/combinations/form-model";
-
-/**
- * Leaves of calc's schema the planner does not edit today: the model's optional refinements
- * (calc/README.md), reached through the API only. A new leaf must go in the table or here.
- */
-const NOT_EDITED: Readonly<Record<string, string>> = {
-  "engine.chargeTemperatureExponent": "optional refinement, default 0.5",
-  "engine.compressionRatio": "optional refinement, default none",
-  "engine.exhaustBackPressure": "optional refinement, default 0",
-  "ambient.inletRestriction.ratedFlow": "a flow-rated inlet, optional refinement",
-  "ambient.inletRestriction.ratingDepression": "a flow-rated inlet, optional refinement",
-  "fuel.evaporatedInBlower": "split of draw-through cooling, optional refinement",
-  "fuel.evaporatedInPort": "port-injection cooling, optional refinement",
-};
 
 /** Dotted paths of a zod schema's leaves; an array (the VE curve) counts as one leaf. */
 function leaves(schema: z.ZodType, prefix = ""): string[] {
@@ -46,17 +33,30 @@ describe("the combination field table", () => {
   it("has every edited leaf of calc's schema exactly once", () => {
     const tablePaths = SPEC_FIELDS.map((f) => f.path);
     for (const leaf of schemaLeaves) {
-      if (leaf in NOT_EDITED) continue;
       expect(tablePaths.filter((p) => p === leaf), leaf).toHaveLength(1);
     }
   });
 
-  it("names only fields calc has, and none it also calls not edited", () => {
-    for (const f of SPEC_FIELDS) {
-      expect(schemaLeaves, f.path).toContain(f.path);
-      expect(NOT_EDITED, f.path).not.toHaveProperty([f.path]);
-    }
-    for (const p of Object.keys(NOT_EDITED)) expect(schemaLeaves, p).toContain(p);
+  it("names only fields calc has", () => {
+    for (const f of SPEC_FIELDS) expect(schemaLeaves, f.path).toContain(f.path);
+  });
+
+  it("marks as advanced exactly the model's optional refinements, each saying what an empty box means", () => {
+    // source: calc/README.md, "Refinements" (each mechanism's parameter) and REFINEMENT_DEFAULTS
+    const advanced = SPEC_FIELDS.filter((f) => f.advanced).map((f) => f.path);
+    expect(advanced.sort()).toEqual(
+      [
+        "ambient.inletRestriction.ratedFlow",
+        "ambient.inletRestriction.ratingDepression",
+        "engine.chargeTemperatureExponent",
+        "engine.compressionRatio",
+        "engine.exhaustBackPressure",
+        "fuel.evaporatedInBlower",
+        "fuel.evaporatedInPort",
+      ].sort(),
+    );
+    for (const f of SPEC_FIELDS.filter((x) => x.advanced)) expect(f.absent, f.path).toBeTruthy();
+    expect(SPEC_FIELDS.find((f) => f.path === "engine.chargeTemperatureExponent")?.absent).toContain(String(REFINEMENT_DEFAULTS.chargeTemperatureExponent));
   });
 
   it("keeps editor-only fields out of the stored spec", () => {

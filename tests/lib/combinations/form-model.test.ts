@@ -158,6 +158,110 @@ describe("form values and SI", () => {
   });
 });
 
+/** Every optional refinement of calc's schema, each either left out or given (calc/README.md, "Refinements"). */
+const refinementsArb = fc.record(
+  {
+    chargeTemperatureExponent: fc.double({ min: 0, max: 1, noNaN: true }),
+    compressionRatio: fc.option(fc.double({ min: 4, max: 20, noNaN: true }), { nil: null }),
+    exhaustBackPressure: fc.double({ min: 0, max: 100_000, noNaN: true }),
+    inletRestriction: fc.option(
+      fc.record({ ratedFlow: fc.double({ min: 0.01, max: 2, noNaN: true }), ratingDepression: fc.double({ min: 500, max: 30_000, noNaN: true }) }, { requiredKeys: ["ratedFlow"] }),
+      { nil: null },
+    ),
+    evaporatedInBlower: fc.double({ min: 0, max: 0.3, noNaN: true }),
+    evaporatedInPort: fc.double({ min: 0, max: 0.3, noNaN: true }),
+  },
+  { requiredKeys: [] },
+);
+
+/** A stored combination with the given refinements put where calc's schema keeps them. */
+function withRefinements(c: Combination, r: Partial<Record<string, unknown>>): Combination {
+  const pick = (keys: string[]) => Object.fromEntries(keys.filter((k) => k in r).map((k) => [k, r[k]]));
+  return combinationSchema.parse({
+    ...c,
+    engine: { ...c.engine, ...pick(["chargeTemperatureExponent", "compressionRatio", "exhaustBackPressure"]) },
+    ambient: { ...c.ambient, ...pick(["inletRestriction"]) },
+    fuel: { ...c.fuel, ...pick(["evaporatedInBlower", "evaporatedInPort"]) },
+  });
+}
+
+describe("the model's optional refinements in the planner", () => {
+  // Invented values inside calc's bounds (calc/schema.ts): every optional field given at once.
+  const full = withRefinements(demo, {
+    chargeTemperatureExponent: 0.42,
+    compressionRatio: 9.25,
+    exhaustBackPressure: 12_345.6,
+    inletRestriction: { ratedFlow: 0.3777, ratingDepression: 4321 },
+    evaporatedInBlower: 0.17,
+    evaporatedInPort: 0.23,
+  });
+
+  it("saves a spec with every optional field byte-identical, in either system and after a unit switch", () => {
+    expect(full.engine.compressionRatio).toBe(9.25); // the fixture really carries them
+    for (const system of ["imperial", "metric"] as const) {
+      const other: UnitSystem = system === "imperial" ? "metric" : "imperial";
+      const f = toForm(full, system);
+      for (const form of [f, convertForm(convertForm(f, system, other, full), other, system, full)]) {
+        const v = validateForm(form, system, full);
+        expect(v.ok && JSON.stringify(v.spec)).toBe(JSON.stringify(full));
+      }
+    }
+  });
+
+  it("keeps any mix of given, left-out and null refinements exactly (property)", () => {
+    fc.assert(
+      fc.property(combinationArb, refinementsArb, fc.constantFrom<UnitSystem>("imperial", "metric"), (c, r, system) => {
+        const saved = withRefinements(combinationSchema.parse(c), r);
+        const v = validateForm(toForm(saved, system), system, saved);
+        expect(v.ok && JSON.stringify(v.spec)).toBe(JSON.stringify(saved));
+        expect(sameSpec(toSpec(toForm(saved, system), system, saved), saved)).toBe(true);
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("leaves an emptied box out, so the model's default applies, and reads a typed value in the user's units", () => {
+    const f = toForm(full, "imperial");
+    f.engine.chargeTemperatureExponent = Number.NaN;
+    f.engine.compressionRatio = Number.NaN;
+    f.fuel.evaporatedInPort = Number.NaN;
+    f.ambient.inletRestrictionOn = false;
+    f.engine.exhaustBackPressure = 2;
+    const v = validateForm(f, "imperial");
+    expect(v.ok).toBe(true);
+    if (!v.ok) return;
+    expect(v.spec.engine).not.toHaveProperty("chargeTemperatureExponent", expect.anything());
+    expect(v.spec.engine.compressionRatio ?? null).toBeNull();
+    expect(v.spec.fuel.evaporatedInPort).toBeUndefined();
+    expect(v.spec.ambient.inletRestriction ?? null).toBeNull();
+    // source: 2 psi × 6894.757 Pa/psi = 13 789.5 Pa (NIST SP 811)
+    expect(v.spec.engine.exhaustBackPressure).toBeCloseTo(13_789.5, 0);
+    expect(v.spec.fuel.evaporatedInBlower).toBe(0.17);
+  });
+
+  it("shows each refinement's unit and names it in calc's message, in the user's units", () => {
+    expect(unitOf("engine.exhaustBackPressure", "metric")).toBe("kPa");
+    expect(unitOf("ambient.inletRestriction.ratedFlow", "imperial")).toBe("cfm");
+    expect(unitOf("fuel.evaporatedInBlower", "imperial")).toBe("%");
+    const f = toForm(full, "metric");
+    f.engine.compressionRatio = 30;
+    f.fuel.evaporatedInBlower = 80;
+    const v = validateForm(f, "metric", full);
+    expect(v.ok).toBe(false);
+    if (v.ok) return;
+    expect(v.errors["engine.compressionRatio"]).toMatch(/Compression ratio/);
+    expect(v.errors["fuel.evaporatedInPort"]).toBeDefined(); // 17 % + 80 % + 23 % > 100 %
+  });
+
+  it("reads a draft kept before these fields existed without losing its other edits", () => {
+    const old = toForm(demo, "imperial") as unknown as { ambient: Record<string, unknown> };
+    delete old.ambient.inletRestriction;
+    const f = old as unknown as ReturnType<typeof toForm>;
+    expect(() => convertForm(f, "imperial", "metric")).not.toThrow();
+    expect(validateForm(f, "imperial").ok).toBe(true);
+  });
+});
+
 describe("validation names the field, in the user's units", () => {
   it("rejects a blower pulley too large and gives the limits in inches", () => {
     const f = toForm(demo, "imperial");

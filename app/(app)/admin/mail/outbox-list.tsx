@@ -5,6 +5,7 @@ import type { Actor } from "@/db/policy";
 import { listOutbox } from "@/db/repo/outbox";
 import { dateTimeText } from "@/lib/format/dates";
 import { requestLocale } from "@/app/_lib/locale";
+import { DataTable } from "@/components/ui/data-table";
 
 const when = (d: Date | null, locale: string) => (d ? dateTimeText(d, locale) : "");
 const TONE: Record<string, string> = { queued: "text-muted", sending: "text-muted", sent: "text-ok", failed: "text-danger" };
@@ -12,37 +13,25 @@ const TONE: Record<string, string> = { queued: "text-muted", sending: "text-mute
 export async function OutboxList({ actor }: { actor: Actor }) {
   const locale = await requestLocale();
   const rows = await listOutbox(getDb(), actor);
-  if (!rows.length) return <p className="text-sm">Nothing sent or queued yet.</p>;
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full text-sm" aria-label="Outbox">
-        <thead>
-          <tr className="text-left text-muted">
-            <th className="py-1 pr-3 font-medium">Status</th>
-            <th className="py-1 pr-3 font-medium">To</th>
-            <th className="py-1 pr-3 font-medium">Subject</th>
-            <th className="py-1 pr-3 font-medium">Tries</th>
-            <th className="py-1 pr-3 font-medium">Queued</th>
-            <th className="py-1 font-medium">Sent, or next try and last error</th>
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((m) => (
-            <tr key={m.id} className="border-t border-line align-top">
-              <td className={`py-1 pr-3 font-medium ${TONE[m.status] ?? ""}`}>{m.status}</td>
-              <td className="py-1 pr-3">{m.to}</td>
-              <td className="py-1 pr-3">{m.subject}</td>
-              <td className="py-1 pr-3">{m.attempts}</td>
-              <td className="py-1 pr-3">
-                <time dateTime={m.createdAt.toISOString()}>{when(m.createdAt, locale)}</time>
-              </td>
-              <td className="py-1">
-                {m.status === "sent" ? when(m.sentAt, locale) : m.status === "failed" ? `Gave up: ${m.lastError ?? ""}` : `${when(m.nextAttemptAt, locale)}${m.lastError ? ` · ${m.lastError}` : ""}`}
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable
+      caption="Outbox"
+      rows={rows}
+      rowKey={(m) => m.id}
+      rowProps={() => ({ className: "align-top" })}
+      empty="Nothing sent or queued yet."
+      headClassName="text-muted"
+      columns={[
+        { label: "Status", cell: (m) => m.status, cellClassName: (m) => `font-medium ${TONE[m.status] ?? ""}` },
+        { label: "To", cell: (m) => m.to },
+        { label: "Subject", cell: (m) => m.subject },
+        { label: "Tries", cell: (m) => m.attempts },
+        { label: "Queued", cell: (m) => <time dateTime={m.createdAt.toISOString()}>{when(m.createdAt, locale)}</time> },
+        {
+          label: "Sent, or next try and last error",
+          cell: (m) => (m.status === "sent" ? when(m.sentAt, locale) : m.status === "failed" ? `Gave up: ${m.lastError ?? ""}` : `${when(m.nextAttemptAt, locale)}${m.lastError ? ` · ${m.lastError}` : ""}`),
+        },
+      ]}
+    />
   );
 }

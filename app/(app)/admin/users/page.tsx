@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
-import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { UserAccessControls } from "@/components/admin/user-access-controls";
-import { EmptyRow, HeadCells } from "@/components/ui/data-table";
+import { DataTable } from "@/components/ui/data-table";
+import { Pager } from "@/components/ui/pager";
 import { setUserDisabledAction, setUserRoleAction } from "./actions";
 import { getDb } from "@/db/client";
 import { listUsers, toActor } from "@/db/repo/users";
@@ -41,38 +41,27 @@ export default async function AdminUsersPage({ searchParams }: { searchParams: P
           Search
         </button>
       </form>
-      <div className="overflow-x-auto rounded-lg border border-line bg-panel">
-        <table className="w-full text-sm">
-          <caption className="sr-only">Accounts, page {page} of {pages}</caption>
-          <thead className="border-b border-line text-left text-muted">
-            <tr>
-              <HeadCells cell="px-3 py-2 font-medium" columns={["Name", "E-mail", "Since", "Role and access"]} />
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map((r) => (
-              <tr key={r.id} className="border-b border-line last:border-0 align-top">
-                <td className="px-3 py-2">{r.name || <span className="text-muted">—</span>}</td>
-                <td className="px-3 py-2">{r.email}</td>
-                <td className="px-3 py-2 whitespace-nowrap tabular-nums">{dateText(r.createdAt, locale)}</td>
-                <td className="px-3 py-2">
-                  <UserAccessControls id={r.id} email={r.email} role={r.role} disabled={r.disabled} self={r.id === user.id} actions={{ setRole: setUserRoleAction, setDisabled: setUserDisabledAction }} />
-                </td>
-              </tr>
-            ))}
-            {rows.length === 0 ? (
-              <EmptyRow colSpan={4}>No account matches “{search}”.</EmptyRow>
-            ) : null}
-          </tbody>
-        </table>
-      </div>
-      <nav aria-label="Pages" className="flex items-center gap-3 text-sm">
-        {page > 1 ? <Link href={href(page - 1)} className="underline">Previous</Link> : <span className="text-muted">Previous</span>}
-        <span className="tabular-nums">
-          Page {page} of {pages} · {total} account{total === 1 ? "" : "s"}
-        </span>
-        {page < pages ? <Link href={href(page + 1)} className="underline">Next</Link> : <span className="text-muted">Next</span>}
-      </nav>
+      <DataTable
+        caption={`Accounts, page ${page} of ${pages}`}
+        density="roomy"
+        headClassName="text-muted"
+        rows={rows}
+        rowKey={(r) => r.id}
+        rowProps={() => ({ className: "align-top" })}
+        empty={<>No account matches “{search}”.</>}
+        columns={[
+          { label: "Name", cell: (r) => r.name || <span className="text-muted">—</span> },
+          { label: "E-mail", cell: (r) => r.email },
+          { label: "Since", cellClassName: "whitespace-nowrap tabular-nums", cell: (r) => dateText(r.createdAt, locale) },
+          {
+            label: "Role and access",
+            cell: (r) => (
+              <UserAccessControls id={r.id} email={r.email} role={r.role} disabled={r.disabled} self={r.id === user.id} actions={{ setRole: setUserRoleAction, setDisabled: setUserDisabledAction }} />
+            ),
+          },
+        ]}
+      />
+      <Pager label="Accounts" ariaLabel="Pages" page={page} pageSize={PAGE_SIZE} total={total} href={href} noun={["account", "accounts"]} />
     </div>
   );
 }

@@ -13,10 +13,10 @@ import { NotFoundError } from "@/lib/errors";
 import { canWriteOwned } from "@/db/policy";
 import { getCombination, listRevisions } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
-import { ACTIONS_COLUMN, HeadCells } from "@/components/ui/data-table";
 import { personUnits, unitsName } from "@/lib/units/person";
 import { dateTimeText } from "@/lib/format/dates";
 import { requestLocale } from "@/app/_lib/locale";
+import { ACTIONS_COLUMN, DataTable } from "@/components/ui/data-table";
 
 export const metadata: Metadata = { title: "History" };
 
@@ -70,38 +70,47 @@ export default async function RevisionsPage({ params, searchParams }: { params: 
         <h2 id="revisions-title" className="mb-2 text-lg font-semibold">
           Revisions
         </h2>
-        <div className="relative overflow-x-auto rounded-lg border border-line bg-panel">
-          <table className="w-full text-sm tabular-nums">
-            <thead className="border-b border-line text-left text-muted">
-              <tr>
-                <HeadCells cell="px-3 py-2 font-medium" columns={[{ label: "Revision", right: true }, "Note", "By", "Saved", ACTIONS_COLUMN]} />
-              </tr>
-            </thead>
-            <tbody>
-              {revisions.map((r) => (
-                <tr key={r.number} className="border-b border-line last:border-0 align-top" aria-current={r.number === current ? "true" : undefined}>
-                  <td className="px-3 py-2 text-right font-medium">
-                    {r.number}
-                    {r.number === current ? <span className="ml-1 rounded border border-line px-1 text-xs font-normal text-muted">current</span> : null}
-                  </td>
-                  <td className="px-3 py-2">{r.note ?? <span className="text-muted">—</span>}</td>
-                  <td className="px-3 py-2">{r.authorName ?? <span className="text-muted">a removed account</span>}</td>
-                  <td className="px-3 py-2 whitespace-nowrap">
-                    <time dateTime={r.createdAt.toISOString()}>{dateTimeText(r.createdAt, locale)}</time>
-                  </td>
-                  <td className="px-3 py-2">
-                    <div className="flex flex-wrap items-start justify-end gap-2">
-                      <Link href={`?view=${r.number}#view`} className="rounded-md px-2 py-1 hover:bg-bg" aria-label={`View revision ${r.number}`}>
-                        View
-                      </Link>
-                      {writable && r.number !== current ? <RestoreRevision combinationId={id} number={r.number} currentRevision={current} restoreAction={restoreRevisionAction} /> : null}
-                    </div>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          caption="Revisions"
+          density="roomy"
+          className="tabular-nums"
+          headClassName="text-muted"
+          rows={revisions}
+          rowKey={(r) => String(r.number)}
+          rowProps={(r) => ({ className: "align-top", "aria-current": r.number === current ? "true" : undefined })}
+          empty="No revisions."
+          columns={[
+            {
+              label: "Revision",
+              align: "right",
+              cellClassName: "font-medium",
+              cell: (r) => (
+                <>
+                  {r.number}
+                  {r.number === current ? <span className="ml-1 rounded border border-line px-1 text-xs font-normal text-muted">current</span> : null}
+                </>
+              ),
+            },
+            { label: "Note", cell: (r) => r.note ?? <span className="text-muted">—</span> },
+            { label: "By", cell: (r) => r.authorName ?? <span className="text-muted">a removed account</span> },
+            {
+              label: "Saved",
+              cellClassName: "whitespace-nowrap",
+              cell: (r) => <time dateTime={r.createdAt.toISOString()}>{dateTimeText(r.createdAt, locale)}</time>,
+            },
+            {
+              ...ACTIONS_COLUMN,
+              cell: (r) => (
+                <div className="flex flex-wrap items-start justify-end gap-2">
+                  <Link href={`?view=${r.number}#view`} className="rounded-md px-2 py-1 hover:bg-bg" aria-label={`View revision ${r.number}`}>
+                    View
+                  </Link>
+                  {writable && r.number !== current ? <RestoreRevision combinationId={id} number={r.number} currentRevision={current} restoreAction={restoreRevisionAction} /> : null}
+                </div>
+              ),
+            },
+          ]}
+        />
       </section>
 
       {viewed ? (
