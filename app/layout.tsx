@@ -2,7 +2,6 @@ import "@fontsource-variable/inter";
 import "./globals.css";
 import type { Metadata } from "next";
 import { cookies } from "next/headers";
-import { Providers } from "@/components/providers";
 
 export const metadata: Metadata = {
   title: { default: "Pulleywright", template: "%s · Pulleywright" },
@@ -18,7 +17,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
         <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-panel focus:px-3 focus:py-2">
           Skip to content
         </a>
-        <Providers>{children}</Providers>
+        {children}
       </body>
     </html>
   );

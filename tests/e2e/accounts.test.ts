@@ -158,8 +158,16 @@ describe("accounts and history in the browser", () => {
         return message.getByText("Your Pulleywright sign-in link").count();
       }, { timeout: 20_000, interval: 500 })
       .toBeGreaterThan(0);
-    // The app's own outbox lists it as sent.
-    await adminPage.getByRole("table", { name: "Outbox" }).getByRole("row").filter({ hasText: email }).filter({ hasText: "sent" }).first().waitFor(T);
+    // The app's own outbox lists it as sent. The fake has the message as soon as the SMTP server
+    // took it, a moment before the outbox row is marked sent: reload until it is.
+    const sentRow = adminPage.getByRole("table", { name: "Outbox" }).getByRole("row").filter({ hasText: email }).filter({ hasText: "sent" });
+    await expect
+      .poll(async () => {
+        await adminPage.goto(`${BASE_URL}/admin/mail`);
+        await adminPage.getByRole("heading", { name: "Mailbox" }).waitFor(T);
+        return sentRow.count();
+      }, { timeout: 20_000, interval: 500 })
+      .toBeGreaterThan(0);
     await page.goto(`${BASE_URL}/admin/mail`);
     await page.waitForURL((u) => u.pathname === "/combinations", T);
     await page.getByText("That page is not open to your role").waitFor(T);

@@ -10,6 +10,7 @@ import {
   undoDeleteAction,
 } from "./actions";
 import { personUnits } from "@/lib/units/person";
+import { QueryProvider } from "@/components/query-provider";
 
 const LIST_ACTIONS = {
   rename: renameCombinationAction,
@@ -27,7 +28,7 @@ export default async function CombinationsPage({ searchParams }: { searchParams:
   return (
     <div className="flex flex-col gap-4">
       {denied ? <Notice tone="warning">That page is not open to your role ({user.role}).</Notice> : null}
-      <CombinationsList role={user.role} unitSystem={personUnits(user)} actions={LIST_ACTIONS} />
+      <QueryProvider><CombinationsList role={user.role} unitSystem={personUnits(user)} actions={LIST_ACTIONS} /></QueryProvider>
     </div>
   );
 }

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { requirePageUser } from "@/app/_lib/session";
 import { RecommendationsList } from "@/components/recommendation/recommendations-list";
 import { personUnits } from "@/lib/units/person";
+import { QueryProvider } from "@/components/query-provider";
 
 export const metadata: Metadata = { title: "Recommendations" };
 
@@ -19,7 +20,7 @@ export default async function RecommendationsPage() {
           Make a recommendation
         </Link>
       </div>
-      <RecommendationsList unitSystem={personUnits(user)} />
+      <QueryProvider><RecommendationsList unitSystem={personUnits(user)} /></QueryProvider>
     </div>
   );
 }

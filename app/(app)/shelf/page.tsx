@@ -4,6 +4,7 @@ import { ShelfTables } from "@/components/shelf/shelf-tables";
 import { canEditShelf } from "@/db/policy";
 import { toActor } from "@/db/repo/users";
 import { personUnits } from "@/lib/units/person";
+import { QueryProvider } from "@/components/query-provider";
 
 export const metadata: Metadata = { title: "Parts shelf" };
 
@@ -18,7 +19,7 @@ export default async function ShelfPage() {
           The shop&apos;s blowers and pulleys with price and stock. {isAdmin ? "You can edit the shelf and import or export it as CSV." : "Only the admin changes the shelf."}
         </p>
       </div>
-      <ShelfTables system={personUnits(user)} isAdmin={isAdmin} />
+      <QueryProvider><ShelfTables system={personUnits(user)} isAdmin={isAdmin} /></QueryProvider>
     </div>
   );
 }

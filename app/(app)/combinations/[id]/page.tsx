@@ -8,7 +8,7 @@ import { canWriteOwned } from "@/db/policy";
 import { getCombination } from "@/db/repo/combinations";
 import { toActor } from "@/db/repo/users";
 import { duplicateToEdit, savePlannerUnits, saveRevision } from "./actions";
-import { Planner } from "./planner";
+import { PlannerIsland } from "./planner-island";
 import { Breadcrumb } from "@/components/ui/breadcrumb";
 import { personUnits } from "@/lib/units/person";
 
@@ -36,7 +36,7 @@ export default async function PlannerPage({ params }: { params: Promise<{ id: st
   return (
     <div className="flex flex-col gap-4">
       <Breadcrumb href="/combinations" label="Combinations" here={row.name} className="text-sm text-muted" linkClassName="hover:underline" markCurrent />
-      <Planner
+      <PlannerIsland
         key={row.id}
         combinationId={row.id}
         name={row.name}
