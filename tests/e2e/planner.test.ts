@@ -85,6 +85,26 @@ describe("planner in Chromium", () => {
     expect((await chartSeries(page)).length).toBeGreaterThanOrEqual(2);
   });
 
+  it("arrives as server-rendered figures whose controls wait, disabled, for the planner's code", async () => {
+    // The HTML alone (no script run): the read-outs, the chart's first frame and the ladder are
+    // there, and the planner's controls are disabled until its code (a dynamic import) hydrates.
+    const cookies = (await context.cookies(BASE_URL)).map((c) => `${c.name}=${c.value}`).join("; ");
+    const html = await (await fetch(`${BASE_URL}/combinations/${demoId}`, { headers: { cookie: cookies } })).text();
+    expect(html).toContain('data-testid="readout-boost-redline"');
+    expect(html).toContain('data-testid="curve-preview"');
+    expect(html).toMatch(/<fieldset[^>]*disabled=""[^>]*data-testid="planner"/);
+    // The page's own scripts leave the planner out; the HTML preloads it.
+    const scripts = [...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1]);
+    const preloads = [...html.matchAll(/<link[^>]+as="script"[^>]*>/g)].map((m) => m[0]);
+    expect(scripts.length).toBeGreaterThan(0);
+    expect(preloads.length).toBeGreaterThan(0);
+    // In the browser the same page hydrates: the fieldset is enabled and the pulley field editable.
+    await page.goto(`${BASE_URL}/combinations/${demoId}`);
+    await plannerReady(page);
+    await expect(page.getByTestId("planner").isDisabled()).resolves.toBe(false);
+    await expect(pulleyField(page).isEditable()).resolves.toBe(true);
+  });
+
   it("draws a non-empty chart canvas", async () => {
     const canvas = page.getByRole("img", { name: /^Boost against engine speed/ });
     const shot = await canvas.screenshot();

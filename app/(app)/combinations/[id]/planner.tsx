@@ -13,6 +13,7 @@ import { PulleyFinder } from "@/components/pulleys/pulley-finder";
 import { PulleyLadder } from "@/components/pulleys/pulley-ladder";
 import { useUnsavedGuard } from "@/components/planner/use-unsaved-guard";
 import { Notice } from "@/components/ui/notice";
+import { useHydrated } from "@/components/ui/use-hydrated";
 import type { ActionState } from "@/lib/action-state";
 import { convertForm, fieldFromSI, sameSpec, toForm, toSpec, validateForm, type PlannerForm } from "@/lib/combinations/form-model";
 import { finderStock, type Shelf } from "@/lib/planner/compute";
@@ -129,9 +130,12 @@ export function Planner(props: PlannerProps) {
   const results = usePlannerResults({ spec: deferredSpec, baseSpec, chosenRpm, whatIf, blowerPulleys: shelf.blowerPulleys, system });
   const series = useChartSeries(results, chartOptions.showNeighbours, system);
   const slider = usePulleySlider(spec.drive.blowerPulleyDiameter, shelf.blowerPulleys, system);
+  // The server's HTML shows the planner before its code arrives (planner-island.tsx); until it
+  // has hydrated, its controls are disabled so nothing typed is lost.
+  const hydrated = useHydrated();
 
   return (
-    <div className="flex flex-col gap-4">
+    <fieldset disabled={!hydrated} aria-busy={!hydrated} data-testid="planner" className="m-0 flex min-w-0 flex-col gap-4 border-0 p-0">
       <PlannerHeader name={props.name} combinationId={combinationId} baseRevision={baseRevision} isDemo={props.isDemo} system={system} own={props.unitSystem} onUnits={switchUnits} unitsMessage={unitsMsg} />
       {draft.offer ? <DraftOffer revision={baseRevision} savedAt={draft.offer.savedAt} onRestore={draft.restoreDraft} onDiscard={draft.discardDraft} /> : null}
       <SaveBar invalid={!live.ok} canWrite={canWrite} note={note} onNote={setNote} onSave={(e) => void onSave(e)} saving={saving} dirty={dirty} onDuplicate={duplicate} duplicating={duplicating} message={saveMsg} />
@@ -181,6 +185,6 @@ export function Planner(props: PlannerProps) {
           )}
         </div>
       </div>
-    </div>
+    </fieldset>
   );
 }
