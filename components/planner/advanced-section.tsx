@@ -12,7 +12,7 @@ const ADVANCED = SPEC_FIELDS.filter((f) => f.advanced);
 const RESTRICTION = "ambient.inletRestriction.";
 
 export function AdvancedSection({ form, system, errors, values }: Omit<EditorProps, "blowers">) {
-  const common = { system, register: form.register, errors };
+  const common = { system, register: form.register, errors, values };
   const inUse = values.ambient.inletRestrictionOn || ADVANCED.some((f) => !f.path.startsWith(RESTRICTION) && Number.isFinite(valueAt(values, f.path)));
   const [openedWithValues] = useState(inUse);
   const hasError = ADVANCED.some((f) => f.path in errors);
@@ -27,7 +27,7 @@ export function AdvancedSection({ form, system, errors, values }: Omit<EditorPro
         <p className="text-xs text-muted">Optional refinements of the model. Leave a box empty for the model&apos;s default.</p>
         <div className={grid}>{ADVANCED.filter((f) => !f.path.startsWith(RESTRICTION)).map((f) => field(f.path))}</div>
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" {...form.register("ambient.inletRestrictionOn")} /> Inlet rated by flow (a carburettor or throttle body)
+          <input type="checkbox" defaultChecked={values.ambient.inletRestrictionOn} {...form.register("ambient.inletRestrictionOn")} /> Inlet rated by flow (a carburettor or throttle body)
         </label>
         {values.ambient.inletRestrictionOn ? <div className={grid}>{ADVANCED.filter((f) => f.path.startsWith(RESTRICTION)).map((f) => field(f.path))}</div> : null}
       </div>

@@ -11,7 +11,7 @@ import { NumField } from "./num-field";
 
 export function BlowerSection({ form, system, errors, blowers, values }: EditorProps) {
   const { register, setValue } = form;
-  const common = { system, register, errors };
+  const common = { system, register, errors, values };
   const [picked, setPicked] = useState("");
   const [filledBy, setFilledBy] = useState<string | null>(null);
   const fill = (b: { kind: "roots" | "twin-screw"; displacementPerRev: number; builtInVolumeRatio: number; maxRpm: number; volumetricEfficiencyRef: number; referenceRpm: number; internalEfficiency: number; mechanicalEfficiency: number }) => {
@@ -54,6 +54,7 @@ export function BlowerSection({ form, system, errors, blowers, values }: EditorP
         <label className="flex flex-col gap-1 text-sm">
           <span className="font-medium">{editorLabelOf("blower.kind")}</span>
           <select
+            defaultValue={values.blower.kind}
             {...kind}
             onChange={(e) => {
               void kind.onChange(e);
@@ -100,7 +101,7 @@ export function BlowerSection({ form, system, errors, blowers, values }: EditorP
 
 export function AmbientSection({ form, system, errors, values }: Omit<EditorProps, "blowers">) {
   const { register, setValue } = form;
-  const common = { system, register, errors };
+  const common = { system, register, errors, values };
   const [note, setNote] = useState<string | null>(null);
   return (
     <EditorBox legend="Ambient air">

@@ -21,7 +21,7 @@ export type EditorProps = {
 
 export function Editor({ form, system, errors, blowers, values }: EditorProps) {
   const { register } = form;
-  const common = { system, register, errors };
+  const common = { system, register, errors, values };
   return (
     <div className="flex flex-col gap-3">
       <EditorBox legend="Engine">
@@ -43,7 +43,7 @@ export function Editor({ form, system, errors, blowers, values }: EditorProps) {
       <AmbientSection form={form} system={system} errors={errors} values={values} />
       <EditorBox legend="Intercooler">
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" {...register("intercoolerOn")} /> Intercooler fitted
+          <input type="checkbox" defaultChecked={values.intercoolerOn} {...register("intercoolerOn")} /> Intercooler fitted
         </label>
         {values.intercoolerOn ? (
           <div className={grid}>
@@ -60,7 +60,7 @@ export function Editor({ form, system, errors, blowers, values }: EditorProps) {
           <NumField path="fuel.evaporatedBeforeBlower" hint="Draw-through only; 0 for port injection." {...common} />
         </div>
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" {...register("fuel.injectorsOn")} /> Check injector duty
+          <input type="checkbox" defaultChecked={values.fuel.injectorsOn} {...register("fuel.injectorsOn")} /> Check injector duty
         </label>
         {values.fuel.injectorsOn ? (
           <div className={grid}>

@@ -3,7 +3,7 @@
 import type { UseFormRegister } from "react-hook-form";
 import type { UnitSystem } from "@/calc";
 import { Field } from "@/components/ui/field";
-import { editorLabelOf } from "@/lib/combinations/field-table";
+import { editorLabelOf, valueAt } from "@/lib/combinations/field-table";
 import { unitOf, type PlannerForm } from "@/lib/combinations/form-model";
 
 export type NumFieldProps = {
@@ -12,6 +12,8 @@ export type NumFieldProps = {
   label?: string;
   system: UnitSystem;
   register: UseFormRegister<PlannerForm>;
+  /** The form's values: the input's value in the server's HTML, before the form library runs. */
+  values: PlannerForm;
   errors: Record<string, string>;
   hint?: string;
   step?: string;
@@ -19,8 +21,9 @@ export type NumFieldProps = {
   className?: string;
 };
 
-export function NumField({ path, label, system, register, errors, hint, step = "any", readOnly, className }: NumFieldProps) {
+export function NumField({ path, label, system, register, values, errors, hint, step = "any", readOnly, className }: NumFieldProps) {
   const unit = unitOf(path, system);
+  const shown = valueAt(values, path);
   return (
     <Field
       label={label ?? editorLabelOf(path)}
@@ -32,6 +35,7 @@ export function NumField({ path, label, system, register, errors, hint, step = "
       errors={errors[path]}
       readOnly={readOnly}
       className={className}
+      defaultValue={typeof shown === "number" && Number.isFinite(shown) ? shown : undefined}
       {...register(path as never, { valueAsNumber: true })}
     />
   );

@@ -45,6 +45,7 @@ export function VeTable({ form, system, errors, values }: Omit<EditorProps, "blo
                       aria-invalid={rpmErr ? true : undefined}
                       aria-describedby={rpmErr ? `ve-${i}-rpm-error` : undefined}
                       className="w-24 rounded-md border border-line bg-panel px-2 py-1 aria-[invalid=true]:border-danger"
+                      defaultValue={values.engine.veCurve[i]?.rpm}
                       {...form.register(`engine.veCurve.${i}.rpm`, { valueAsNumber: true })}
                     />
                     {rpmErr ? (
@@ -61,6 +62,7 @@ export function VeTable({ form, system, errors, values }: Omit<EditorProps, "blo
                       aria-invalid={veErr ? true : undefined}
                       aria-describedby={veErr ? `ve-${i}-ve-error` : undefined}
                       className="w-20 rounded-md border border-line bg-panel px-2 py-1 aria-[invalid=true]:border-danger"
+                      defaultValue={values.engine.veCurve[i]?.ve}
                       {...form.register(`engine.veCurve.${i}.ve`, { valueAsNumber: true })}
                     />
                     {veErr ? (

@@ -53,8 +53,8 @@ describe("accounts and history in the browser", () => {
   it("edits it twice in the planner: each save is a new revision", async () => {
     const pulley = page.getByLabel("Blower pulley diameter").first();
     await pulley.waitFor(T);
-    // The planner fills its form once it has hydrated.
-    await expect.poll(() => pulley.inputValue(), T).not.toBe("");
+    // The planner's controls are enabled once it has hydrated.
+    await page.locator('[data-testid="planner"]:enabled').waitFor(T);
     original = await pulley.inputValue();
     expect(Number(original)).toBeGreaterThan(0);
     const smaller = (Number(original) - 0.2).toFixed(2);

@@ -34,7 +34,8 @@ async function readoutNumber(page: Page, id: string): Promise<number> {
 async function plannerReady(page: Page) {
   await page.waitForFunction(() => {
     const input = document.getElementById("f-drive.blowerPulleyDiameter") as HTMLInputElement | null;
-    return !!input && input.value !== "" && !!document.querySelector('[data-testid="curve-chart"] canvas');
+    const hydrated = !!document.querySelector('[data-testid="planner"]:enabled');
+    return hydrated && !!input && input.value !== "" && !!document.querySelector('[data-testid="curve-chart"] canvas');
   });
 }
 

@@ -24,8 +24,9 @@ const IMPERIAL = /\d\s?in\b|\(in\)|\bpsi\b|°F|\bhp\b|lb·ft|in³|\bcfm\b|lb\/h|
 /** The planner's visible text, with every input's value, once hydrated. */
 async function plannerText(page: Page): Promise<string> {
   await page.waitForFunction(() => {
-    const input = document.getElementById("f-drive.blowerPulleyDiameter") as HTMLInputElement | null;
-    return !!input && input.value !== "" && !!document.querySelector('[data-testid="cautions-panel"] li');
+    // Hydrated: the planner's fieldset is enabled (it is disabled in the server's HTML, which may
+    // still sit hidden in a streamed boundary) and the cautions are listed.
+    return !!document.querySelector('[data-testid="planner"]:enabled') && !!document.querySelector('[data-testid="cautions-panel"] li');
   });
   // A shelf item's name is the shop's own words (the demo's may say "1.6 L/rev"): keep only the
   // figures the app adds after it in parentheses.
