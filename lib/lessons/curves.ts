@@ -3,6 +3,7 @@
 // browser with calc/.
 import { INTERCOOLER_DEMO_DEFAULTS, boostCurve, combinationSchema, standardAtmosphere, type Combination, type OperatingPoint, type UnitSystem } from "@/calc";
 import { VE_SCALE_MAX, VE_SCALE_MIN, type ItemChange, type LessonSeries, type StepItemSnapshot } from "@/lib/lessons/rules";
+import { calcErrorText } from "@/lib/units/caution-text";
 import { variantLabel } from "./change-text";
 
 /** The chart metric (an OperatingPoint field) behind each lesson series. */
@@ -82,7 +83,7 @@ export function stepVariants(items: readonly StepItemSnapshot[], live: WhatIf, s
   return out;
 }
 
-/** Each curve up to its own redline; one the model cannot solve reports why instead of throwing. */
+/** Each curve up to its own redline; one the model cannot solve reports why (in the viewer's units) instead of throwing. */
 export function stepCurves(items: readonly StepItemSnapshot[], live: WhatIf, system: UnitSystem = "imperial"): ItemCurve[] {
   const variants = stepVariants(items, live, system);
   const grid = rpmGrid(variants.map((v) => v.spec));
@@ -92,7 +93,7 @@ export function stepCurves(items: readonly StepItemSnapshot[], live: WhatIf, sys
       return { ...v, spec: valid, points: boostCurve(valid, [...grid.filter((r) => r < valid.engine.redlineRpm), valid.engine.redlineRpm]), error: null };
     } catch (e) {
       const issue = (e as { issues?: { message: string }[] }).issues?.[0]?.message;
-      return { ...v, points: [], error: issue ?? (e instanceof Error ? e.message : String(e)) };
+      return { ...v, points: [], error: issue ?? calcErrorText(e, system, String(e)) };
     }
   });
 }

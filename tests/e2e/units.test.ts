@@ -13,13 +13,9 @@ import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import { dateTimeText } from "@/lib/format/dates";
 import { BASE_URL, DEMO_PASSWORD, launchBrowser, signIn, watchErrors } from "../support/browser";
 import { Client, signedIn } from "../support/http";
+import { firstMatch, IMPERIAL, METRIC } from "../support/unit-words";
 
 const { pool, db } = connect(process.env.DATABASE_URL!, 2);
-
-// Unit words of each side, as they would appear after a figure or on their own (author's list,
-// from calc/units.ts). "in" and "m" only after a number, since both are also English words.
-const METRIC = /\d\s?mm\b|\bkPa\b|°C|\bkW\b|N·m|m³|\d\s?L\b|\bL\/rev\b|\(L\)|cc\/min|kg\/h|g\/\(kW·h\)|\bbar\b|\d\s?m\b/;
-const IMPERIAL = /\d\s?in\b|\(in\)|\bpsi\b|°F|\bhp\b|lb·ft|in³|\bcfm\b|lb\/h|lb\/\(hp·h\)|\d\s?ft\b/;
 
 /** The planner's visible text, with every input's value, once hydrated. */
 async function plannerText(page: Page): Promise<string> {
@@ -39,11 +35,6 @@ async function plannerText(page: Page): Promise<string> {
     return text;
   });
 }
-
-const firstMatch = (text: string, re: RegExp) => {
-  const m = re.exec(text);
-  return m ? text.slice(Math.max(0, m.index - 40), m.index + 20) : null;
-};
 
 describe("the person's units in Chromium", () => {
   let browser: Browser;

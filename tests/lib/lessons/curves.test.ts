@@ -1,7 +1,8 @@
 // The classroom's "what if" and its curves without a database: the adjustment applied to every
 // item, the engine-speed grid, the deltas' speeds, and that each curve is calc's own boost curve.
 import { describe, expect, it } from "vitest";
-import { boostCurve, exampleCombination, exampleTwinScrewCombination, type Combination } from "@/calc";
+import { CalcConvergenceError, boostCurve, combinationSchema, exampleCombination, exampleTwinScrewCombination, type Combination } from "@/calc";
+import { bigInchTwinScrew } from "@/lib/combinations/demo-specs";
 import { SERIES_LABEL, SERIES_METRIC, VE_SCALE_MAX, VE_SCALE_MIN, applyWhatIf, deltaSpeeds, pointAt, rpmGrid, stepCurves } from "@/lib/lessons/curves";
 import { LESSON_SERIES, type StepItemSnapshot } from "@/lib/lessons/rules";
 
@@ -71,6 +72,26 @@ describe("stepCurves", () => {
     const [bad] = stepCurves([item("bad", a)], { kind: "pulley", diameter: -1 });
     expect(bad.points).toEqual([]);
     expect(bad.error).toMatch(/pulley/i);
+  });
+
+  it("a curve the blower cannot feed says why in the viewer's units", () => {
+    // A 7.4 L under a 0.3 L/rev blower on a 0.5 m pulley: too slow to feed the engine.
+    const base = combinationSchema.parse(bigInchTwinScrew);
+    const slow: Combination = { ...base, blower: { ...base.blower, displacementPerRev: 0.0003 }, drive: { ...base.drive, blowerPulleyDiameter: 0.5 } };
+    let floor = NaN;
+    try {
+      boostCurve(slow, rpmGrid([slow]));
+    } catch (e) {
+      if (e instanceof CalcConvergenceError && e.reason === "blower-too-slow") floor = e.values.floorPressure;
+    }
+    expect(floor).toBeGreaterThan(0);
+    const [imperial] = stepCurves([item("Slow", slow)], { kind: "none" }, "imperial");
+    const [metric] = stepCurves([item("Slow", slow)], { kind: "none" }, "metric");
+    expect(imperial.points).toEqual([]);
+    // source: 1 psi = 6,894.757 Pa (NIST SP 811); calc's own message says kPa whatever the viewer reads.
+    expect(imperial.error).toContain(`below ${(floor / 6894.757).toFixed(1)} psi absolute`);
+    expect(imperial.error).not.toMatch(/kPa/);
+    expect(metric.error).toContain(`below ${(floor / 1000).toFixed(1)} kPa absolute`);
   });
 
   it("every lesson series maps to a field of an operating point with a label", () => {
