@@ -10,7 +10,7 @@ import { Notice } from "@/components/ui/notice";
 import type { LessonStep, StepSource } from "@/db/repo/lessons";
 import { SERIES_LABEL } from "@/lib/lessons/curves";
 import { LESSON_SERIES, type LessonSeries, type StepInput } from "@/lib/lessons/rules";
-import { blankItem, changeDraft, stepInput, type ItemDraft } from "@/lib/lessons/step-draft";
+import { blankItem, changeDraft, localizeStepErrors, stepInput, type ItemDraft } from "@/lib/lessons/step-draft";
 import { StepItemFields } from "./step-item-fields";
 import { StepNoteField } from "./step-note-field";
 
@@ -38,7 +38,7 @@ export function StepEditor({ sources, initial, save, onDone, heading, unitSystem
   const [note, setNote] = useState(initial?.note ?? "");
   const [result, setResult] = useState<SaveResult | null>(null);
   const [pending, start] = useTransition();
-  const errors = result && !result.ok ? (result.fieldErrors ?? {}) : {};
+  const errors = result && !result.ok ? localizeStepErrors(result.fieldErrors ?? {}, unitSystem) : {};
 
   const patch = (i: number, change: Partial<ItemDraft>) =>
     setItems((list) =>

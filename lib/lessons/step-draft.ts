@@ -1,8 +1,9 @@
 // The step editor's drafts: what the form holds per item (strings, in the author's units) and how
 // it becomes the API's input (SI), so the form and its tests share one conversion.
 import { fromSI, toSI, unitLabel, type UnitSystem } from "@/calc";
-import { displayValue } from "@/lib/units/format";
-import type { ItemChange, ItemChangeInput, StepInput } from "./rules";
+import { localizeMessage } from "@/lib/combinations/form-model";
+import { displayValue, quantityText } from "@/lib/units/format";
+import { WHAT_IF_ALTITUDE_MAX, WHAT_IF_ALTITUDE_MIN, type ItemChange, type ItemChangeInput, type StepInput } from "./rules";
 
 export type ChangeKind = "none" | ItemChange["kind"];
 /** The what-if as typed: VE change in %, pulley in in/mm, intercooler effectiveness in %, altitude in ft/m. */
@@ -71,4 +72,20 @@ export function stepInput(title: string, items: ItemDraft[], series: StepInput["
     series,
     note,
   };
+}
+
+/**
+ * The server's field errors for a step with the what-if limits in the author's units: the rules
+ * state them in SI ("Altitude must be between -500 and 6000 m"), the boxes take ft or in.
+ */
+export function localizeStepErrors(errors: Record<string, string[]>, system: UnitSystem): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  for (const [path, messages] of Object.entries(errors)) {
+    if (/^items\.\d+\.change\.altitude$/.test(path)) {
+      out[path] = messages.map(() => `Altitude must be between ${quantityText("altitude", WHAT_IF_ALTITUDE_MIN, system, 0)} and ${quantityText("altitude", WHAT_IF_ALTITUDE_MAX, system, 0)}.`);
+    } else if (/^items\.\d+\.change\.diameter$/.test(path)) {
+      out[path] = messages.map((m) => localizeMessage("drive.blowerPulleyDiameter", m.replace(/\.$/, ""), system));
+    } else out[path] = messages;
+  }
+  return out;
 }

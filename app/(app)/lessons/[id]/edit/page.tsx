@@ -6,6 +6,7 @@ import { getDb } from "@/db/client";
 import { NotFoundError } from "@/lib/errors";
 import { getLesson, listStepSources } from "@/db/repo/lessons";
 import { toActor } from "@/db/repo/users";
+import { personUnits } from "@/lib/units/person";
 import { deleteLessonAction, deleteStepAction, moveStepAction, regenerateCodeAction, saveLessonAction, saveStepAction, setPublishedAction } from "../../actions";
 import { LessonMetaForm } from "./lesson-meta-form";
 import { LessonSettings } from "./lesson-settings";
@@ -55,7 +56,7 @@ export default async function EditLessonPage({ params }: { params: Promise<{ id:
         save={saveStepAction.bind(null, lesson.id)}
         remove={deleteStepAction.bind(null, lesson.id)}
         move={moveStepAction.bind(null, lesson.id)}
-        unitSystem={user.unitSystem}
+        unitSystem={personUnits(user)}
       />
     </div>
   );
