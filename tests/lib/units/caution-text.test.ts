@@ -69,3 +69,47 @@ describe("solver errors in the person's units", () => {
     expect(calcErrorText("odd", "metric")).toBe("The model could not solve this combination.");
   });
 });
+
+describe("whole texts, worded once for every page", () => {
+  // Figures worked by hand: 0.072 m = 2.83 in, 0.076 m = 2.99 in (1 in = 0.0254 m); 409.15 K =
+  // 136 °C = 276.8 °F, 333.15 K = 60 °C = 140 °F (NIST SP 811, B.8); the VE curve rises from 0.84
+  // at 1,500 rpm to 1.90 at 2,500 rpm: 1.06 per 1,000 rpm.
+  it("the belt caution", () => {
+    expect(cautionText(of("pulley-below-belt-minimum"), "imperial")).toBe(
+      "The 2.83 in blower pulley is below the 2.99 in the belt should wrap; expect belt slip, heat and wear. Check the belt maker's minimum.",
+    );
+    expect(cautionText(of("pulley-below-belt-minimum"), "metric")).toBe(
+      "The 72.0 mm blower pulley is below the 76.0 mm the belt should wrap; expect belt slip, heat and wear. Check the belt maker's minimum.",
+    );
+  });
+
+  it("the charge temperature caution", () => {
+    const tail = " (a conservative rule of thumb for knock risk). Consider an intercooler, less boost, better fuel or less ignition advance.";
+    expect(cautionText(of("charge-temperature-high"), "imperial")).toBe(`Charge temperature reaches 277 °F at 5,000 rpm, above 140 °F${tail}`);
+    expect(cautionText(of("charge-temperature-high"), "metric")).toBe(`Charge temperature reaches 136 °C at 5,000 rpm, above 60 °C${tail}`);
+  });
+
+  it("the VE caution, the same in either system", () => {
+    const text =
+      "The VE curve looks implausible (from 84 % to 190 %, steepest change 106 % per 1,000 rpm); wide-open-throttle VE usually lies between 50 % and 130 % and changes smoothly. Check the curve.";
+    expect(cautionText(of("ve-implausible"), "imperial")).toBe(text);
+    expect(cautionText(of("ve-implausible"), "metric")).toBe(text);
+  });
+
+  it("the starved blower's error", () => {
+    // Blower speed = 5,000 rpm × 0.03/0.5 × (1 − 0.02 slip) = 294 rpm; the floor is 5 % of the
+    // inlet pressure (101,325 − 1,500 Pa): 4,991 Pa = 0.72 psi (1 psi = 6,894.757 Pa) = 5.0 kPa.
+    const slow = { ...demo, engine: { ...demo.engine, displacement: 0.02 }, blower: { ...demo.blower, displacementPerRev: 0.0001 }, drive: { ...demo.drive, crankPulleyDiameter: 0.03, blowerPulleyDiameter: 0.5 } };
+    let err: unknown = null;
+    try {
+      solvePoint(slow, 5000);
+    } catch (e) {
+      err = e;
+    }
+    const tail = " absolute. Choose a smaller blower pulley or a larger blower.";
+    expect(calcErrorText(err, "imperial")).toBe(`At 5,000 rpm the blower (294 rpm) cannot feed the engine: manifold pressure would fall below 0.7 psi${tail}`);
+    expect(calcErrorText(err, "metric")).toBe(`At 5,000 rpm the blower (294 rpm) cannot feed the engine: manifold pressure would fall below 5.0 kPa${tail}`);
+    expect(calcErrorText(new Error("plain"), "metric", "unused")).toBe("plain");
+    expect(calcErrorText(42, "metric", "Given fallback.")).toBe("Given fallback.");
+  });
+});
