@@ -2,7 +2,7 @@
 // (1 psi = 6894.757 Pa, 1 in = 0.0254 m exact, 1 hp = 745.6999 W); the digits per kind are the
 // product's own choice (no outside source).
 import { describe, expect, it } from "vitest";
-import { deltaText, digitsOf, displayValue, figure, percentText, quantityText } from "@/lib/units/format";
+import { deltaText, digitsOf, displayValue, figure, inputDigitsOf, percentText, quantityText, roundTo } from "@/lib/units/format";
 
 describe("display rounding", () => {
   it("pressure: 8 psi shows as 8.0 psi, 55.2 kPa as 55.2 kPa", () => {
@@ -32,5 +32,33 @@ describe("display rounding", () => {
   it("percentages", () => {
     expect(percentText(0.853)).toBe("85 %");
     expect(percentText(0.8536, 1)).toBe("85.4 %");
+  });
+});
+
+describe("input boxes", () => {
+  it("boxes are a step finer than readouts, per unit (the product's own choice)", () => {
+    expect([inputDigitsOf("length-small", "imperial"), inputDigitsOf("length-small", "metric")]).toEqual([3, 2]);
+    expect([inputDigitsOf("pressure", "imperial"), inputDigitsOf("pressure", "metric")]).toEqual([2, 1]);
+    expect([inputDigitsOf("displacement", "imperial"), inputDigitsOf("displacement", "metric")]).toEqual([1, 3]);
+    expect([inputDigitsOf("temperature", "imperial"), inputDigitsOf("speed", "metric")]).toEqual([1, 0]);
+    expect([digitsOf("length-small", "imperial"), digitsOf("displacement", "metric"), digitsOf("speed", "metric")]).toEqual([2, 2, 0]);
+  });
+
+  it("rounds by an exact power of ten and leaves non-finite values alone", () => {
+    expect(roundTo(1.2000000000000002, 3)).toBe(1.2);
+    expect(roundTo(14.695948775513449, 2)).toBe(14.7);
+    expect(roundTo(2.875, 3)).toBe(2.875);
+    expect(roundTo(-0.55, 1)).toBe(-0.5); // Math.round rounds halves up, towards +∞
+    expect(roundTo(1234.5, 0)).toBe(1235);
+    expect(roundTo(1234.5, -2)).toBe(1200);
+    expect(roundTo(Number.NaN, 2)).toBeNaN();
+    expect(roundTo(Number.POSITIVE_INFINITY, 2)).toBe(Number.POSITIVE_INFINITY);
+    expect(roundTo(Number.NEGATIVE_INFINITY, 0)).toBe(Number.NEGATIVE_INFINITY);
+  });
+
+  it("percentages keep the sign and the digits asked for", () => {
+    expect(percentText(-0.05)).toBe("-5 %");
+    expect(percentText(1.9)).toBe("190 %");
+    expect(percentText(0.5, 2)).toBe("50.00 %");
   });
 });
