@@ -9,6 +9,7 @@ export default defineConfig({
   test: {
     include: ["tests/calc/**/*.test.ts", "tests/lib/**/*.test.ts", "tests/db/policy.test.ts"],
     environment: "node",
+    setupFiles: ["tests/support/mutation-setup.ts"],
     testTimeout: 30_000,
   },
 });
