@@ -9,7 +9,7 @@ import fs from "node:fs";
 const args = process.argv.slice(2);
 const showAt = args.indexOf("--survivors");
 const prefix = showAt >= 0 ? (args[showAt + 1] ?? "") : null;
-const file = args.find((a, i) => !a.startsWith("--") && i !== showAt + 1) ?? (fs.existsSync("reports/mutation/progress.jsonl") ? "reports/mutation/progress.jsonl" : "reports/mutation/mutation.json");
+const file = args.find((a, i) => !a.startsWith("--") && (showAt < 0 || i !== showAt + 1)) ?? (fs.existsSync("reports/mutation/progress.jsonl") ? "reports/mutation/progress.jsonl" : "reports/mutation/mutation.json");
 
 let rows;
 if (file.endsWith(".jsonl")) {

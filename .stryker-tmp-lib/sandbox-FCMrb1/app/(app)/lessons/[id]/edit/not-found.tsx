@@ -1,0 +1,4 @@
+// @ts-nocheck
+import { LessonNotFound } from "@/components/lessons/lesson-not-found";
+
+export default LessonNotFound;

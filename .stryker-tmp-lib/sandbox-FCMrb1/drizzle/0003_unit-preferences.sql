@@ -1,0 +1,1 @@
+ALTER TABLE "users" ADD COLUMN "unit_choices" jsonb DEFAULT '{}'::jsonb NOT NULL;

@@ -1,0 +1,3 @@
+// @ts-nocheck
+const config = { plugins: { "@tailwindcss/postcss": {} } };
+export default config;

@@ -1,0 +1,97 @@
+// @ts-nocheck
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { CalcInputError, boostCurve, calibrateVe, exampleCombination, type Combination } from "@/calc";
+import { combinationArb, relDiff } from "./support/arbitraries";
+
+/** Measure a combination at its own VE-curve speeds, as a perfect datalog would. */
+function synthetic(c: Combination) {
+  const rpms = c.engine.veCurve.map((p) => p.rpm);
+  const points = boostCurve(c, rpms);
+  fc.pre(points.every((p) => p.boostGauge < 400_000)); // the measurement schema's range
+  return points;
+}
+
+describe("calibrateVe", () => {
+  describe("recovers the VE curve that generated the boost", () => {
+    it("from boost alone (model manifold temperature)", () => {
+      fc.assert(
+        fc.property(combinationArb, (c) => {
+          const points = synthetic(c);
+          const result = calibrateVe(c, points.map((p) => ({ rpm: p.rpm, boostGauge: p.boostGauge })));
+          expect(result.veCurve.map((p) => p.rpm)).toEqual(c.engine.veCurve.map((p) => p.rpm));
+          result.veCurve.forEach((p, i) => expect(relDiff(p.ve, c.engine.veCurve[i].ve)).toBeLessThan(1e-9));
+          for (const r of result.residuals) {
+            expect(r.boostResidual).not.toBeNull();
+            expect(Math.abs(r.boostResidual!)).toBeLessThan(1e-6 * c.ambient.pressure);
+            expect(r.temperatureResidual).toBeNull();
+          }
+        }),
+        { numRuns: 150 },
+      );
+    });
+
+    it("from boost and measured manifold temperature", () => {
+      fc.assert(
+        fc.property(combinationArb, (c) => {
+          const points = synthetic(c);
+          fc.pre(points.every((p) => p.manifoldTemperature <= 500)); // a temperature sensor's plausible range
+          const result = calibrateVe(
+            c,
+            points.map((p) => ({ rpm: p.rpm, boostGauge: p.boostGauge, manifoldTemperature: p.manifoldTemperature })),
+          );
+          result.veCurve.forEach((p, i) => expect(relDiff(p.ve, c.engine.veCurve[i].ve)).toBeLessThan(1e-9));
+          for (const r of result.residuals) expect(Math.abs(r.temperatureResidual!)).toBeLessThan(1e-6);
+        }),
+        { numRuns: 150 },
+      );
+    });
+  });
+
+  describe("uses the measured temperature instead of the model's", () => {
+    it("VE scales with the measured manifold temperature, VE = ṁ·R·Td/(Pm·Vd·N/120)", () => {
+      // calc/README.md (calibrateVe): at a measured PR the blower's delivery is fixed, so VE ∝ Td = T0·(Tm/T0)^n,
+      // with the default n = 0.5 of the charge-temperature refinement (calc/README.md).
+      fc.assert(
+        fc.property(combinationArb, fc.double({ min: -20, max: 40, noNaN: true }), (c, dT) => {
+          const points = synthetic(c);
+          fc.pre(points.every((p) => p.manifoldTemperature + dT <= 500)); // a temperature sensor's plausible range
+          const result = calibrateVe(
+            c,
+            points.map((p) => ({ rpm: p.rpm, boostGauge: p.boostGauge, manifoldTemperature: p.manifoldTemperature + dT })),
+          );
+          result.veCurve.forEach((p, i) => {
+            const expected = c.engine.veCurve[i].ve * Math.sqrt((points[i].manifoldTemperature + dT) / points[i].manifoldTemperature);
+            expect(relDiff(p.ve, expected)).toBeLessThan(1e-9);
+          });
+          result.residuals.forEach((r) => expect(r.temperatureResidual!).toBeCloseTo(-dT, 6));
+        }),
+        { numRuns: 100 },
+      );
+    });
+  });
+
+  describe("rejects impossible measurements", () => {
+    it("names a boost beyond the blower's dead-head at that speed", () => {
+      const c = exampleCombination();
+      try {
+        // Demo Roots at 1500 rpm: dead-head ratio ≈ 2.7, far below the ≈ 4.5 that 350 kPa of boost needs.
+        calibrateVe(c, [{ rpm: 1500, boostGauge: 350_000 }]);
+        expect.unreachable();
+      } catch (e) {
+        expect(e).toBeInstanceOf(CalcInputError);
+        expect((e as CalcInputError).field).toBe("measured.0.boostGauge");
+      }
+    });
+
+    it("keeps the caller's index in the field path after sorting by rpm", () => {
+      const c = exampleCombination();
+      try {
+        calibrateVe(c, [{ rpm: 5000, boostGauge: 30_000 }, { rpm: 1500, boostGauge: 350_000 }]);
+        expect.unreachable();
+      } catch (e) {
+        expect((e as CalcInputError).field).toBe("measured.1.boostGauge");
+      }
+    });
+  });
+});

@@ -1,0 +1,3 @@
+// @ts-nocheck
+// Tests import server modules directly; the real "server-only" guard throws outside React Server Components.
+export {};
