@@ -7,10 +7,10 @@ export type CleaningQuery = Partial<Record<keyof CleaningOptions, string>>;
 export function cleaningFromQuery(q: CleaningQuery): CleaningOptions {
   const defaults = cleaningSchema.parse({});
   const out = { ...defaults };
+  // A missing option parses to its default too.
   for (const k of Object.keys(defaults) as (keyof CleaningOptions)[]) {
-    if (q[k] === undefined) continue;
     const r = cleaningSchema.shape[k].safeParse(q[k]);
-    if (r.success && r.data !== undefined) out[k] = r.data;
+    if (r.success) out[k] = r.data;
   }
   return out;
 }

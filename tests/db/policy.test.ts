@@ -20,6 +20,10 @@ const RULES: [string, (a: Actor) => boolean, Role[]][] = [
   ["canWriteRecommendations", policy.canWriteRecommendations, ["tuner", "sales", "admin"]],
   ["canAuthorLessons", policy.canAuthorLessons, ["instructor", "admin"]],
   ["canManageUsers", policy.canManageUsers, ["admin"]],
+  // Orders (DEVELOPERS.md, "Orders"): staff follow them; refunds only admin and sales; terms only admin.
+  ["canSeeOrders", policy.canSeeOrders, ["tuner", "sales", "admin"]],
+  ["canRefundOrders", policy.canRefundOrders, ["sales", "admin"]],
+  ["canEditShopTerms", policy.canEditShopTerms, ["admin"]],
 ];
 
 describe("role rules", () => {

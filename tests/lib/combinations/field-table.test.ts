@@ -5,7 +5,7 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
 import { combinationSchema, REFINEMENT_DEFAULTS } from "@/calc";
-import { editorLabelOf, FORM_ONLY_FIELDS, SPEC_FIELDS } from "@/lib/combinations/field-table";
+import { editorLabelOf, fieldAt, FORM_ONLY_FIELDS, SPEC_FIELDS, valueAt } from "@/lib/combinations/field-table";
 import { FIELD_KINDS } from "@/lib/combinations/form-model";
 
 /** Dotted paths of a zod schema's leaves; an array (the VE curve) counts as one leaf. */
@@ -74,5 +74,25 @@ describe("the combination field table", () => {
   it("labels each field once, so the history diff never shows two rows alike", () => {
     const labels = SPEC_FIELDS.map((f) => f.label);
     expect(new Set(labels).size).toBe(labels.length);
+  });
+});
+
+describe("paths into the table and into a spec", () => {
+  it("a VE row of any index finds the row's field, two-digit rows too", () => {
+    expect(fieldAt("engine.veCurve.0.rpm")).toBe(fieldAt("engine.veCurve.#.rpm"));
+    expect(fieldAt("engine.veCurve.12.ve")).toBe(fieldAt("engine.veCurve.#.ve"));
+    expect(fieldAt("engine.veCurve.12.ve")).toBeDefined();
+    expect(fieldAt("engine.veCurve..ve")).toBeUndefined();
+    expect(editorLabelOf("engine.veCurve.10.rpm")).toBe(editorLabelOf("engine.veCurve.1.rpm"));
+    expect(() => editorLabelOf("engine.nothing")).toThrow("No field engine.nothing in the combination field table");
+  });
+
+  it("a value at a path stops at the first part that is not an object", () => {
+    expect(valueAt({ a: { b: 2 } }, "a.b")).toBe(2);
+    expect(valueAt({ a: null }, "a.b")).toBeUndefined();
+    expect(valueAt({ a: 5 }, "a.b")).toBeUndefined();
+    expect(valueAt({ a: "text" }, "a.length")).toBeUndefined();
+    expect(valueAt(undefined, "a")).toBeUndefined();
+    expect(valueAt({ a: [10, 20] }, "a.1")).toBe(20);
   });
 });

@@ -142,3 +142,14 @@ describe("cautions of a step", () => {
     expect(stepCautions([...curves, curves[1]]).length).toBe(list.length);
   });
 });
+
+describe("a VE change's sign", () => {
+  it("plus, minus (U+2212) or ± for no change after rounding to whole percent", () => {
+    expect(changeText({ kind: "ve", scale: 1.004 }, "metric")).toBe("VE ±0 %");
+    expect(changeText({ kind: "ve", scale: 0.996 }, "metric")).toBe("VE ±0 %");
+    expect(changeText({ kind: "ve", scale: 1 }, "imperial")).toBe("VE ±0 %");
+    expect(changeText({ kind: "ve", scale: 1.006 }, "metric")).toBe("VE +1 %");
+    expect(changeText({ kind: "ve", scale: 0.99 }, "metric")).toBe("VE −1 %");
+    expect(changeText({ kind: "ve", scale: 1.2 }, "metric")).toBe("VE +20 %");
+  });
+});
