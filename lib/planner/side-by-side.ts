@@ -58,5 +58,6 @@ export function deltaRows(specs: readonly Combination[], speeds: readonly number
 export function defaultSpeeds(specs: readonly Combination[]): number[] {
   if (!specs.length) return [3000, 4500, 6000];
   const top = Math.min(...specs.map((s) => s.engine.redlineRpm));
-  return [...new Set([3000, 4500, top].filter((n) => n <= top))].sort((a, b) => a - b);
+  // Ascending as written: top is the largest speed kept.
+  return [...new Set([3000, 4500, top].filter((n) => n <= top))];
 }

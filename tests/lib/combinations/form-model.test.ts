@@ -345,3 +345,27 @@ describe("validation names the field, in the user's units", () => {
     expect(unitOf("engine.cylinders", "metric")).toBe("");
   });
 });
+
+describe("units beside the boxes", () => {
+  it("VE rows of any index, counts and ratios without a unit, unknown paths without one", () => {
+    expect(unitOf("engine.veCurve.0.ve", "imperial")).toBe("%");
+    expect(unitOf("engine.veCurve.12.ve", "metric")).toBe("%");
+    expect(unitOf("engine.veCurve.12.rpm", "metric")).toBe("rpm");
+    expect(unitOf("drive.blowerPulleyDiameter", "imperial")).toBe("in");
+    expect(unitOf("drive.blowerPulleyDiameter", "metric")).toBe("mm");
+    expect(unitOf("blower.builtInVolumeRatio", "metric")).toBe("");
+    expect(unitOf("no.such.field", "metric")).toBe("");
+  });
+
+  it("a box left empty or holding words reaches calc as a missing number, named on its field", () => {
+    const f = toForm(combinationSchema.parse(workTruckV6), "imperial");
+    for (const bad of ["", null, "six"] as unknown[]) {
+      const v = validateForm({ ...f, engine: { ...f.engine, cylinders: bad as number } }, "imperial");
+      expect(v.ok).toBe(false);
+      if (!v.ok) expect(Object.keys(v.errors)).toEqual(["engine.cylinders"]);
+    }
+    // A number typed as text is read as that number.
+    const v = validateForm({ ...f, engine: { ...f.engine, cylinders: "8" as unknown as number } }, "imperial");
+    expect(v.ok && v.spec.engine.cylinders).toBe(8);
+  });
+});

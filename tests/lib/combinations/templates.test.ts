@@ -60,5 +60,11 @@ describe("templates", () => {
     expect(fieldError(() => startingSpec("v6-roots", { redlineRpm: "fast" }, "metric")).message).toBe("Redline must be a number.");
     expect(fieldError(() => startingSpec("v6-roots", { blowerKind: "centrifugal" }, "metric")).field).toBe("blowerKind");
     expect(startingSpec("v6-roots", { blowerKind: "twin-screw" }, "metric").blower.kind).toBe("twin-screw");
+    // Spaces around a kind are trimmed; a kind left out keeps the template's; a bad one is named.
+    expect(startingSpec("v6-roots", { blowerKind: " twin-screw " }, "metric").blower.kind).toBe("twin-screw");
+    expect(startingSpec("v6-roots", {}, "metric").blower.kind).toBe(templateSpec("v6-roots").blower.kind);
+    const bad = fieldError(() => startingSpec("v6-roots", { blowerKind: "centrifugal" }, "metric"));
+    expect([bad.field, bad.message]).toEqual(["blowerKind", "Blower kind must be Roots or twin-screw."]);
+    expect(fieldError(() => startingSpec(BLANK_START, { ...all, blowerKind: "" }, "metric")).field).toBe("blowerKind");
   });
 });
