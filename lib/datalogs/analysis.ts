@@ -121,7 +121,8 @@ export function withFittedVe(current: CombinationInput, veCurve: readonly VePoin
   const below = old.filter((p) => p.rpm < first.rpm).map((p) => ({ rpm: p.rpm, ve: p.ve * lowScale }));
   const above = old.filter((p) => p.rpm > last.rpm).map((p) => ({ rpm: p.rpm, ve: p.ve * highScale }));
   const room = MAX_VE_POINTS - fitted.length;
-  const merged = [...below.slice(-Math.max(0, Math.floor(room / 2))), ...fitted.map((p) => ({ rpm: p.rpm, ve: p.ve })), ...above.slice(0, Math.max(0, Math.ceil(room / 2)))];
+  // The nearest points on each side. Below, slice from an index: slice(-0) would keep them all.
+  const merged = [...below.slice(below.length - Math.floor(room / 2)), ...fitted.map((p) => ({ rpm: p.rpm, ve: p.ve })), ...above.slice(0, Math.max(0, Math.ceil(room / 2)))];
   return { ...c, engine: { ...c.engine, veCurve: merged.map((p) => ({ rpm: p.rpm, ve: Math.min(2, Math.max(0.2, p.ve)) })) } };
 }
 

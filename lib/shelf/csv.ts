@@ -133,8 +133,9 @@ export function parseShelfCsv(kind: ShelfKind, text: string): CsvParseResult<Pul
     if (!result.success) {
       for (const issue of result.error.issues) {
         const field = String(issue.path[0] ?? "");
-        // SI bounds in a message would confuse: the file is in mm and L/rev.
-        const message = issue.message.replace(/between ([\d.]+) and ([\d.]+) m\b\.?/, (_m, a, b) => `between ${Number(a) * 1000} and ${Number(b) * 1000} mm.`);
+        // SI bounds in a message would confuse: the file is in mm. Lengths only, the message ending in
+        // metres ("m."): calc's "m³/rev" message names its L/rev range itself, and \b matched before "³".
+        const message = issue.message.replace(/between ([\d.]+) and ([\d.]+) m\.?$/, (_m, a, b) => `between ${Number(a) * 1000} and ${Number(b) * 1000} mm.`);
         errors.push({ line: here, column: toColumn[field] ?? field, message });
       }
       continue;
