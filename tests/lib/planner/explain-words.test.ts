@@ -72,6 +72,8 @@ describe("explainSentence", () => {
     expect(explainSentence(pt(), pt({ netPower: A.netPower + 1 }), "imperial")).toBe("Against the saved revision at 4,000 rpm: boost ±0.0 psi and net power ±0 hp.");
     expect(explainSentence(pt(), pt({ netPower: A.netPower - 1 }), "metric")).toBe("Against the saved revision at 4,000 rpm: boost ±0.0 kPa and net power ±0 kW.");
     expect(explainSentence(pt(), pt({ netPower: A.netPower + 0.999 }), "imperial")).toBeNull();
+    // Power alone moved: the sentence stops at net power, without the drive's share.
+    expect(explainSentence(pt(), pt({ netPower: A.netPower + 5 * HP, drivePower: A.drivePower + 2 * HP }), "imperial")).toBe("Against the saved revision at 4,000 rpm: boost ±0.0 psi and net power +5 hp.");
     expect(explainSentence(pt(), pt({ netPower: A.netPower - 0.999 }), "imperial")).toBeNull();
   });
 
