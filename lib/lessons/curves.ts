@@ -98,12 +98,15 @@ export function stepCurves(items: readonly StepItemSnapshot[], live: WhatIf, sys
   });
 }
 
-/** The engine speeds of the deltas table: mid-range and near the lowest redline, rounded to 500 rpm. */
+/**
+ * The engine speeds of the deltas table: mid-range and near the lowest redline, rounded to 500 rpm.
+ * Always two: the top is at least 2000 rpm and the middle at most half of it plus 250, or 1500.
+ */
 export function deltaSpeeds(specs: readonly Combination[]): number[] {
   const low = Math.min(...specs.map((s) => s.engine.redlineRpm));
   const top = Math.max(2000, Math.floor((low - 250) / 500) * 500);
   const mid = Math.max(1500, Math.round(top / 2 / 500) * 500);
-  return mid === top ? [top] : [mid, top];
+  return [mid, top];
 }
 
 /** The point of a curve at an engine speed (the grid holds every 250 rpm), or null. */

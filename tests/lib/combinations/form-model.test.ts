@@ -369,3 +369,65 @@ describe("units beside the boxes", () => {
     expect(v.ok && v.spec.engine.cylinders).toBe(8);
   });
 });
+
+describe("edges of the form's conversions", () => {
+  it("an empty box or null reaches calc as NaN, not as 0; a number typed as text as that number", () => {
+    const f = toForm(demo, "imperial");
+    // Number("") and Number(null) are both 0 in JavaScript (ECMA-262 ToNumber), which would be a real
+    // (if invalid) cylinder count; the form must say "missing" instead.
+    for (const empty of ["", null, undefined] as unknown[]) {
+      expect(toSpec({ ...f, engine: { ...f.engine, cylinders: empty as number } }, "imperial").engine.cylinders, String(empty)).toBeNaN();
+    }
+    expect(toSpec({ ...f, engine: { ...f.engine, cylinders: "6" as unknown as number } }, "imperial").engine.cylinders).toBe(6);
+    expect(toSpec({ ...f, engine: { ...f.engine, cylinders: 4 } }, "imperial").engine.cylinders).toBe(4);
+  });
+
+  it("injectors show as on only when both their count and their flow are stored", () => {
+    // A hand-made stored spec with one of the two missing (the schema refuses it, an older save might hold it).
+    const fuel = (injectorCount: number | null, injectorFlow: number | null): Combination => ({ ...demo, fuel: { ...demo.fuel, injectorCount, injectorFlow } });
+    expect(toForm(fuel(6, 0.005), "imperial").fuel.injectorsOn).toBe(true);
+    expect(toForm(fuel(6, null), "imperial").fuel.injectorsOn).toBe(false);
+    expect(toForm(fuel(null, 0.005), "imperial").fuel.injectorsOn).toBe(false);
+    expect(toForm(fuel(null, null), "imperial").fuel.injectorsOn).toBe(false);
+  });
+
+  it("converting to the same units hands back the form untouched; to others, re-expresses it", () => {
+    const f = toForm(demo, "imperial");
+    f.drive.blowerPulleyDiameter = 3.4567; // finer than the box's 3 decimals: left alone when nothing changes
+    expect(convertForm(f, "imperial", "imperial")).toBe(f);
+    expect(convertForm(f, "imperial", "imperial", demo).drive.blowerPulleyDiameter).toBe(3.4567);
+    // source: 1 in = 25.4 mm exactly (NIST SP 811): 3.4 in = 86.36 mm, 6 in = 152.4 mm.
+    const g = toForm(demo, "imperial");
+    const metric = convertForm(g, "imperial", "metric");
+    expect(metric.drive.blowerPulleyDiameter).toBeCloseTo(86.36, 9);
+    expect(metric.drive.crankPulleyDiameter).toBeCloseTo(152.4, 9);
+  });
+
+  it("a box edited away from its stored value is converted from what it shows, not from the stored value", () => {
+    const f = toForm(demo, "imperial");
+    f.drive.blowerPulleyDiameter = 3.3;
+    // source: 3.3 in × 25.4 mm/in = 83.82 mm (NIST SP 811); the stored 3.4 in would give 86.36 mm.
+    expect(convertForm(f, "imperial", "metric", demo).drive.blowerPulleyDiameter).toBeCloseTo(83.82, 9);
+    // The untouched crank pulley still comes from its stored value: 6 in = 152.4 mm.
+    expect(convertForm(f, "imperial", "metric", demo).drive.crankPulleyDiameter).toBeCloseTo(152.4, 9);
+  });
+});
+
+describe("localizeMessage leaves alone what it cannot read", () => {
+  const pulley = "drive.blowerPulleyDiameter";
+  it("a limit already in another unit, a limit that is not a number, a message over two lines", () => {
+    for (const message of [
+      "Ambient pressure must be between 30 and 110 kPa",
+      "Blower pulley diameter must be between 0.03 and 0.5 in",
+      "Blower pulley diameter must be between 0.03 and some m",
+      "Blower pulley diameter must be between few and 0.5 m",
+      "Check the drive.\nBlower pulley diameter must be between 0.03 and 0.5 m",
+    ]) {
+      const path = message.startsWith("Ambient") ? "ambient.pressure" : pulley;
+      expect(localizeMessage(path, message, "imperial"), message).toBe(message);
+    }
+    // The same message in SI units is put in inches: 0.03 m = 1.181 in → 1.19 rounded inward, 0.5 m = 19.685 in → 19.6
+    // (1 in = 0.0254 m, NIST SP 811; inward rounding to three figures: author's choice).
+    expect(localizeMessage(pulley, "Blower pulley diameter must be between 0.03 and 0.5 m", "imperial")).toBe("Blower pulley diameter must be between 1.19 and 19.6 in");
+  });
+});

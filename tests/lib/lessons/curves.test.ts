@@ -49,6 +49,17 @@ describe("speeds", () => {
     expect(pointAt(pts, 3000)).toBe(pts[1]);
     expect(pointAt(pts, 3000 + 5e-7)).toBe(pts[1]);
     expect(pointAt(pts, 3000.001)).toBeNull();
+    // The bound itself is outside: a point at 0 rpm and a speed of exactly 1e-6 rpm (1e-6 − 0 is exact in binary floating point).
+    const zero = [{ ...pts[0], rpm: 0 }];
+    expect(pointAt(zero, 1e-6)).toBeNull();
+    expect(pointAt(zero, 5e-7)).toBe(zero[0]);
+  });
+
+  it("the deltas always hold two speeds, the middle one below the top", () => {
+    // Worked by hand: top = max(2000, ⌊(redline − 250)/500⌋·500), middle = max(1500, top/2 to 500, halves up as Math.round does).
+    for (const [redline, speeds] of [[1000, [1500, 2000]], [2749, [1500, 2000]], [2750, [1500, 2500]], [4750, [2500, 4500]], [20000, [10000, 19500]]] as const) {
+      expect(deltaSpeeds([withRedline(exampleCombination(), redline)]), String(redline)).toEqual(speeds);
+    }
   });
 });
 

@@ -56,3 +56,45 @@ describe("fillNoteFigures", () => {
     );
   });
 });
+
+// Hand-made curves for the edges: the blower figure is a speed, shown in rpm in both systems with no
+// decimals (calc/units.ts: speed stays rpm), so each expected text below is worked out by hand.
+describe("figures on hand-made points", () => {
+  const base = curves[0].points[0];
+  const pt = (rpm: number, blowerRpm: number, withinRange = true) => ({ ...base, rpm, blowerRpm, withinRange });
+  const curveOf = (points: ReturnType<typeof pt>[]) => [{ ...curves[0], points }];
+  // Deliberately not on one straight line, so reading the wrong neighbour gives another number.
+  const bent = curveOf([pt(1000, 2000), pt(2000, 5000), pt(3000, 6000), pt(4000, 10000)]);
+
+  it("reads the first point exactly at its own speed, and nothing just below it", () => {
+    expect(figureText({ figure: "blower", at: 1000, curve: 0 }, bent, "metric")).toEqual({ ok: true, text: "2,000 rpm" });
+    expect(figureText({ figure: "blower", at: 999, curve: 0 }, bent, "metric")).toEqual({ ok: false, reason: "no figure at 999 rpm" });
+    expect(figureText({ figure: "blower", at: 4001, curve: 0 }, bent, "metric")).toEqual({ ok: false, reason: "no figure at 4,001 rpm" });
+    expect(figureText({ figure: "blower", at: 4000, curve: 0 }, bent, "imperial")).toEqual({ ok: true, text: "10,000 rpm" });
+  });
+
+  it("interpolates between the point below and the point above", () => {
+    // 2000 rpm → 5000, 3000 rpm → 6000: at 2500 rpm half way, 5500 (by hand).
+    expect(figureText({ figure: "blower", at: 2500, curve: 0 }, bent, "metric")).toEqual({ ok: true, text: "5,500 rpm" });
+    // 3000 → 6000, 4000 → 10000: a quarter of the way, 6000 + 1000 = 7000.
+    expect(figureText({ figure: "blower", at: 3250, curve: 0 }, bent, "metric")).toEqual({ ok: true, text: "7,000 rpm" });
+  });
+
+  it("a point within range reads at its own speed even when its neighbour is outside the range", () => {
+    const edge = curveOf([pt(1000, 2000, false), pt(2000, 5000), pt(3000, 6000)]);
+    expect(figureText({ figure: "blower", at: 2000, curve: 0 }, edge, "metric")).toEqual({ ok: true, text: "5,000 rpm" });
+    expect(figureText({ figure: "blower", at: 1500, curve: 0 }, edge, "metric")).toEqual({ ok: false, reason: "outside the model's range at 1,500 rpm" });
+    expect(figureText({ figure: "blower", at: 1000, curve: 0 }, edge, "metric")).toEqual({ ok: false, reason: "outside the model's range at 1,000 rpm" });
+    const top = curveOf([pt(1000, 2000), pt(2000, 5000), pt(3000, 6000, false)]);
+    expect(figureText({ figure: "blower", at: 2500, curve: 0 }, top, "metric")).toEqual({ ok: false, reason: "outside the model's range at 2,500 rpm" });
+    expect(figureText({ figure: "blower", at: 2000, curve: 0 }, top, "metric")).toEqual({ ok: true, text: "5,000 rpm" });
+    expect(fillNoteFigures("{blower@redline}", top, "metric")).toBe("`{blower@redline}: outside the model's range at 3,000 rpm`");
+  });
+
+  it("the peak counts only points within the range, and says so when there are none", () => {
+    const highOutside = curveOf([pt(1000, 2000), pt(2000, 5000), pt(3000, 9000, false)]);
+    expect(figureText({ figure: "blower", at: "peak", curve: 0 }, highOutside, "metric")).toEqual({ ok: true, text: "5,000 rpm" });
+    const allOutside = curveOf([pt(1000, 2000, false), pt(2000, 5000, false)]);
+    expect(fillNoteFigures("{blower@peak}", allOutside, "metric")).toBe("`{blower@peak}: outside the model's range`");
+  });
+});

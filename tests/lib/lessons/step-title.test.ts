@@ -26,6 +26,16 @@ describe("step titles", () => {
     for (const t of ["2.8 in pulley", "3.0 L engine", "4500 rpm", "1,000 ft higher", "Intro"]) expect(stripStepNumber(t)).toBe(t);
   });
 
+  it("strip only at the very start, with spaces or none around the number and its mark", () => {
+    // A number inside the title, or right after a word ("V8:"), is part of the title.
+    for (const t of ["Try 2. pulleys", "Pulleys, part 2: smaller", "V8: more boost", "Lap3) again"]) expect(stripStepNumber(t)).toBe(t);
+    expect(stripStepNumber("Step2: Intro")).toBe("Intro");
+    expect(stripStepNumber("step   7 - Intro")).toBe("Intro");
+    expect(stripStepNumber("3 - Cam change")).toBe("Cam change");
+    expect(stripStepNumber("5 . Heat")).toBe("Heat");
+    expect(stripStepNumber("6 — Heat")).toBe("Heat");
+  });
+
   it("refuse a title that is only a number, naming the field", () => {
     const r = stepInputSchema.safeParse(input("1."));
     expect(r.success).toBe(false);
