@@ -2,7 +2,7 @@
 // order whatever order the logs give them, a speed logged twice averaged, a pulley size with no
 // usable bin left out, and a clear message when no log has anything to fit.
 import { describe, expect, it } from "vitest";
-import { combinationSchema } from "@/calc";
+import { combinationSchema, trySolvePoint } from "@/calc";
 import { workTruckV6 } from "@/lib/combinations/demo-specs";
 import type { LogBin } from "@/lib/datalogs/parse";
 import { fitRuns, runsFromLogs, type LogRun } from "@/lib/datalogs/runs";
@@ -61,5 +61,18 @@ describe("fitRuns with nothing to fit", () => {
     const message = "None of the chosen logs has a usable speed bin. Loosen the cleaning or choose other logs.";
     expect(() => fitRuns(current, [])).toThrow(new Error(message));
     expect(() => fitRuns(current, [log("empty", 0.08, [bin(3000, 20000, false), bin(3500, 25000, false)])])).toThrow(new Error(message));
+  });
+});
+
+describe("fitRuns at one pulley size", () => {
+  it("fits the VE curve but leaves the blower as it was: slip needs two sizes to tell apart", () => {
+    const current = combinationSchema.parse(workTruckV6);
+    // Logs from an engine that breathes 5 % better than the spec says (invented), at the stored pulley.
+    const truth = { ...current, engine: { ...current.engine, veCurve: current.engine.veCurve.map((p) => ({ rpm: p.rpm, ve: p.ve * 1.05 })) } };
+    const bins = [2500, 3000, 3500, 4000, 4500].map((rpm) => bin(rpm, trySolvePoint(truth, rpm)!.boostGauge));
+    const fit = fitRuns(current, [log("one", current.drive.blowerPulleyDiameter, bins)]);
+    expect(fit.fitted.map((f) => f.parameter)).toEqual(["engine.veCurve"]);
+    expect(fit.calibrated.blower).toEqual(current.blower);
+    expect(fit.calibrated.engine.veCurve).not.toEqual(current.engine.veCurve);
   });
 });
