@@ -49,7 +49,8 @@ export function profileColumn(values: readonly number[]): ColumnProfile | null {
 
 /** The numbers of every column in the first data rows (unreadable fields left out). */
 export function columnValues(text: string, layout: Pick<LogLayoutGuess, "delimiter" | "decimalComma" | "hasHeader" | "columnCount">): number[][] {
-  const lines = logLines(text).slice(layout.hasHeader ? 1 : 0, SAMPLE_ROWS + 1);
+  const first = layout.hasHeader ? 1 : 0;
+  const lines = logLines(text).slice(first, first + SAMPLE_ROWS);
   const cols: number[][] = Array.from({ length: layout.columnCount }, () => []);
   for (const { text: raw } of lines) {
     const f = splitLine(raw, layout.delimiter);
