@@ -33,7 +33,8 @@ export function brent<C>(
 ): RootResult {
   if (fa === 0) return { root: a, evaluations: 0, converged: true };
   if (fb === 0) return { root: b, evaluations: 0, converged: true };
-  if (!(fa * fb < 0)) return { root: Number.NaN, evaluations: 0, converged: false };
+  // Compare signs, not the product: the product of two tiny values underflows to ±0.
+  if (!((fa < 0 && fb > 0) || (fa > 0 && fb < 0))) return { root: Number.NaN, evaluations: 0, converged: false };
   let c = a;
   let fc = fa;
   let d = b - a;

@@ -83,6 +83,31 @@ describe("calibrateVe", () => {
       }
     });
 
+    it("names a VE outside 0.2–2: a log taken with a blower of another size than the one described", () => {
+      // calc/README.md steps 3–5: at a fixed pressure ratio and blower speed the swept flow and the
+      // slip coefficient Ks both scale with displacement, so the delivered air, and the VE the
+      // engine needs to swallow it, scale with it too: 0.87 × 3 = 2.61, 0.87 / 5 = 0.174 (by hand).
+      const c = exampleCombination();
+      const logged = boostCurve(c, [4000])[0];
+      expect(logged.engineVolumetricEfficiency).toBe(0.87);
+      const sized = (f: number): Combination => ({ ...c, blower: { ...c.blower, displacementPerRev: c.blower.displacementPerRev * f } });
+      const refused = (f: number) => {
+        try {
+          calibrateVe(sized(f), [{ rpm: 4000, boostGauge: logged.boostGauge }]);
+        } catch (e) {
+          expect(e).toBeInstanceOf(CalcInputError);
+          return (e as CalcInputError).issues;
+        }
+        return expect.unreachable("expected a CalcInputError");
+      };
+      const message = (ve: string) => `The boost measured at 4000 rpm implies a VE of ${ve}, outside 0.2–2. Check the blower data, the pulleys and the measurement.`;
+      expect(refused(3)).toEqual([{ field: "measured.0.boostGauge", message: message("2.61") }]);
+      expect(refused(1 / 5)).toEqual([{ field: "measured.0.boostGauge", message: message("0.17") }]);
+      // Inside the bounds either side it is accepted: 0.87 × 2.2 = 1.914, 0.87 / 4 = 0.2175.
+      expect(calibrateVe(sized(2.2), [{ rpm: 4000, boostGauge: logged.boostGauge }]).veCurve[0].ve).toBeCloseTo(1.914, 6);
+      expect(calibrateVe(sized(1 / 4), [{ rpm: 4000, boostGauge: logged.boostGauge }]).veCurve[0].ve).toBeCloseTo(0.2175, 6);
+    });
+
     it("keeps the caller's index in the field path after sorting by rpm", () => {
       const c = exampleCombination();
       try {

@@ -43,6 +43,22 @@ describe("trySolvePoint", () => {
   it("still refuses bad input with CalcInputError", () => {
     expect(() => trySolvePoint(exampleCombination(), -5)).toThrow(CalcInputError);
   });
+
+  it("names the field of bad input as calc/README.md promises: the speed, or the speed's place in the list", () => {
+    // Engine speed bounds 100–20 000 rpm: calc's rpmSchema.
+    const issuesOf = (run: () => unknown) => {
+      try {
+        run();
+      } catch (e) {
+        expect(e).toBeInstanceOf(CalcInputError);
+        return (e as CalcInputError).issues;
+      }
+      return expect.unreachable("expected a CalcInputError");
+    };
+    const message = "Engine speed must be between 100 and 20000 rpm";
+    expect(issuesOf(() => trySolvePoint(exampleCombination(), -5))).toEqual([{ field: "rpm", message }]);
+    expect(issuesOf(() => trySolveCurve(exampleCombination(), [3000, 50_000]))).toEqual([{ field: "rpms.1", message }]);
+  });
 });
 
 describe("trySolveCurve", () => {

@@ -16,6 +16,30 @@ describe("resolveLocale", () => {
     expect(resolveLocale("*")).toBe(FALLBACK_LOCALE);
     expect(resolveLocale("<script>,;;q=x")).toBe(FALLBACK_LOCALE);
   });
+  // source: RFC 9110 §12.5.4 (Accept-Language; q=0 means "not acceptable", equal weights keep
+  // the sender's order) and §12.4.2 (quality values, optional whitespace around the ";").
+  it("never takes a tag weighted q=0", () => {
+    expect(resolveLocale("fr-CA;q=0")).toBe(FALLBACK_LOCALE);
+    expect(resolveLocale("fr-CA;q=0, de-DE;q=0.1")).toBe("de-DE");
+  });
+  it("keeps the header's order between tags of equal weight, whichever comes first", () => {
+    expect(resolveLocale("de-DE;q=0.8,fr-CA;q=0.8")).toBe("de-DE");
+    expect(resolveLocale("fr-CA;q=0.8,de-DE;q=0.8")).toBe("fr-CA");
+    expect(resolveLocale("fr-CA,de-DE")).toBe("fr-CA");
+  });
+  it("reads a weight written with spaces around it", () => {
+    expect(resolveLocale("de-DE;q=0.5 ,  fr-CA ;  q=0.9  ")).toBe("fr-CA");
+    // A parameter that only ends in "q=" is not the weight: fr-CA keeps q=1.
+    expect(resolveLocale("fr-CA;xq=0.1, de-DE;q=0.5")).toBe("fr-CA");
+  });
+  it("passes over tags the runtime does not know or refuses, and takes its own spelling of the next", () => {
+    // Node's ICU: "xx-YY" is well formed but unknown (no locale), "root" is refused with a RangeError.
+    expect(resolveLocale("xx-YY,de-DE;q=0.5")).toBe("de-DE");
+    expect(resolveLocale("root,de-DE;q=0.5")).toBe("de-DE");
+    expect(resolveLocale("EN-us")).toBe("en-US");
+    expect(resolveLocale("xx-YY")).toBe(FALLBACK_LOCALE);
+    expect(resolveLocale(",, de-DE")).toBe("de-DE");
+  });
 });
 
 describe("dateText and dateTimeText", () => {
@@ -32,9 +56,14 @@ describe("dateText and dateTimeText", () => {
   it("accepts strings and numbers alike, and marks a bad date", () => {
     expect(dateText(when.toISOString())).toBe(dateText(when.getTime()));
     expect(dateText("not a date")).toBe("–");
+    expect(dateTimeText("not a date")).toBe("–");
+    expect(dateTimeText(Number.NaN, "de-DE")).toBe("–");
   });
   it("groups counts per locale", () => {
     expect(countText(12345, "en-GB")).toBe("12,345");
     expect(countText(12345, "de-DE")).toBe("12.345");
+    // Whole numbers only: 12 345.6 rounds half away from zero to 12 346 (ECMA-402 default rounding).
+    expect(countText(12345.6, "en-GB")).toBe("12,346");
+    expect(countText(12345.4)).toBe("12,345");
   });
 });

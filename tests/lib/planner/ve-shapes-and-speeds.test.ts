@@ -40,6 +40,10 @@ describe("VE shapes", () => {
     expect(applyShape(VE_SHAPES[0], 6000, [{ rpm: 2000 }, { rpm: 4000 }]).map((r) => r.rpm)).toEqual([1500, 2400, 3300, 4200, 5100, 6000]);
     expect(applyShape(VE_SHAPES[0], 6000, [])[5].ve).toBe(77);
   });
+
+  it("applyShape leaves out an infinite speed, so two real speeds still fall back to the six-speed grid", () => {
+    expect(applyShape(VE_SHAPES[0], 6000, [{ rpm: 2000 }, { rpm: Number.POSITIVE_INFINITY }, { rpm: 4000 }]).map((r) => r.rpm)).toEqual([1500, 2400, 3300, 4200, 5100, 6000]);
+  });
 });
 
 describe("side-by-side speeds", () => {

@@ -1,8 +1,0 @@
-// @ts-nocheck
-export default function Loading() {
-  return (
-    <div role="status" aria-live="polite" className="animate-pulse text-sm text-muted">
-      Loading…
-    </div>
-  );
-}

@@ -1,1 +1,0 @@
-ALTER TABLE "users" ADD COLUMN "unit_choices" jsonb DEFAULT '{}'::jsonb NOT NULL;

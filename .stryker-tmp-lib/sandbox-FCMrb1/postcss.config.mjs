@@ -1,3 +1,0 @@
-// @ts-nocheck
-const config = { plugins: { "@tailwindcss/postcss": {} } };
-export default config;
