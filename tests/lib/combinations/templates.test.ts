@@ -3,21 +3,12 @@
 // NIST SP 811, Appendix B.8).
 import { describe, expect, it } from "vitest";
 import { combinationSchema } from "@/calc";
-import { FieldError } from "@/lib/errors";
 import { BLANK_START, TEMPLATES, TEMPLATE_KEYS, startingSpec, templateSpec } from "@/lib/combinations/templates";
 import { VE_SHAPES, shapeAt } from "@/lib/planner/ve-shapes";
+import { fieldError } from "../../support/field-error";
 
 const all = { displacement: "350", cylinders: "8", redlineRpm: "6000", blowerDisplacement: "144", crankPulley: "7", blowerPulley: "3.5", blowerKind: "roots" };
 
-function fieldError(f: () => unknown): FieldError {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof FieldError) return e;
-    throw e;
-  }
-  return expect.unreachable("expected a FieldError");
-}
 
 describe("templates", () => {
   it("each key gives a fresh copy of its template's spec, valid for the model", () => {

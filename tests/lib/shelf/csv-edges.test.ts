@@ -1,24 +1,15 @@
 // lib/shelf/csv.ts at its edges: exact messages, each limit at and just past its value, every
 // blower field's column name, and the cells export writes. RFC 4180 for the file format.
 import { describe, expect, it } from "vitest";
-import { FieldError } from "@/lib/errors";
 import { parseShelfCsv } from "@/lib/shelf/csv";
 import { BLOWER_CSV_COLUMNS, PULLEY_CSV_COLUMNS } from "@/lib/shelf/rules";
+import { fieldError } from "../../support/field-error";
 
 const HEADER = PULLEY_CSV_COLUMNS.join(",");
 const BLOWER_HEADER = BLOWER_CSV_COLUMNS.join(",");
 const pulley = (pn: string, cells: Partial<Record<"position" | "diameter" | "ribs" | "min" | "price" | "stock" | "notes", string>> = {}) =>
   [pn, cells.position ?? "blower", cells.diameter ?? "70", cells.ribs ?? "8", cells.min ?? "", cells.price ?? "10", cells.stock ?? "1", cells.notes ?? ""].join(",");
 
-function fieldError(f: () => unknown): FieldError {
-  try {
-    f();
-  } catch (e) {
-    expect(e).toBeInstanceOf(FieldError);
-    return e as FieldError;
-  }
-  return expect.unreachable("expected a FieldError");
-}
 
 describe("parseShelfCsv edges", () => {
   it("the size limit counts UTF-8 bytes: 1 000 000 pass the size check, 1 000 001 do not", () => {

@@ -3,24 +3,15 @@
 // Reference for the file format: RFC 4180 (quoted cells may hold commas, quotes and line breaks).
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { FieldError } from "@/lib/errors";
 import { csvColumns, litres, mm, parseShelfCsv, safeText } from "@/lib/shelf/csv";
 import { stockCell, stockClass } from "@/lib/shelf/stock";
 import { BLOWER_CSV_COLUMNS, MAX_CSV_ROWS, PULLEY_CSV_COLUMNS } from "@/lib/shelf/rules";
+import { fieldError } from "../../support/field-error";
 
 const HEADER = PULLEY_CSV_COLUMNS.join(",");
 const row = (pn: string, diameterMm: number | string, extra: Partial<{ position: string; ribs: string; stock: string; notes: string; min: string; price: string }> = {}) =>
   [pn, extra.position ?? "blower", diameterMm, extra.ribs ?? "8", extra.min ?? "71.12", extra.price ?? "89.00", extra.stock ?? "3", extra.notes ?? ""].join(",");
 
-function fieldError(f: () => unknown): FieldError {
-  try {
-    f();
-  } catch (e) {
-    expect(e).toBeInstanceOf(FieldError);
-    return e as FieldError;
-  }
-  return expect.unreachable("expected a FieldError");
-}
 
 describe("parseShelfCsv", () => {
   it("reads pulleys into SI records with their line numbers (mm → m: 1 mm = 0.001 m)", () => {
