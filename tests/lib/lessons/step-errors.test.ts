@@ -35,4 +35,16 @@ describe("what-if limits in the author's units", () => {
     const other = { title: ["Give the step a title."], "items.0.label": ["Give the item a short label."] };
     expect(localizeStepErrors(other, "imperial")).toEqual(other);
   });
+
+  it("only an item's own altitude or diameter path is rewritten, one message per message", () => {
+    const near = {
+      "lesson.items.0.change.altitude": ["Altitude must be between -500 and 6000 m"],
+      "items.0.change.altitude.note": ["Altitude must be between -500 and 6000 m"],
+      "items.x.change.diameter": ["Blower pulley diameter must be between 0.03 and 0.5 m."],
+      "items.0.change.diameter.max": ["Blower pulley diameter must be between 0.03 and 0.5 m."],
+    };
+    expect(localizeStepErrors(near, "imperial")).toEqual(near);
+    const two = { "items.12.change.altitude": ["first", "second"] };
+    expect(localizeStepErrors(two, "metric")).toEqual({ "items.12.change.altitude": ["Altitude must be between -500 m and 6,000 m.", "Altitude must be between -500 m and 6,000 m."] });
+  });
 });
