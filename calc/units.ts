@@ -230,11 +230,6 @@ export function nearestPreset(system: UnitSystem): UnitPreset {
   return shared("metric") > shared("imperial") ? "metric" : "imperial";
 }
 
-/** Whether a kind is shown in its metric unit (in a chosen system). */
-export function isMetricUnit(kind: QuantityKind, system: UnitSystem): boolean {
-  return unitOfKind(kind, system).id !== UNIT_PRESETS.imperial[kind] || UNITS[kind].length === 1;
-}
-
 /** A choice as a short link parameter: the nearest preset, then any kind that differs ("imperial~displacement.L"). */
 export function unitsToParam(system: UnitSystem): string {
   const base = nearestPreset(system);

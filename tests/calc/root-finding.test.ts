@@ -72,6 +72,8 @@ describe("brent", () => {
   it("lands exactly on the root of a straight line in one step, and stops there", () => {
     // source: the secant through two points of a line meets its zero exactly (any numerical-methods text).
     expect(solve((x) => x - 1, 0, 3)).toEqual({ root: 1, evaluations: 1, converged: true, calls: 1 });
+    // A bracket symmetric about 0, where b + a = 0 but the step b − a = 4: still one step.
+    expect(solve((x) => x - 1, -2, 2)).toEqual({ root: 1, evaluations: 1, converged: true, calls: 1 });
   });
 
   it("converges with no relative tolerance at all, on the machine precision (2ε|b|) alone", () => {
@@ -85,6 +87,9 @@ describe("brent", () => {
     const r = solve((x) => x * x + 1, -1, 2);
     expect(r).toEqual({ root: Number.NaN, evaluations: 0, converged: false, calls: 0 });
     expect(solve((x) => x * x - 2, 2, 3).converged).toBe(false);
+    // Both ends below zero as well as both above.
+    expect(solve((x) => -x * x - 1, -1, 2)).toEqual({ root: Number.NaN, evaluations: 0, converged: false, calls: 0 });
+    expect(solve((x) => x - 5, 1, 3)).toEqual({ root: Number.NaN, evaluations: 0, converged: false, calls: 0 });
   });
 
   it("says 'not converged' when out of iterations, with the best estimate inside the bracket", () => {

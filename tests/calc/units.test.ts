@@ -190,6 +190,8 @@ describe("units", () => {
       expect(U.unitLabel("displacement", mixed)).toBe("L");
       expect(U.unitLabel("pressure", mixed)).toBe("bar");
       expect(U.unitLabel("torque", mixed)).toBe("lb·ft");
+      // The unknown ids are dropped from the record itself, not only hidden by the label's fallback.
+      expect(mixed).toEqual({ ...U.UNIT_PRESETS.imperial, displacement: "L", pressure: "bar" });
       expect(U.unitLabel("temperature", mixed)).toBe("°F");
       expect(U.presetOf(mixed)).toBeNull();
       expect(U.presetOf(U.resolveUnits("metric", {}))).toBe("metric");
