@@ -75,13 +75,13 @@ describe("the form as the API's step input", () => {
       { combinationId: ID, revision: "current", label: "As built", autoLabel: false, change: NO_CHANGE },
       { combinationId: ID, revision: "3", label: "Smaller pulley", autoLabel: true, change: { kind: "pulley" as const, value: "71.1" } },
     ];
-    expect(stepInput("Pulley step", items, ["boost", "power"], "Watch the belt.", "metric")).toEqual({
+    expect(stepInput("Pulley step", items, ["boost", "netPower"], "Watch the belt.", "metric")).toEqual({
       title: "Pulley step",
       items: [
         { combinationId: ID, revision: "current", label: "As built", change: null },
         { combinationId: ID, revision: 3, label: "Smaller pulley", change: { kind: "pulley", diameter: 0.0711 } },
       ],
-      series: ["boost", "power"],
+      series: ["boost", "netPower"],
       note: "Watch the belt.",
     });
   });
