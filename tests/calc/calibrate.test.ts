@@ -83,6 +83,19 @@ describe("calibrateVe", () => {
       }
     });
 
+    it("names a boost that leaves no manifold pressure at all: −45 kPa gauge at 40 kPa ambient", () => {
+      // Absolute = ambient + gauge: 40 kPa − 45 kPa = −5 kPa, no pressure (a log read against the wrong ambient).
+      const c = exampleCombination();
+      const high: Combination = { ...c, ambient: { ...c.ambient, pressure: 40_000 } };
+      try {
+        calibrateVe(high, [{ rpm: 3000, boostGauge: 10_000 }, { rpm: 2000, boostGauge: -45_000 }]);
+        expect.unreachable();
+      } catch (e) {
+        expect(e).toBeInstanceOf(CalcInputError);
+        expect((e as CalcInputError).issues).toEqual([{ field: "measured.1.boostGauge", message: "The boost measured at 2000 rpm gives a manifold pressure at or below zero" }]);
+      }
+    });
+
     it("names a VE outside 0.2–2: a log taken with a blower of another size than the one described", () => {
       // calc/README.md steps 3–5: at a fixed pressure ratio and blower speed the swept flow and the
       // slip coefficient Ks both scale with displacement, so the delivered air, and the VE the

@@ -60,4 +60,18 @@ describe("pulleySweep flags", () => {
     expect(lazy.point!.pressureRatio).toBeLessThan(1);
     expect(lazy.pressureRatioOutOfRange).toBe(true);
   });
+
+  it("names the field of a bad speed or a bad list of diameters", () => {
+    const field = (f: () => unknown) => {
+      try {
+        f();
+      } catch (e) {
+        return (e as { field?: string }).field;
+      }
+      return expect.unreachable("expected an input error");
+    };
+    expect(field(() => pulleySweep(c, -1, [0.08]))).toBe("rpm");
+    expect(field(() => pulleySweep(c, 5000, [0.01]))).toMatch(/^blowerPulleyDiameters/);
+    expect(field(() => pulleySweep(c, 5000, [0.08], { chargeTemperatureLimit: -5 } as never))).toMatch(/^options/);
+  });
 });

@@ -196,6 +196,10 @@ describe("units", () => {
       expect(U.presetOf(mixed)).toBeNull();
       expect(U.presetOf(U.resolveUnits("metric", {}))).toBe("metric");
       expect(U.nearestPreset(mixed)).toBe("imperial");
+      // A tie goes to imperial: six kinds in each preset's unit, plus rpm, which is in both.
+      const tie = U.resolveUnits("imperial", { "length-small": "mm", altitude: "m", displacement: "L", "blower-displacement": "L", pressure: "kPa", temperature: "C" });
+      expect(U.nearestPreset(tie)).toBe("imperial");
+      expect(U.nearestPreset(U.resolveUnits("imperial", { "length-small": "mm", altitude: "m", displacement: "L", "blower-displacement": "L", pressure: "kPa", temperature: "C", power: "kW" }))).toBe("metric");
     });
 
     it("a choice survives its link parameter (property)", () => {
@@ -296,6 +300,12 @@ describe("roundInward", () => {
     expect(roundInward(100 / 16.387064, -1, "up")).toBe(6.2);
     expect(roundInward(1220.47, 1, "down")).toBe(1220);
     expect(roundInward(30, -1, "up")).toBe(30);
+    // A value already on the grid comes back exactly, at tenths and hundredths: scaled by 10 and
+    // 100, not divided by 0.1 and 0.01 (0.7 / 0.1 = 6.999…, which would give 0.7000000000000001).
+    expect(roundInward(0.7, -1, "up")).toBe(0.7);
+    expect(roundInward(4.35, -2, "down")).toBe(4.35);
+    expect(roundInward(1234, 2, "up")).toBe(1300);
+    expect(roundInward(1234, 2, "down")).toBe(1200);
   });
 
   it("lands inside the range, on the grid, within one step (property)", () => {
