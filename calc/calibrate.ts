@@ -45,7 +45,8 @@ export interface CalibrationResult {
  */
 export function impliedVe(p: PreparedCombination, m: { rpm: number; boostGauge: number; manifoldTemperature?: number | null }, state: TrialState): number | string {
   const pm = p.p0 + m.boostGauge;
-  if (!(pm > 0) || !((pm + p.dpic) / p.p1 > 0)) return `The boost measured at ${m.rpm} rpm gives a manifold pressure at or below zero`;
+  // pm > 0 is enough: the intercooler's drop is never negative, so the discharge is above it.
+  if (!(pm > 0)) return `The boost measured at ${m.rpm} rpm gives a manifold pressure at or below zero`;
   blowerStateAtManifold(p, m.rpm, pm, state);
   if (!(state.deliveredFlow > 0) || !(state.tm > 0)) {
     return `The boost measured at ${m.rpm} rpm is beyond what this blower can hold at that speed (dead-head). Check the blower data and pulleys.`;

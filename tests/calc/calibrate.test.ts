@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { CalcInputError, boostCurve, calibrateVe, exampleCombination, type Combination } from "@/calc";
+import { CalcInputError, INTERCOOLER_DEMO_DEFAULTS, boostCurve, calibrateVe, exampleCombination, type Combination } from "@/calc";
 import { combinationArb, relDiff } from "./support/arbitraries";
 
 /** Measure a combination at its own VE-curve speeds, as a perfect datalog would. */
@@ -94,6 +94,22 @@ describe("calibrateVe", () => {
         expect(e).toBeInstanceOf(CalcInputError);
         expect((e as CalcInputError).issues).toEqual([{ field: "measured.1.boostGauge", message: "The boost measured at 2000 rpm gives a manifold pressure at or below zero" }]);
       }
+    });
+
+    it("names a boost that leaves exactly zero manifold pressure, with or without an intercooler's drop", () => {
+      const c = exampleCombination();
+      for (const intercooler of [null, { ...INTERCOOLER_DEMO_DEFAULTS }]) {
+        const high: Combination = { ...c, intercooler, ambient: { ...c.ambient, pressure: 40_000 } };
+        expect(() => calibrateVe(high, [{ rpm: 2000, boostGauge: -40_000 }])).toThrow("The boost measured at 2000 rpm gives a manifold pressure at or below zero");
+      }
+    });
+
+    it("names a boost beyond dead-head as such with an intercooler, which keeps the charge temperature above zero", () => {
+      // Beyond dead-head the blower delivers less than nothing; the model's discharge temperature
+      // is then meaningless (below 0 K here), but the intercooler pulls the charge it computes back
+      // towards the coolant's 35 °C, so a temperature check alone would not catch it.
+      const c: Combination = { ...exampleCombination(), intercooler: { ...INTERCOOLER_DEMO_DEFAULTS } };
+      expect(() => calibrateVe(c, [{ rpm: 1000, boostGauge: 250_000 }])).toThrow(/^The boost measured at 1000 rpm is beyond what this blower can hold at that speed \(dead-head\)/);
     });
 
     it("names a VE outside 0.2–2: a log taken with a blower of another size than the one described", () => {

@@ -90,4 +90,18 @@ describe("pulleyForBoost with an end of no balance", () => {
     expect(high.maximum).toBeCloseTo(smallest, 3);
     expect(high.message).toBe(`A boost of 0.0 kPa cannot be reached at 5000 rpm with blower pulleys from 30 to 500 mm; the reachable range there is no balance to ${kpa(smallest)}.`);
   });
+
+  it("names the field of a bad target, speed or shelf list", () => {
+    const field = (f: () => unknown) => {
+      try {
+        f();
+      } catch (e) {
+        return (e as { field?: string }).field;
+      }
+      return expect.unreachable("expected an input error");
+    };
+    expect(field(() => pulleyForBoost(c0, 5000, 1e9))).toBe("targetBoostGauge");
+    expect(field(() => pulleyForBoost(c0, -5, 50_000))).toBe("rpm");
+    expect(field(() => pulleyForBoost(c0, 5000, 50_000, [0.001]))).toMatch(/^stockDiameters/);
+  });
 });
