@@ -36,6 +36,14 @@ describe("schemas", () => {
       expect(parsed.fuel.evaporatedBeforeBlower).toBe(0);
     });
 
+    it("refuses an inlet loss of half the ambient pressure or more, on that field, and takes one just under", () => {
+      const c = exampleCombination();
+      const at = (pressure: number, inletLoss: number) => ({ ...c, ambient: { ...c.ambient, pressure, inletLoss } });
+      const e = inputError(() => solvePoint(at(30_000, 15_000), 3000));
+      expect(e.issues).toEqual([{ field: "ambient.inletLoss", message: "Inlet pressure loss must be less than half the ambient pressure" }]);
+      expect(combinationSchema.safeParse(at(30_000, 14_999)).success).toBe(true);
+    });
+
     it("sorts the VE curve by rpm", () => {
       const c = exampleCombination();
       const shuffled = { ...c, engine: { ...c.engine, veCurve: [...c.engine.veCurve].reverse() } };
