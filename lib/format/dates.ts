@@ -16,7 +16,8 @@ export function resolveLocale(acceptLanguage: string | null | undefined): string
       const q = params.map((p) => /^\s*q=([\d.]+)\s*$/.exec(p)).find(Boolean);
       return { tag: tag.trim(), q: q ? Number(q[1]) : 1, i };
     })
-    .filter((t) => t.tag && t.tag !== "*" && t.q > 0 && /^[A-Za-z]{2,8}(-[A-Za-z0-9]{1,8})*$/.test(t.tag))
+    // The tag's pattern also turns away "" and the wildcard "*".
+    .filter((t) => t.q > 0 && /^[A-Za-z]{2,8}(-[A-Za-z0-9]{1,8})*$/.test(t.tag))
     .sort((a, b) => b.q - a.q || a.i - b.i);
   for (const t of tags) {
     try {

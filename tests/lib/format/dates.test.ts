@@ -31,6 +31,8 @@ describe("resolveLocale", () => {
     expect(resolveLocale("de-DE;q=0.5 ,  fr-CA ;  q=0.9  ")).toBe("fr-CA");
     // A parameter that only ends in "q=" is not the weight: fr-CA keeps q=1.
     expect(resolveLocale("fr-CA;xq=0.1, de-DE;q=0.5")).toBe("fr-CA");
+    // Nor is a weight with anything but spaces after its digits: de-DE keeps q=1.
+    expect(resolveLocale("de-DE;q=0.5x, fr-CA;q=0.9")).toBe("de-DE");
   });
   it("passes over tags the runtime does not know or refuses, and takes its own spelling of the next", () => {
     // Node's ICU: "xx-YY" is well formed but unknown (no locale), "root" is refused with a RangeError.

@@ -35,6 +35,7 @@ describe("typed numbers", () => {
   it("take a decimal comma, a typographic minus or en dash, and spaces around them", () => {
     expect(changeInput({ kind: "pulley", value: " 71,1 " }, "metric")).toEqual({ kind: "pulley", diameter: 0.0711 });
     expect(changeInput({ kind: "ve", value: "–5" }, "metric")).toEqual({ kind: "ve", scale: 0.95 });
+    expect(changeInput({ kind: "ve", value: " −5 " }, "metric")).toEqual({ kind: "ve", scale: 0.95 });
     expect(changeInput({ kind: "ve", value: "−12.5" }, "imperial")).toEqual({ kind: "ve", scale: 0.875 });
     expect(changeInput({ kind: "ve", value: "8" }, "imperial")).toEqual({ kind: "ve", scale: 1.08 });
   });

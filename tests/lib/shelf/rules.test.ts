@@ -127,6 +127,8 @@ describe("money strings", () => {
   it("a price is kept to two decimals, a leading $ and spaces dropped; minus signs, three decimals and non-numbers are refused", () => {
     expect(moneySchema.parse("19.9")).toBe("19.90");
     expect(moneySchema.parse(" $7 ")).toBe("7.00");
+    // Only a leading dollar sign comes off: "7$" is not an amount.
+    expect(moneySchema.safeParse("7$").success).toBe(false);
     expect(moneySchema.parse(12.5)).toBe("12.50");
     expect(moneySchema.parse("9999999999.99")).toBe("9999999999.99");
     for (const bad of ["-1", "1.234", "", "abc", "12345678901", Number.NaN, Number.POSITIVE_INFINITY]) {
