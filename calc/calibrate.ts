@@ -48,8 +48,13 @@ export function impliedVe(p: PreparedCombination, m: { rpm: number; boostGauge: 
   // pm > 0 is enough: the intercooler's drop is never negative, so the discharge is above it.
   if (!(pm > 0)) return `The boost measured at ${m.rpm} rpm gives a manifold pressure at or below zero`;
   blowerStateAtManifold(p, m.rpm, pm, state);
-  if (!(state.deliveredFlow > 0) || !(state.tm > 0)) {
+  if (!(state.deliveredFlow > 0)) {
     return `The boost measured at ${m.rpm} rpm is beyond what this blower can hold at that speed (dead-head). Check the blower data and pulleys.`;
+  }
+  // Only below ambient can the charge come out at or below 0 K: the blower then expands the air
+  // and gives work back, and a vacuum deep enough for a slow blower takes more heat than it has.
+  if (!(state.tm > 0)) {
+    return `The vacuum measured at ${m.rpm} rpm is deeper than the model can follow at that speed (its charge would cool below absolute zero). Check the measurement and the ambient pressure.`;
   }
   const tm = m.manifoldTemperature ?? state.tm;
   // ṁ = Pm/(R·Tm)·Vd·(N/120)·VE·(refinements at Pm, Tm): solve for VE.

@@ -39,15 +39,8 @@ export const BLOWER_OVERSPEED_MARGIN = 0.1;
 /** Shared empty list for points within range (never mutated). */
 export const NO_REASONS: RangeReason[] = [];
 
-/** Reasons a solved point is outside the range (pressure ratio –, manifold temperature K, blower speed and limit rev/min). */
+/** Reasons a solved point is outside the range, a new list each call (pressure ratio –, manifold temperature K, blower speed and limit rev/min). */
 export function rangeReasonsOf(pressureRatio: number, manifoldTemperature: number, blowerRpm: number, blowerMaxRpm: number): RangeReason[] {
-  if (
-    pressureRatio <= MODEL_MAX_PRESSURE_RATIO &&
-    manifoldTemperature <= CHARGE_TEMPERATURE_BOUND &&
-    blowerRpm <= blowerMaxRpm * (1 + BLOWER_OVERSPEED_MARGIN)
-  ) {
-    return NO_REASONS;
-  }
   const reasons: RangeReason[] = [];
   if (pressureRatio > MODEL_MAX_PRESSURE_RATIO) reasons.push("pressure-ratio-above-range");
   if (manifoldTemperature > CHARGE_TEMPERATURE_BOUND) reasons.push("charge-temperature-above-bound");

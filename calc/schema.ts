@@ -291,9 +291,9 @@ export type MeasuredPoint = z.input<typeof measuredPointSchema>;
 /** Geometric altitude for the standard atmosphere (m): −1000 to 11 000 (troposphere). */
 export const altitudeSchema = bounded("Altitude", -1000, 11_000, "m", "troposphere");
 
-/** A plain positive finite number for small helpers. */
+/** A plain positive finite number for small helpers, in a named unit. */
 export function positiveSchema(label: string, unit: string) {
-  const message = `${label} must be a positive number${unit ? ` in ${unit}` : ""}`;
+  const message = `${label} must be a positive number in ${unit}`;
   return z.number({ error: message }).positive({ error: message });
 }
 

@@ -70,6 +70,14 @@ describe("the joint VE curve", () => {
     expect(result.residuals).toHaveLength(8);
     for (const r of result.residuals) expect(Math.abs(r.residualAfter!)).toBeLessThan(1e-6 * base.ambient.pressure);
   });
+  it("runs at one pulley size logged at different speeds keep the catalogue slip exactly", () => {
+    // With one size the slip cannot be told from the VE (calc/README.md), so none is fitted, even
+    // where the two runs' curves overlap and a slip search could trade one against the other.
+    const truth = withSlip(base, 0.72);
+    const result = calibrate(base, [logged(truth, d, [2000, 4000]), logged(truth, d, [3000, 5000])]);
+    expect(result.combination.blower.volumetricEfficiencyRef).toBe(base.blower.volumetricEfficiencyRef);
+    expect(result.fitted.map((f) => f.parameter)).toEqual(["engine.veCurve"]);
+  });
 });
 
 describe("what the residuals say", () => {
@@ -88,6 +96,15 @@ describe("what the residuals say", () => {
       expect(Math.abs(r.residualAfter!)).toBeLessThan(0.02 * r.measuredBoostGauge);
       expect(r.modelManifoldTemperature).toBeGreaterThan(base.ambient.temperature);
     }
+    // Where the starting model balances, its residual is its prediction minus the log.
+    const at2000 = result.residuals.filter((r) => r.rpm === 2000);
+    expect(at2000).toHaveLength(2);
+    for (const r of at2000) {
+      expect(r.predictedBefore).not.toBeNull();
+      expect(r.residualBefore).toBe(r.predictedBefore! - r.measuredBoostGauge);
+      expect(r.residualAfter).toBe(r.predictedAfter! - r.measuredBoostGauge);
+      expect(r.measuredManifoldTemperature).toBeNull();
+    }
   });
 });
 
@@ -101,6 +118,19 @@ describe("VEs outside 0.2–2 are refused, naming the runs", () => {
     expect(e.issues).toHaveLength(1);
     expect(e.issues[0].field).toBe("runs.0.measured.0.boostGauge");
     expect(e.issues[0].message).toMatch(/^The boost measured at 3000 rpm implies a VE of 2\.\d\d, outside 0\.2–2\./);
+  });
+
+  it("with two runs implying a VE below 0.2: the joint curve's speed and value", () => {
+    // The logs come from a blower three times the size described on an engine 1.5 times smaller:
+    // the delivery scales with the blower (calc/calibrate.test.ts), so the described engine would
+    // need about 0.83 / 3 / 1.5 ≈ 0.18 at 3000 rpm (the example's VE there: 0.83, halfway between
+    // its 0.80 at 2500 and 0.86 at 3500).
+    const truth: Combination = { ...base, blower: { ...base.blower, displacementPerRev: base.blower.displacementPerRev * 3 } };
+    const described: Combination = { ...base, engine: { ...base.engine, displacement: base.engine.displacement * 1.5 } };
+    const e = inputError(() => calibrate(described, [logged(truth, d, [3000]), logged(truth, d, [4000])]));
+    expect(e.issues).toEqual([
+      { field: "runs", message: expect.stringMatching(/^The runs imply a VE of 0\.1\d at 3000 rpm, outside 0\.2–2\. Check the blower data, the pulleys and the logs\.$/) },
+    ]);
   });
 
   it("with two runs: the joint curve's speed and value", () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { CalcInputError, INTERCOOLER_DEMO_DEFAULTS, boostCurve, calibrateVe, exampleCombination, type Combination } from "@/calc";
-import { combinationArb, relDiff } from "./support/arbitraries";
+import { KAPPA_MODEL, R_MODEL, combinationArb, relDiff } from "./support/arbitraries";
 
 /** Measure a combination at its own VE-curve speeds, as a perfect datalog would. */
 function synthetic(c: Combination) {
@@ -79,7 +79,9 @@ describe("calibrateVe", () => {
         expect.unreachable();
       } catch (e) {
         expect(e).toBeInstanceOf(CalcInputError);
-        expect((e as CalcInputError).field).toBe("measured.0.boostGauge");
+        expect((e as CalcInputError).issues).toEqual([
+          { field: "measured.0.boostGauge", message: "The boost measured at 1500 rpm is beyond what this blower can hold at that speed (dead-head). Check the blower data and pulleys." },
+        ]);
       }
     });
 
@@ -110,6 +112,37 @@ describe("calibrateVe", () => {
       // towards the coolant's 35 °C, so a temperature check alone would not catch it.
       const c: Combination = { ...exampleCombination(), intercooler: { ...INTERCOOLER_DEMO_DEFAULTS } };
       expect(() => calibrateVe(c, [{ rpm: 1000, boostGauge: 250_000 }])).toThrow(/^The boost measured at 1000 rpm is beyond what this blower can hold at that speed \(dead-head\)/);
+    });
+
+    it("names a vacuum so deep that the model's charge would cool below 0 K, and not as a dead-head", () => {
+      // Thin cold air (30 kPa, 220 K), a very lossy Roots (ηint 0.3) and rich fuel all evaporating
+      // in the blower (afr 4): below ambient the blower gives work back, and at 6000 rpm a manifold
+      // of 8 kPa absolute takes more heat from the charge than it has. The discharge temperature by
+      // calc/README.md's energy balance, restated by hand: T2 = T1 + (PR − 1)·P1·Qs/(ηint·ρ1·Qd·cp)
+      // − L·x/(afr·cp), with Qd = Qs + Ks·√(P1 − P2) below ambient (orifice law).
+      const base = exampleCombination();
+      const cold: Combination = {
+        ...base,
+        ambient: { ...base.ambient, pressure: 30_000, temperature: 220 },
+        blower: { ...base.blower, internalEfficiency: 0.3 },
+        fuel: { ...base.fuel, afr: 4, evaporatedInBlower: 1 },
+      };
+      const dischargeTemperature = (boost: number): number => {
+        const p1 = 30_000 - cold.ambient.inletLoss;
+        const pr = (30_000 + boost) / p1;
+        const nb = 6000 * (cold.drive.crankPulleyDiameter / cold.drive.blowerPulleyDiameter) * (1 - cold.drive.beltSlip);
+        const qs = (cold.blower.displacementPerRev * nb) / 60;
+        const ks = ((1 - cold.blower.volumetricEfficiencyRef) * cold.blower.displacementPerRev * cold.blower.referenceRpm) / 60 / Math.sqrt(101_325 * 0.5);
+        const qd = qs + ks * Math.sqrt(p1 - pr * p1);
+        const cp = R_MODEL / KAPPA_MODEL;
+        return 220 + ((pr - 1) * p1 * qs) / (0.3 * (p1 / (R_MODEL * 220)) * qd * cp) - (350e3 * 1) / (4 * cp);
+      };
+      expect(dischargeTemperature(-20_000)).toBeGreaterThan(0);
+      expect(dischargeTemperature(-22_000)).toBeLessThan(0);
+      expect(calibrateVe(cold, [{ rpm: 6000, boostGauge: -20_000 }]).veCurve[0].ve).toBeGreaterThan(0.2);
+      expect(() => calibrateVe(cold, [{ rpm: 6000, boostGauge: -22_000 }])).toThrow(
+        "The vacuum measured at 6000 rpm is deeper than the model can follow at that speed (its charge would cool below absolute zero). Check the measurement and the ambient pressure.",
+      );
     });
 
     it("names a VE outside 0.2–2: a log taken with a blower of another size than the one described", () => {

@@ -86,6 +86,10 @@ describe("schemas", () => {
     it("wants both injector count and flow, or neither", () => {
       const c = exampleCombination();
       expect(inputError(() => solvePoint({ ...c, fuel: { ...c.fuel, injectorFlow: null } }, 3000)).field).toBe("fuel.injectorFlow");
+      // The flow without a count names the count: the field the person left out.
+      const noCount = inputError(() => solvePoint({ ...c, fuel: { ...c.fuel, injectorCount: null } }, 3000));
+      expect(noCount.issues).toEqual([{ field: "fuel.injectorCount", message: "Give both the number of injectors and the flow of one injector, or neither" }]);
+      expect(solvePoint({ ...c, fuel: { ...c.fuel, injectorCount: null, injectorFlow: null } }, 3000).injectorDuty).toBeNull();
     });
 
     it("rejects a missing or unknown blower kind", () => {
