@@ -11,20 +11,20 @@ export function resolveLocale(acceptLanguage: string | null | undefined): string
   if (!acceptLanguage) return FALLBACK_LOCALE;
   const tags = acceptLanguage
     .split(",")
-    .map((part, i) => {
-      const [tag, ...params] = part.trim().split(";");
+    .map((part) => {
+      const [tag, ...params] = part.split(";");
       const q = params.map((p) => /^\s*q=([\d.]+)\s*$/.exec(p)).find(Boolean);
-      return { tag: tag.trim(), q: q ? Number(q[1]) : 1, i };
+      return { tag: tag.trim(), q: q ? Number(q[1]) : 1 };
     })
-    // The tag's pattern also turns away "" and the wildcard "*".
-    .filter((t) => t.q > 0 && /^[A-Za-z]{2,8}(-[A-Za-z0-9]{1,8})*$/.test(t.tag))
-    .sort((a, b) => b.q - a.q || a.i - b.i);
+    .filter((t) => t.q > 0)
+    // Array.prototype.sort is stable (ECMA-262 since 2019): equal weights keep the header's order.
+    .sort((a, b) => b.q - a.q);
   for (const t of tags) {
     try {
       const [supported] = Intl.DateTimeFormat.supportedLocalesOf(t.tag);
       if (supported) return supported;
     } catch {
-      // a malformed tag: try the next
+      // Intl refuses a tag that is not well-formed BCP 47 ("", the wildcard "*", "en_US"): try the next
     }
   }
   return FALLBACK_LOCALE;

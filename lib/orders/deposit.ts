@@ -43,7 +43,8 @@ export const shopTermsSchema = z.object({
 }).transform((v, ctx) => {
   const rule = depositRuleSchema.safeParse({ kind: v.depositKind, value: v.depositValue });
   if (!rule.success) {
-    for (const i of rule.error.issues) ctx.addIssue({ code: "custom", path: [i.path[0] === "kind" ? "depositKind" : "depositValue"], message: i.message });
+    // The kind passed its own enum above, so only the value can fail here.
+    for (const i of rule.error.issues) ctx.addIssue({ code: "custom", path: ["depositValue"], message: i.message });
     return z.NEVER;
   }
   return { currency: v.currency, depositKind: rule.data.kind, depositValue: new Cash(rule.data.value).toFixed(2) };

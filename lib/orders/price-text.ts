@@ -25,10 +25,9 @@ type Amount = string | number | { toFixed(): string };
 export function formatPrice(amount: Amount, currency: string): string {
   const digits = minorDigits(currency);
   const exact = typeof amount === "object" ? amount.toFixed() : String(amount);
-  const fixed = new Intl.NumberFormat("en-US", { useGrouping: false, minimumFractionDigits: digits, maximumFractionDigits: digits, roundingMode: "halfExpand" }).format(exact as unknown as number);
+  const fixed = new Intl.NumberFormat("en-US", { minimumFractionDigits: digits, maximumFractionDigits: digits, roundingMode: "halfExpand" }).format(exact as unknown as number);
   const negative = fixed.startsWith("-");
-  const [whole, frac] = (negative ? fixed.slice(1) : fixed).split(".");
-  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+  const [grouped, frac] = (negative ? fixed.slice(1) : fixed).split(".");
   const symbol = currencySymbol(currency);
   // CLDR currency spacing, as Intl applies it: a symbol ending in a letter ("CHF", "kr") is kept
   // off the digits by a no-break space; "$", "€" and "£" are not.

@@ -16,6 +16,12 @@ describe("resolveLocale", () => {
     expect(resolveLocale("*")).toBe(FALLBACK_LOCALE);
     expect(resolveLocale("<script>,;;q=x")).toBe(FALLBACK_LOCALE);
   });
+  // source: ECMA-402 §9.2.1 (CanonicalizeLocaleList throws a RangeError for a tag that is not
+  // well-formed BCP 47, RFC 5646): such a tag is skipped for the next one.
+  it("skips a tag that is not well-formed BCP 47 and takes the next", () => {
+    expect(resolveLocale("en_US, de")).toBe("de");
+    expect(resolveLocale("*, x-private, fr-CA;q=0.5")).toBe("fr-CA");
+  });
   // source: RFC 9110 §12.5.4 (Accept-Language; q=0 means "not acceptable", equal weights keep
   // the sender's order) and §12.4.2 (quality values, optional whitespace around the ";").
   it("never takes a tag weighted q=0", () => {

@@ -96,7 +96,7 @@ describe("the deposit", () => {
 
   it("the rule's bounds name the field: a percentage above 100 or a zero deposit is refused", () => {
     expect(depositRuleSchema.safeParse({ kind: "percent", value: "100.01" }).error?.issues[0].path).toEqual(["value"]);
-    expect(depositRuleSchema.safeParse({ kind: "fixed", value: "0" }).success).toBe(false);
+    expect(depositRuleSchema.safeParse({ kind: "fixed", value: "0" }).error?.issues).toEqual([expect.objectContaining({ path: ["value"], message: "A fixed deposit must be more than 0." })]);
     expect(depositRuleSchema.safeParse({ kind: "fixed", value: "-5" }).success).toBe(false);
     expect(shopTermsSchema.safeParse({ currency: "usd", depositKind: "fixed", depositValue: 150 }).data).toEqual({ currency: "USD", depositKind: "fixed", depositValue: "150.00" });
     expect(shopTermsSchema.safeParse({ currency: "XXQ", depositKind: "fixed", depositValue: 150 }).error?.issues[0].path).toEqual(["currency"]);

@@ -27,6 +27,12 @@ describe("prices in other currencies", () => {
     expect(formatPrice("99", "SEK")).toBe(intl(99, "SEK"));
   });
 
+  it("a symbol with a letter before its sign keeps to the digits; one ending in a letter does not (CLDR currency spacing)", () => {
+    // Intl, en-US narrowSymbol: "R$1,234,567.50" (BRL), "R 1,234,567.50" (ZAR), "kr 1,234,567.50" (NOK).
+    for (const c of ["BRL", "ZAR", "NOK", "INR"]) expect(formatPrice("1234567.5", c), c).toBe(intl(1234567.5, c));
+    expect(formatPrice("1234567.5", "BRL")).toBe("R$1,234,567.50");
+  });
+
   it("a negative amount (a refund) puts its sign before the symbol, as Intl does", () => {
     expect(formatPrice("-1234.5", "USD")).toBe("-$1,234.50");
     expect(formatPrice("-1234.5", "USD")).toBe(intl(-1234.5, "USD"));
