@@ -294,6 +294,10 @@ describe("guessMapping", () => {
       ],
     );
     expect(above).toMatchObject({ rpm: 0, pressure: 2 });
+    // 20,000 itself is still an engine speed (the parser's own bound, 0–20 000 rpm); one more is not.
+    const edge = (top: number) => guess(["state", "rpm", "boost"], [["ok", 1000, 0.1], ["ok", top, 0.2], ["ok", 2000, 0.4], ["ok", 3000, 0.5]]);
+    expect(edge(20_000)).toMatchObject({ rpm: 1, pressure: 2 });
+    expect(edge(20_001)).toMatchObject({ rpm: 0, pressure: 2 });
   });
 
   it("a column headed throttle may read −1 to 110 (author's slack for sensor offset); past that it is not throttle", () => {
