@@ -300,6 +300,20 @@ describe("guessMapping", () => {
     expect(edge(20_001)).toMatchObject({ rpm: 0, pressure: 2 });
   });
 
+  it("a free column whose values are no temperature in any unit (median above 400) is not guessed as the intake temperature", () => {
+    const m = guess(
+      ["rpm", "boost", "counter"],
+      [
+        [2000, 0.2, 1_000_000],
+        [2100, 0.5, 3_000_000],
+        [2200, 0.8, 2_000_000],
+        [2300, 0.6, 2_500_000],
+      ],
+    );
+    expect(m).toMatchObject({ rpm: 0, pressure: 1, intakeTemperature: null });
+    expect(m.notes.intakeTemperature).toBeUndefined();
+  });
+
   it("a column headed throttle may read −1 to 110 (author's slack for sensor offset); past that it is not throttle", () => {
     const withThrottle = (t: number[]) => guess(["rpm", "throttle"], t.map((v, i) => [2000 + 100 * i, v]));
     expect(withThrottle([-1, 50, 110, 30])).toMatchObject({ rpm: 0, throttle: 1 });
