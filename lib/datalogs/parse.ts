@@ -98,8 +98,8 @@ export function decodeLogBytes(bytes: Uint8Array): { ok: true; text: string } | 
     return { ok: false, message: "The file holds NUL bytes: it is binary or UTF-16, not a UTF-8 CSV text file. Export the log as CSV and try again." };
   }
   try {
-    const text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
-    return { ok: true, text: text.charCodeAt(0) === 0xfeff ? text.slice(1) : text };
+    // The decoder drops one leading byte-order mark itself (WHATWG Encoding, "UTF-8 decode").
+    return { ok: true, text: new TextDecoder("utf-8", { fatal: true }).decode(bytes) };
   } catch {
     return { ok: false, message: "The file is not valid UTF-8 text. Save it as UTF-8 CSV and upload it again." };
   }

@@ -65,6 +65,17 @@ describe("decodeLogBytes and checkLogText", () => {
   it("drops a leading byte-order mark only", () => {
     expect(decodeLogBytes(enc("rpm\n1"))).toEqual({ ok: true, text: "rpm\n1" });
     expect(decodeLogBytes(enc("a\ufeffb"))).toEqual({ ok: true, text: "a\ufeffb" });
+    // source: WHATWG Encoding §4.1 ("UTF-8 decode" strips one BOM): a second one is text.
+    expect(decodeLogBytes(enc("\ufeff\ufeffrpm"))).toEqual({ ok: true, text: "\ufeffrpm" });
+  });
+
+  it("names UTF-16 by either byte-order mark, and a lone 0xFF byte as invalid UTF-8, not UTF-16", () => {
+    const utf16 = /^The file is UTF-16 text\./;
+    expect(decodeLogBytes(new Uint8Array([0xfe, 0xff, 0x00, 0x72]))).toMatchObject({ ok: false, message: expect.stringMatching(utf16) }); // big-endian
+    expect(decodeLogBytes(new Uint8Array([0xff, 0xfe, 0x72, 0x00]))).toMatchObject({ ok: false, message: expect.stringMatching(utf16) }); // little-endian
+    // 0xFF never occurs in UTF-8 (RFC 3629 §1), so "r" then 0xFF is broken UTF-8; nor is it a BOM.
+    expect(decodeLogBytes(new Uint8Array([0x72, 0xff, 0x70]))).toMatchObject({ ok: false, message: expect.stringMatching(/not valid UTF-8/) });
+    expect(decodeLogBytes(new Uint8Array([0x72, 0xfe, 0x70]))).toMatchObject({ ok: false, message: expect.stringMatching(/not valid UTF-8/) });
   });
 
   it("text checks: empty or blank, NUL, replacement characters, each with its message", () => {
