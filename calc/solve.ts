@@ -285,12 +285,11 @@ export function pointFromState(p: PreparedCombination, rpm: number, blowerRpm: n
   const c = p.combination;
   const etaInt = c.blower.internalEfficiency;
   const flowRatio = s.sweptFlow / s.deliveredFlow;
-  // ηad = T1(PR^κ − 1)/(T2 − T1) with T2 − T1 = κ·T1·(w/P1)·(Qs/Q1)/ηint, written so a
-  // Roots blower at PR → 1 (0/0) takes its limit (PR^κ − 1)/(κ(PR − 1)) → 1 + (κ − 1)(PR − 1)/2.
+  // ηad = T1(PR^κ − 1)/(T2 − T1) with T2 − T1 = κ·T1·(w/P1)·(Qs/Q1)/ηint. PR^κ − 1 is taken as
+  // expm1(κ·log1p(PR − 1)), exact to rounding however close PR is to 1, where a Roots blower's
+  // w/P1 = PR − 1 is exact too; at PR = 1 itself (0/0) it takes its limit, 1.
   // Fuel evaporating in the blower cools the charge but is no part of the blower's efficiency.
-  let idealOverActual: number;
-  if (p.vi === 1 && Math.abs(pr - 1) < 1e-6) idealOverActual = 1 + ((KAPPA - 1) * (pr - 1)) / 2;
-  else idealOverActual = (pr ** KAPPA - 1) / KAPPA / s.workRatio;
+  const idealOverActual = p.vi === 1 && pr === 1 ? 1 : Math.expm1(KAPPA * Math.log1p(pr - 1)) / KAPPA / s.workRatio;
   const adiabaticEfficiency = (idealOverActual * etaInt) / flowRatio;
   const drivePower = s.airPower / c.blower.mechanicalEfficiency;
   const fuelMassFlow = s.massFlow / c.fuel.afr;

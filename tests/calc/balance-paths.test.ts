@@ -5,6 +5,7 @@
 // cp = R/κ); the engines are invented test cases.
 import { describe, expect, it } from "vitest";
 import { CalcConvergenceError, INTERCOOLER_DEMO_DEFAULTS, boostCurve, calibrateVe, exampleCombination, solvePoint, type Combination } from "@/calc";
+import { blowerState, newState, pointFromState, prepare } from "@/calc/solve";
 import { KAPPA_MODEL, R_MODEL, relDiff, veOf } from "./support/arbitraries";
 
 const base = exampleCombination();
@@ -101,5 +102,21 @@ describe("an inlet restriction (rated flow at 1.5 inHg, common practice, no publ
     const flat: Combination = { ...truth, engine: { ...truth.engine, veCurve: [{ rpm: 3000, ve: 1 }] } };
     const { veCurve } = calibrateVe(flat, logged);
     veCurve.forEach((p, i) => expect(relDiff(p.ve, veOf(truth.engine.veCurve, rpms[i])), `${p.rpm} rpm`).toBeLessThan(1e-9));
+  });
+});
+
+describe("a Roots blower's adiabatic efficiency at a pressure ratio next to 1", () => {
+  // (PR^κ − 1)/(κ·(PR − 1)) → 1 + (κ − 1)(PR − 1)/2 as PR → 1 (Taylor series, by hand): the
+  // efficiency is then ηint·Qd/Qs times that, with no 0/0 at PR = 1 itself.
+  const p = prepare(base);
+  const swept = (p.vb * 3000 * p.speedFactor) / 60;
+  const at = (pr: number) => {
+    const s = blowerState(p, swept, pr, newState());
+    return { eta: pointFromState(p, 3000, 3000 * p.speedFactor, 0.85, pr, s).adiabaticEfficiency, flow: s.deliveredFlow / s.sweptFlow };
+  };
+  it.each([1, 1 + 1e-12, 1 - 1e-9, 1 + 1e-6, 1.01])("PR = %s", (pr) => {
+    const { eta, flow } = at(pr);
+    const limit = 1 + ((KAPPA_MODEL - 1) * (pr - 1)) / 2;
+    expect(relDiff(eta, base.blower.internalEfficiency * flow * limit)).toBeLessThan(pr === 1.01 ? 1e-4 : 1e-12);
   });
 });
