@@ -7,6 +7,7 @@ import { describe, expect, it } from "vitest";
 import { CalcConvergenceError, INTERCOOLER_DEMO_DEFAULTS, boostCurve, calibrateVe, exampleCombination, solvePoint, type Combination } from "@/calc";
 import { blowerState, newState, pointFromState, prepare } from "@/calc/solve";
 import { KAPPA_MODEL, R_MODEL, relDiff, veOf } from "./support/arbitraries";
+import { thrown } from "../support/thrown";
 
 const base = exampleCombination();
 const CP = R_MODEL / KAPPA_MODEL;
@@ -18,15 +19,7 @@ function demand(c: Combination, rpm: number, pm: number, tm: number, n = 0.5, po
   return (pm / (R_MODEL * td)) * c.engine.displacement * (rpm / 120) * veOf(c.engine.veCurve, rpm);
 }
 
-function convergenceError(f: () => unknown): CalcConvergenceError {
-  try {
-    f();
-  } catch (e) {
-    expect(e).toBeInstanceOf(CalcConvergenceError);
-    return e as CalcConvergenceError;
-  }
-  return expect.unreachable("expected a CalcConvergenceError");
-}
+const convergenceError = (f: () => unknown): CalcConvergenceError => thrown(CalcConvergenceError, f);
 
 describe("the balance holds on the less travelled paths", () => {
   it.each([0, 0.25, 0.75])("with a charge temperature exponent n = %s", (n) => {

@@ -4,8 +4,9 @@
 // calibrate.test.ts) at the fitted slip: calc/README.md states the joint curve as the average, at
 // each logged speed, of the runs whose logged span covers it. The engines are invented test cases.
 import { describe, expect, it } from "vitest";
-import { CalcInputError, boostCurve, calibrate, calibrateVe, exampleCombination, veAt, type Combination } from "@/calc";
+import { boostCurve, calibrate, calibrateVe, exampleCombination, veAt, type Combination } from "@/calc";
 import { withPulley } from "./support/arbitraries";
+import { inputError } from "./support/input-error";
 
 const base = exampleCombination();
 const d = base.drive.blowerPulleyDiameter;
@@ -18,16 +19,6 @@ const logged = (truth: Combination, diameter: number, speeds: number[]) => ({
   blowerPulleyDiameter: diameter,
   measured: boostCurve(withPulley(truth, diameter), speeds).map((p) => ({ rpm: p.rpm, boostGauge: p.boostGauge })),
 });
-
-function inputError(f: () => unknown): CalcInputError {
-  try {
-    f();
-  } catch (e) {
-    expect(e).toBeInstanceOf(CalcInputError);
-    return e as CalcInputError;
-  }
-  return expect.unreachable("expected a CalcInputError");
-}
 
 describe("the joint VE curve", () => {
   it("takes a run's own VE where only it was logged, and the average where both were (a run logged high to low)", () => {

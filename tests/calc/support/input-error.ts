@@ -1,13 +1,5 @@
 // The CalcInputError a call throws; fails the test when it throws nothing or something else.
-import { expect } from "vitest";
 import { CalcInputError } from "@/calc";
+import { thrown } from "../../support/thrown";
 
-export function inputError(fn: () => unknown): CalcInputError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof CalcInputError) return e;
-    throw e;
-  }
-  return expect.unreachable("expected a CalcInputError");
-}
+export const inputError = (fn: () => unknown): CalcInputError => thrown(CalcInputError, fn);
