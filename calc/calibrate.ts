@@ -47,7 +47,9 @@ export function impliedVe(p: PreparedCombination, m: { rpm: number; boostGauge: 
   const pm = p.p0 + m.boostGauge;
   // pm > 0 is enough: the intercooler's drop is never negative, so the discharge is above it.
   if (!(pm > 0)) return `The boost measured at ${m.rpm} rpm gives a manifold pressure at or below zero`;
-  blowerStateAtManifold(p, m.rpm, pm, state);
+  if (blowerStateAtManifold(p, m.rpm, pm, state) === null) {
+    return `At the boost measured at ${m.rpm} rpm the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.`;
+  }
   if (!(state.deliveredFlow > 0)) {
     return `The boost measured at ${m.rpm} rpm is beyond what this blower can hold at that speed (dead-head). Check the blower data and pulleys.`;
   }

@@ -29,5 +29,3 @@ export const PRESSURE_RATIO_CEILING = 50;
 export const PRESSURE_RATIO_FLOOR_MARGIN = 0.05;
 /** Growth factor of the upward scan that brackets the lowest stable balance (dimensionless). */
 export const BRACKET_SCAN_FACTOR = 1.15;
-/** Passes of the fixed point on the blower inlet pressure behind a flow-dependent restriction (count). */
-export const RESTRICTION_MAX_PASSES = 60;

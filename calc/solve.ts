@@ -8,7 +8,6 @@ import {
   KAPPA,
   PRESSURE_RATIO_CEILING,
   PRESSURE_RATIO_FLOOR_MARGIN,
-  RESTRICTION_MAX_PASSES,
   SOLVER_MAX_ITERATIONS,
   SOLVER_RELATIVE_TOLERANCE,
   SPECIFIC_HEAT_CP,
@@ -255,23 +254,44 @@ export function blowerState(p: PreparedCombination, sweptFlow: number, pr: numbe
 }
 
 /**
+ * Blower inlet pressure behind a flow-dependent restriction (Pa): the root of
+ * x − (P1 − K·Q0(x)²), with Q0(x) the delivery at ambient density when the blower's inlet is at
+ * x (`massFlowAt` gives it in kg/s). More inlet pressure means more delivery and more loss, so
+ * the left side rises with x and has one root, which Brent brackets between half the ambient
+ * pressure and P1. A plain fixed point would not do: its slope is about −2·loss/x, so it
+ * oscillates without settling once the loss passes a third of the inlet pressure. Null when
+ * even at half the ambient pressure the loss is more than the rest.
+ */
+function settledInletPressure(p: PreparedCombination, rpm: number, massFlowAt: (p1: number) => number): number | null {
+  const excess = (k: typeof p, x: number): number => {
+    const q0 = massFlowAt(x) / k.rho0;
+    return x - (k.p1 - k.restrictionK * q0 * q0);
+  };
+  const half = 0.5 * p.p0;
+  const atHalf = excess(p, half);
+  if (atHalf > 0) return null;
+  const r = brent(excess, p, half, p.p1, atHalf, excess(p, p.p1), SOLVER_RELATIVE_TOLERANCE, SOLVER_MAX_ITERATIONS);
+  if (!r.converged) throw new CalcConvergenceError(`At ${Math.round(rpm)} rpm the inlet restriction's loss did not settle.`, "not-converged", rpm, "ambient.inletRestriction");
+  return r.root;
+}
+
+/**
  * Blower state that yields a given manifold pressure (Pa) at an engine speed (rev/min), with
  * the inlet pressure behind any flow-dependent restriction settled; returns the prepared
- * combination at that inlet pressure (its state is in `out`). Used where boost is measured.
+ * combination at that inlet pressure (its state is in `out`), or null when the restriction
+ * would lose more than half the ambient pressure. Used where boost is measured.
  */
-export function blowerStateAtManifold(p: PreparedCombination, rpm: number, pm: number, out: TrialState): PreparedCombination {
+export function blowerStateAtManifold(p: PreparedCombination, rpm: number, pm: number, out: TrialState): PreparedCombination | null {
   const sweptFlow = (p.vb * rpm * p.speedFactor) / 60;
-  let q = p;
-  blowerState(q, sweptFlow, (pm + q.dpic) / q.p1, out);
-  for (let i = 0; p.restrictionK > 0 && i < RESTRICTION_MAX_PASSES; i++) {
-    const q0 = Math.max(out.massFlow, 0) / p.rho0;
-    const p1 = p.p1 - p.restrictionK * q0 * q0;
-    if (!(p1 > 0.5 * p.p0)) break;
-    const settled = Math.abs(p1 - q.p1) <= SOLVER_RELATIVE_TOLERANCE * 100 * p1;
-    q = withInletPressure(p, p1);
-    blowerState(q, sweptFlow, (pm + q.dpic) / q.p1, out);
-    if (settled) break;
+  const at = (q: PreparedCombination) => blowerState(q, sweptFlow, (pm + q.dpic) / q.p1, out);
+  if (p.restrictionK === 0) {
+    at(p);
+    return p;
   }
+  const p1 = settledInletPressure(p, rpm, (x) => at(withInletPressure(p, x)).massFlow);
+  if (p1 === null) return null;
+  const q = withInletPressure(p, p1);
+  at(q);
   return q;
 }
 
@@ -398,27 +418,16 @@ function tooSlowError(rpm: number, blowerRpm: number, floorPressure: number): Ca
  */
 export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoint {
   if (p.restrictionK === 0) return solveAtInletPressure(p, rpm);
-  // A restriction whose loss grows with flow: fixed-point on the inlet pressure. The loss is a
-  // few kPa against ~100, so each pass shrinks the error by far more than tenfold.
-  let q = p;
-  let point = solveAtInletPressure(q, rpm);
-  for (let i = 0; i < RESTRICTION_MAX_PASSES; i++) {
-    const q0 = point.airMassFlow / p.rho0;
-    const p1 = p.p1 - p.restrictionK * q0 * q0;
-    if (!(p1 > 0.5 * p.p0)) {
-      throw new CalcConvergenceError(
-        `At ${Math.round(rpm)} rpm the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.`,
-        "no-balance",
-        rpm,
-        "ambient.inletRestriction.ratedFlow",
-      );
-    }
-    const converged = Math.abs(p1 - q.p1) <= SOLVER_RELATIVE_TOLERANCE * 100 * p1;
-    q = withInletPressure(p, p1);
-    point = solveAtInletPressure(q, rpm);
-    if (converged) return point;
+  const p1 = settledInletPressure(p, rpm, (x) => solveAtInletPressure(withInletPressure(p, x), rpm).airMassFlow);
+  if (p1 === null) {
+    throw new CalcConvergenceError(
+      `At ${Math.round(rpm)} rpm the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.`,
+      "no-balance",
+      rpm,
+      "ambient.inletRestriction.ratedFlow",
+    );
   }
-  throw new CalcConvergenceError(`At ${Math.round(rpm)} rpm the inlet restriction's loss did not settle.`, "not-converged", rpm, "ambient.inletRestriction");
+  return solveAtInletPressure(withInletPressure(p, p1), rpm);
 }
 
 /** Solve one engine speed at the prepared combination's blower inlet pressure (unchecked). */

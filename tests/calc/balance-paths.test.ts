@@ -5,9 +5,10 @@
 // cp = R/κ); the engines are invented test cases.
 import { describe, expect, it } from "vitest";
 import { CalcConvergenceError, INTERCOOLER_DEMO_DEFAULTS, boostCurve, calibrateVe, exampleCombination, solvePoint, type Combination } from "@/calc";
-import { blowerState, newState, pointFromState, prepare } from "@/calc/solve";
+import { blowerState, newState, pointFromState, prepare, solvePrepared } from "@/calc/solve";
 import { KAPPA_MODEL, R_MODEL, relDiff, veOf } from "./support/arbitraries";
 import { thrown } from "../support/thrown";
+import { inputError } from "./support/input-error";
 
 const base = exampleCombination();
 const CP = R_MODEL / KAPPA_MODEL;
@@ -75,26 +76,62 @@ describe("a blower too slow to feed the engine", () => {
 });
 
 describe("an inlet restriction (rated flow at 1.5 inHg, common practice, no published source)", () => {
-  const restricted = (ratedFlow: number): Combination => ({ ...base, ambient: { ...base.ambient, inletRestriction: { ratedFlow } } });
+  const restricted = (ratedFlow: number, c: Combination = base): Combination => ({ ...c, ambient: { ...c.ambient, inletRestriction: { ratedFlow } } });
+  const ve2 = (c: Combination): Combination => ({ ...c, engine: { ...c.engine, veCurve: c.engine.veCurve.map((p) => ({ ...p, ve: 2 })) } });
+  const p0 = base.ambient.pressure;
+  const rho0 = p0 / (R_MODEL * base.ambient.temperature);
+  const pAfterFixedLoss = p0 - base.ambient.inletLoss;
+  /** calc/README.md: ΔP = ΔPrating·(Q0/Qrated)², Q0 = ṁ/ρ0 at ambient density, ΔPrating = 1.5 inHg = 5079 Pa. */
+  const loss = (massFlow: number, ratedFlow: number) => 5079 * (massFlow / rho0 / ratedFlow) ** 2;
+  /** Air mass flow of the balance with the blower's inlet held at x (Pa), the restriction set aside. */
+  const massFlowAt = (c: Combination, rpm: number, x: number) => {
+    const q = prepare(c);
+    return solvePrepared({ ...q, p1: x, rho1: x / (R_MODEL * q.t1), restrictionK: 0 }, rpm).airMassFlow;
+  };
 
   it("one far too small for the engine is refused, naming its rated flow", () => {
-    // 0.08 m³/s (about 170 cfm) on a 4.6 L engine at VE 2 and 6000 rpm: the loss would pass half the ambient.
-    const c = restricted(0.08);
-    const big: Combination = { ...c, engine: { ...c.engine, veCurve: c.engine.veCurve.map((p) => ({ ...p, ve: 2 })) } };
-    const e = convergenceError(() => solvePoint(big, 6000));
+    // 0.04 m³/s (about 85 cfm) on a 4.6 L engine at VE 2 and 6000 rpm.
+    const c = ve2(restricted(0.04));
+    const e = convergenceError(() => solvePoint(c, 6000));
     expect(e.message).toBe("At 6000 rpm the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.");
     expect([e.reason, e.field]).toEqual(["no-balance", "ambient.inletRestriction.ratedFlow"]);
+    // Rightly: at every inlet pressure from half the ambient up, the loss that flow brings is
+    // more than the pressure it leaves (x > P1 − ΔP), so none balances there.
+    for (let x = p0 / 2; x <= pAfterFixedLoss; x += 1000) expect(x - (pAfterFixedLoss - loss(massFlowAt(c, 6000, x), 0.04)), `${x} Pa`).toBeGreaterThan(0);
   });
 
-  it("calibration sees the same loss: logs from a restricted engine give back its VE curve", () => {
+  it("one losing over a third of the inlet pressure settles where the loss and the flow agree", () => {
+    // 0.08 m³/s at VE 2 and 6000 rpm: a plain fixed point on the inlet pressure oscillates here
+    // (its slope is about −2·loss/P1, past −1), so this is where the bracketed solve earns its keep.
+    const p = solvePoint(ve2(restricted(0.08)), 6000);
+    const lost = pAfterFixedLoss - p.blowerInletPressure;
+    expect(lost).toBeGreaterThan(pAfterFixedLoss / 3);
+    expect(relDiff(lost, loss(p.airMassFlow, 0.08))).toBeLessThan(1e-9);
+  });
+
+  it.each([
+    ["without an intercooler", null],
+    ["with an intercooler", { ...INTERCOOLER_DEMO_DEFAULTS }],
+  ])("calibration sees the same loss, %s: logs from a restricted engine give back its VE curve", (_, intercooler) => {
     // The measured boost fixes the blower's delivery only once the inlet pressure behind the
     // restriction is settled (it depends on that delivery): a round trip to 1e-9.
-    const truth = restricted(0.2);
+    const truth = restricted(0.2, { ...base, intercooler });
     const rpms = [2500, 4500, 6500];
     const logged = boostCurve(truth, rpms).map((p) => ({ rpm: p.rpm, boostGauge: p.boostGauge }));
     const flat: Combination = { ...truth, engine: { ...truth.engine, veCurve: [{ rpm: 3000, ve: 1 }] } };
     const { veCurve } = calibrateVe(flat, logged);
     veCurve.forEach((p, i) => expect(relDiff(p.ve, veOf(truth.engine.veCurve, rpms[i])), `${p.rpm} rpm`).toBeLessThan(1e-9));
+  });
+
+  it("calibration refuses a logged boost at which the restriction would lose more than half the ambient pressure", () => {
+    // 0.02 m³/s (about 40 cfm) in front of the demo blower at 6000 rpm and 50 kPa of boost.
+    const e = inputError(() => calibrateVe(restricted(0.02), [{ rpm: 6000, boostGauge: 50_000 }]));
+    expect(e.issues).toEqual([
+      {
+        field: "measured.0.boostGauge",
+        message: "At the boost measured at 6000 rpm the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.",
+      },
+    ]);
   });
 });
 

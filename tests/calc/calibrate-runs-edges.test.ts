@@ -73,9 +73,9 @@ describe("the joint VE curve", () => {
 
 describe("what the residuals say", () => {
   it("a starting model with no balance at a logged speed shows no prediction there, and the calibrated one meets the log", () => {
-    // A throttle body rated at 0.08 m³/s (about 170 cfm) and a starting VE of 2: at 6000 rpm the
+    // A throttle body rated at 0.045 m³/s (about 95 cfm) and a starting VE of 2: at 6000 rpm the
     // model's engine would draw so much that the inlet loses over half the ambient pressure.
-    const restricted: Combination = { ...base, ambient: { ...base.ambient, inletRestriction: { ratedFlow: 0.08 } } };
+    const restricted: Combination = { ...base, ambient: { ...base.ambient, inletRestriction: { ratedFlow: 0.045 } } };
     const truth = flatVe(restricted, 0.5);
     const result = calibrate(flatVe(restricted, 2), [logged(truth, 0.08, [2000, 6000]), logged(truth, 0.09, [2000, 6000])]);
     const at6000 = result.residuals.filter((r) => r.rpm === 6000);
