@@ -293,8 +293,9 @@ export const altitudeSchema = bounded("Altitude", -1000, 11_000, "m", "troposphe
 
 /** A plain positive finite number for small helpers, in a named unit. */
 export function positiveSchema(label: string, unit: string) {
+  // The schema-level message also serves `.positive()` (Zod 4 takes the schema's error for its checks).
   const message = `${label} must be a positive number in ${unit}`;
-  return z.number({ error: message }).positive({ error: message });
+  return z.number({ error: message }).positive();
 }
 
 /** Parse `value` with `schema` or throw a `CalcInputError` naming each failing field under `prefix`. */

@@ -395,8 +395,8 @@ function surplusAtU(k: SurplusContext, u: number): number {
   return surplusAt(k, 1 + u * Math.abs(u));
 }
 
-/** u = sign(PR − 1)·√|PR − 1|, in which the orifice-law slip is linear (dimensionless). */
-function toU(pr: number): number {
+/** u = sign(PR − 1)·√|PR − 1|, in which the orifice-law slip is linear (dimensionless); PR = 1 + u·|u|. */
+export function toU(pr: number): number {
   return pr >= 1 ? Math.sqrt(pr - 1) : -Math.sqrt(1 - pr);
 }
 

@@ -4,8 +4,8 @@
 // calibration. Each is checked against calc/README.md's equations restated by hand (R = 287.05,
 // cp = R/κ); the engines are invented test cases.
 import { describe, expect, it } from "vitest";
-import { CalcConvergenceError, INTERCOOLER_DEMO_DEFAULTS, boostCurve, calibrateVe, exampleCombination, solvePoint, type Combination } from "@/calc";
-import { blowerState, newState, pointFromState, prepare, solvePrepared } from "@/calc/solve";
+import { CalcConvergenceError, INTERCOOLER_DEMO_DEFAULTS, boostCurve, calibrateVe, exampleCombination, exampleTwinScrewCombination, solvePoint, type Combination } from "@/calc";
+import { blowerState, newState, pointFromState, prepare, solvePrepared, toU } from "@/calc/solve";
 import { KAPPA_MODEL, R_MODEL, relDiff, veOf } from "./support/arbitraries";
 import { thrown } from "../support/thrown";
 import { inputError } from "./support/input-error";
@@ -50,6 +50,77 @@ describe("the balance holds on the less travelled paths", () => {
     const p = solvePoint(c, 2000);
     expect(p.pressureRatio).toBeLessThan(1);
     expect(relDiff(p.airMassFlow, demand(c, 2000, p.manifoldPressure, p.manifoldTemperature))).toBeLessThan(1e-9);
+  });
+});
+
+describe("no stable balance: which limit the message names", () => {
+  // Dead-head by hand (calc/README.md step 3): Ks = (1 − ηv,ref)·Vb·Nref/60/√(101 325·0.5), the
+  // swept flow Qs = Vb·Nb/60 with Nb = N·(crank/blower)·(1 − slip), and PRdh = 1 + (Qs/Ks)²/P1.
+  const deadHeadOf = (c: Combination, rpm: number) => {
+    const ks = ((1 - c.blower.volumetricEfficiencyRef) * c.blower.displacementPerRev * c.blower.referenceRpm) / 60 / Math.sqrt(101_325 * 0.5);
+    const qs = (c.blower.displacementPerRev * rpm * (c.drive.crankPulleyDiameter / c.drive.blowerPulleyDiameter) * (1 - c.drive.beltSlip)) / 60;
+    return 1 + (qs / ks) ** 2 / (c.ambient.pressure - c.ambient.inletLoss);
+  };
+  // The plain density (n = 1) and no intercooler, where the charge heats fastest (calc/README.md).
+  const plain = (c: Combination): Combination => ({ ...c, engine: { ...c.engine, chargeTemperatureExponent: 1 } });
+
+  it("the dead-head ratio, when slip sets one below pressure ratio 50", () => {
+    // A leaky demo blower on a 0.5 L engine at 1000 rpm with a 30 mm pulley (invented test case).
+    const c = plain({ ...base, engine: { ...base.engine, displacement: 0.0005 }, blower: { ...base.blower, volumetricEfficiencyRef: 0.3 }, drive: { ...base.drive, blowerPulleyDiameter: 0.03 } });
+    const deadHead = deadHeadOf(c, 1000);
+    expect(deadHead).toBeLessThan(50);
+    const e = convergenceError(() => solvePoint(c, 1000));
+    expect(e.message).toBe(
+      `At 1000 rpm the blower reaches its dead-head pressure ratio (${deadHead.toFixed(2)}) before the engine swallows its delivery: the charge heats faster than the engine can take it, so the model finds no stable balance. The blower is far too large or too fast for this engine; check the blower data and drive ratio.`,
+    );
+    expect([e.reason, e.field]).toEqual(["no-balance", "drive.blowerPulleyDiameter"]);
+  });
+
+  it("pressure ratio 50, when the blower does not leak", () => {
+    // A slip-free demo blower (ηv,ref = 1: no dead-head) at 5000 rpm with a 30 mm pulley.
+    const c = plain({ ...base, blower: { ...base.blower, volumetricEfficiencyRef: 1 }, drive: { ...base.drive, blowerPulleyDiameter: 0.03 } });
+    const e = convergenceError(() => solvePoint(c, 5000));
+    expect(e.message).toBe("At 5000 rpm no balance exists below pressure ratio 50: the blower is far too large or too fast for this engine. Check the blower data and drive ratio.");
+    expect([e.reason, e.field]).toEqual(["no-balance", "drive.blowerPulleyDiameter"]);
+  });
+});
+
+describe("the balance in thin air behind an intercooler that loses more than the inlet pressure", () => {
+  it("still holds when the search must start above pressure ratio 1", () => {
+    // 40 kPa ambient (about 7 km up) and a 50 kPa intercooler drop: the manifold is only above 0
+    // once the blower passes PR (0.05·P1 + 50 kPa)/P1 ≈ 1.35, so the search starts there.
+    const c: Combination = { ...base, ambient: { ...base.ambient, pressure: 40_000 }, intercooler: { ...INTERCOOLER_DEMO_DEFAULTS, pressureDrop: 50_000 } };
+    for (const rpm of [2500, 5000]) {
+      const p = solvePoint(c, rpm);
+      expect(p.dischargePressure - p.manifoldPressure).toBeCloseTo(50_000, 6);
+      expect(relDiff(p.airMassFlow, demand(c, rpm, p.manifoldPressure, p.manifoldTemperature))).toBeLessThan(1e-9);
+    }
+  });
+});
+
+describe("a twin-screw blower at pressure ratio exactly 1", () => {
+  it("has adiabatic efficiency 0: it compresses inside and blows back, doing work for no rise", () => {
+    // Ideal work at PR 1 is 0 while the built-in compression's is not (calc/README.md step 4), so
+    // ηad = 0, where a Roots blower's 0/0 has the limit ηint·Qd/Qs (below).
+    const c = exampleTwinScrewCombination();
+    expect(c.blower.builtInVolumeRatio).toBeGreaterThan(1);
+    const p = prepare(c);
+    const swept = (p.vb * 3000 * p.speedFactor) / 60;
+    const s = blowerState(p, swept, 1, newState());
+    expect(s.workRatio).toBeGreaterThan(0);
+    expect(pointFromState(p, 3000, 3000 * p.speedFactor, 0.85, 1, s).adiabaticEfficiency).toBe(0);
+  });
+});
+
+describe("the solver's variable u = sign(PR − 1)·√|PR − 1|", () => {
+  it.each([
+    [0.75, -0.5],
+    [1, 0],
+    [1.25, 0.5],
+    [5, 2],
+  ])("PR %s is u %s, and back", (pr, u) => {
+    expect(toU(pr)).toBeCloseTo(u, 15);
+    expect(1 + toU(pr) * Math.abs(toU(pr))).toBe(pr);
   });
 });
 

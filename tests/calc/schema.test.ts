@@ -8,6 +8,7 @@ import {
   driveRatio,
   engineAirflow,
   exampleCombination,
+  idealRatioRuleManifoldPressure,
   pulleyForBoost,
   pulleySweep,
   solvePoint,
@@ -126,11 +127,19 @@ describe("schemas", () => {
     it("measurements", () => {
       expect(inputError(() => calibrateVe(c, [])).field).toBe("measured");
       expect(inputError(() => calibrateVe(c, [{ rpm: 3000, boostGauge: Number.POSITIVE_INFINITY }])).field).toBe("measured.0.boostGauge");
-      expect(inputError(() => calibrateVe(c, [{ rpm: 3000, boostGauge: 1000 }, { rpm: 3000, boostGauge: 2000 }])).field).toBe("measured.1.rpm");
+      expect(inputError(() => calibrateVe(c, [{ rpm: 3000, boostGauge: 1000 }, { rpm: 3000, boostGauge: 2000 }])).issues).toEqual([
+        { field: "measured.1.rpm", message: "3000 rpm is measured twice" },
+      ]);
     });
     it("small helpers", () => {
       expect(inputError(() => driveRatio(0, 0.1)).field).toBe("crankDiameter");
       expect(inputError(() => engineAirflow(0.005, 3000, -0.1)).field).toBe("ve");
+      // Not a number at all gets the same message as a number that is not positive.
+      expect(inputError(() => driveRatio("0.2" as unknown as number, 0.1)).issues).toEqual([
+        { field: "crankDiameter", message: "Crank pulley diameter must be a positive number in m" },
+      ]);
+      expect(inputError(() => engineAirflow(0.005, 0, 0.9)).issues).toEqual([{ field: "rpm", message: "Engine speed must be a positive number in rpm" }]);
+      expect(inputError(() => idealRatioRuleManifoldPressure(c, 0)).field).toBe("rpm");
     });
   });
 });
