@@ -16,6 +16,15 @@ describe("veAt", () => {
     );
   });
 
+  it("passes through every point of the curve exactly, so the VE a person typed is the VE used (property)", () => {
+    fc.assert(
+      fc.property(veCurveArb, (curve) => {
+        for (const p of curve) expect(veAt(curve, p.rpm), `${p.rpm} rpm`).toBe(p.ve);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
   it("hand-worked: a third of the way from (3000, 0.80) to (6000, 0.92) is 0.84; the ends hold", () => {
     const curve = [{ rpm: 1000, ve: 0.7 }, { rpm: 2000, ve: 0.75 }, { rpm: 3000, ve: 0.8 }, { rpm: 6000, ve: 0.92 }, { rpm: 7000, ve: 0.9 }];
     expect(veAt(curve, 4000)).toBeCloseTo(0.84, 12);
