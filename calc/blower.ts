@@ -16,8 +16,7 @@ export function slipCoefficient(displacementPerRev: number, volumetricEfficiency
 
 /** Slip flow back through the clearances Ks·sign(ΔP)·√|ΔP| (m³/(s·√Pa), Pa → m³/s at inlet conditions). */
 export function slipFlow(slipCoeff: number, deltaP: number): number {
-  // Stryker disable next-line EqualityOperator: equivalent, at ΔP = 0 both branches give 0
-  return deltaP >= 0 ? slipCoeff * Math.sqrt(deltaP) : -slipCoeff * Math.sqrt(-deltaP);
+  return Math.sign(deltaP) * slipCoeff * Math.sqrt(Math.abs(deltaP));
 }
 
 /** Built-in pressure ratio PRi = Vi^γ of a built-in volume ratio Vi (dimensionless). */

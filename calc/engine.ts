@@ -6,16 +6,12 @@ import { z } from "zod";
 /** VE at an engine speed: piecewise-linear between points sorted by rpm, held flat outside (fraction). */
 export function veAt(curve: readonly VePoint[], rpm: number): number {
   const n = curve.length;
-  // Stryker disable next-line EqualityOperator: equivalent, at a node the interpolation gives the node's VE exactly (tests/calc/engine.test.ts)
   if (rpm <= curve[0].rpm) return curve[0].ve;
-  // Stryker disable next-line EqualityOperator: as above
   if (rpm >= curve[n - 1].rpm) return curve[n - 1].ve;
   let lo = 0;
-  // Stryker disable next-line ArithmeticOperator: equivalent, the ends were handled above, so the search never reaches hi
   let hi = n - 1;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
-    // Stryker disable next-line EqualityOperator: equivalent, at a node either neighbouring segment gives the node's VE exactly
     if (curve[mid].rpm <= rpm) lo = mid;
     else hi = mid;
   }

@@ -33,16 +33,16 @@ export function brent<C>(
 ): RootResult {
   if (fa === 0) return { root: a, evaluations: 0, converged: true };
   if (fb === 0) return { root: b, evaluations: 0, converged: true };
-  // Compare signs, not the product: the product of two tiny values underflows to ±0.
-  // Stryker disable next-line EqualityOperator: equivalent, fa = 0 and fb = 0 returned just above
-  if (!((fa < 0 && fb > 0) || (fa > 0 && fb < 0))) return { root: Number.NaN, evaluations: 0, converged: false };
+  // Compare signs, not the product: the product of two tiny values underflows to ±0. A NaN end
+  // has no sign, so it is refused too.
+  if (Math.sign(fa) !== -Math.sign(fb)) return { root: Number.NaN, evaluations: 0, converged: false };
   let c = a;
   let fc = fa;
   let d = b - a;
   let e = d;
   for (let i = 0; i < maxIterations; i++) {
-    // Stryker disable next-line EqualityOperator: equivalent, fc is never 0 and fb = 0 ends the search below either way
-    if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
+    // The new point is on c's side: the other end of the bracket is now a.
+    if (Math.sign(fb) === Math.sign(fc)) {
       c = a;
       fc = fa;
       d = b - a;

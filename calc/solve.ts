@@ -185,9 +185,7 @@ export function prepare(c: Combination, blowerPulleyDiameter = c.drive.blowerPul
  * with a hotter charge, as heat picked up in port and cylinder matters less (Heywood ch. 6).
  */
 function demandTemperature(n: number, tref: number, tc: number): number {
-  // Stryker disable next-line ConditionalExpression: fast paths for n = 1 and 0.5, the same value as the general power to rounding
   if (n === 1) return tc;
-  // Stryker disable next-line ConditionalExpression: as above
   if (n === 0.5) return Math.sqrt(tc * tref);
   return tref * (tc / tref) ** n;
 }
@@ -197,7 +195,6 @@ function demandTemperature(n: number, tref: number, tc: number): number {
  * ambient (Heywood ch. 6: ηv = 1 − (Pe/Pi − 1)/(γ·(rc − 1))) (dimensionless; 1 when off).
  */
 function residualFactor(residualK: number, pe: number, refInv: number, pm: number): number {
-  // Stryker disable next-line ConditionalExpression: fast path, the general form gives exactly 1 when residualK = 0
   return residualK === 0 ? 1 : (1 - (pe / pm - 1) * residualK) * refInv;
 }
 
@@ -238,7 +235,6 @@ export interface TrialState {
 export function blowerState(p: PreparedCombination, sweptFlow: number, pr: number, out: TrialState): TrialState {
   const p2 = pr * p.p1;
   const dp = p2 - p.p1;
-  // Stryker disable next-line EqualityOperator: equivalent, at ΔP = 0 both branches give 0
   const slip = dp >= 0 ? p.ks * Math.sqrt(dp) : -p.ks * Math.sqrt(-dp);
   const delivered = sweptFlow - slip;
   const massFlow = p.rho1 * delivered;
@@ -288,7 +284,6 @@ function settledInletPressure(p: PreparedCombination, rpm: number, massFlowAt: (
 export function blowerStateAtManifold(p: PreparedCombination, rpm: number, pm: number, out: TrialState): PreparedCombination | null {
   const sweptFlow = (p.vb * rpm * p.speedFactor) / 60;
   const at = (q: PreparedCombination) => blowerState(q, sweptFlow, (pm + q.dpic) / q.p1, out);
-  // Stryker disable next-line ConditionalExpression: fast path, with K = 0 the excess at P1 is 0 and Brent returns P1 at once
   if (p.restrictionK === 0) {
     at(p);
     return p;
@@ -386,7 +381,6 @@ interface SurplusContext {
 /** Surplus ṁ − ṁe at a pressure ratio (kg/s): blowerState's and effectiveVe's arithmetic, inlined for the hot loop. */
 function surplusAt(k: SurplusContext, pr: number): number {
   const dp = pr * k.p1 - k.p1;
-  // Stryker disable next-line EqualityOperator: as above
   const slip = dp >= 0 ? k.ks * Math.sqrt(dp) : -k.ks * Math.sqrt(-dp);
   const massFlow = k.rho1 * (k.sweptFlow - slip);
   const t2 = k.t1 + ((k.workOffset + pr * k.invVi) * k.airPowerPerWorkRatio) / (massFlow * SPECIFIC_HEAT_CP) - k.blowerCooling;
@@ -423,7 +417,6 @@ function tooSlowError(rpm: number, blowerRpm: number, floorPressure: number): Ca
  * the charge grows very hot, and is not the answer.
  */
 export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoint {
-  // Stryker disable next-line ConditionalExpression: as above
   if (p.restrictionK === 0) return solveAtInletPressure(p, rpm);
   const p1 = settledInletPressure(p, rpm, (x) => solveAtInletPressure(withInletPressure(p, x), rpm).airMassFlow);
   if (p1 === null) {
@@ -468,7 +461,6 @@ function solveAtInletPressure(p: PreparedCombination, rpm: number): OperatingPoi
   // Bracket: scan upward from a floor (manifold at 5 % of inlet pressure) to the first point
   // where the surplus turns negative, stopping just short of the dead-head ratio.
   const lo = PRESSURE_RATIO_FLOOR_MARGIN + p.dpic / p.p1;
-  // Stryker disable next-line ConditionalExpression,EqualityOperator: equivalent, with Ks = 0 the formula gives +∞ as well
   const deadHead = p.ks > 0 ? 1 + (sweptFlow / p.ks) ** 2 / p.p1 : Number.POSITIVE_INFINITY;
   const ceilingIsDeadHead = deadHead <= PRESSURE_RATIO_CEILING;
   const hi = ceilingIsDeadHead ? 1 + (deadHead - 1) * (1 - 1e-9) : PRESSURE_RATIO_CEILING;

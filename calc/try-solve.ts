@@ -25,7 +25,6 @@ function trySolvePrepared(p: ReturnType<typeof prepare>, rpm: number): Operating
   try {
     return solvePrepared(p, rpm);
   } catch (e) {
-    // Stryker disable next-line ConditionalExpression: equivalent, a prepared combination was checked, so nothing else is thrown
     if (e instanceof CalcConvergenceError) return null;
     throw e;
   }

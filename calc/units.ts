@@ -275,7 +275,6 @@ export function fromSI(kind: QuantityKind, siValue: number, system: UnitSystem):
 export function roundInward(value: number, exponent: number, dir: "up" | "down"): number {
   const step = (n: number) => (dir === "up" ? Math.ceil(n - 1e-9) : Math.floor(n + 1e-9));
   // Scale by an exact power of ten, so 6.2 comes back as 6.2 rather than 6.2000000000000002.
-  // Stryker disable next-line ConditionalExpression,EqualityOperator: equivalent, at exponent 0 both branches scale by 1
   if (exponent < 0) {
     const m = 10 ** -exponent;
     return step(value * m) / m;

@@ -4,9 +4,10 @@
 // calibration. Each is checked against calc/README.md's equations restated by hand (R = 287.05,
 // cp = R/κ); the engines are invented test cases.
 import { describe, expect, it } from "vitest";
+import fc from "fast-check";
 import { CalcConvergenceError, INTERCOOLER_DEMO_DEFAULTS, boostCurve, calibrateVe, exampleCombination, exampleTwinScrewCombination, solvePoint, type Combination } from "@/calc";
-import { blowerState, newState, pointFromState, prepare, solvePrepared, toU } from "@/calc/solve";
-import { KAPPA_MODEL, R_MODEL, relDiff, veOf } from "./support/arbitraries";
+import { blowerState, effectiveVe, newState, pointFromState, prepare, solvePrepared, toU } from "@/calc/solve";
+import { KAPPA_MODEL, R_MODEL, combinationArb, relDiff, rpmArb, veOf } from "./support/arbitraries";
 import { thrown } from "../support/thrown";
 import { inputError } from "./support/input-error";
 
@@ -50,6 +51,30 @@ describe("the balance holds on the less travelled paths", () => {
     const p = solvePoint(c, 2000);
     expect(p.pressureRatio).toBeLessThan(1);
     expect(relDiff(p.airMassFlow, demand(c, 2000, p.manifoldPressure, p.manifoldTemperature))).toBeLessThan(1e-9);
+  });
+});
+
+describe("the balance the solver returns is the lowest one", () => {
+  it("no pressure ratio between the search floor and the answer balances (property)", () => {
+    // Above the stable balance a second, unstable one can exist near dead-head (calc/README.md);
+    // the answer must be the first where delivery falls to the engine's demand. The surplus is
+    // taken as the model defines it (blowerState, effectiveVe), at 40 ratios below the answer.
+    fc.assert(
+      fc.property(combinationArb, rpmArb, (c, rpm) => {
+        const answer = solvePoint(c, rpm);
+        const p = prepare(c);
+        const swept = (p.vb * rpm * p.speedFactor) / 60;
+        const demandFactor = (c.engine.displacement * rpm * veOf(c.engine.veCurve, rpm)) / 120 / R_MODEL;
+        const floor = 0.05 + p.dpic / p.p1;
+        for (let i = 0; i < 40; i++) {
+          const pr = floor + ((answer.pressureRatio - floor) * i) / 40;
+          const s = blowerState(p, swept, pr, newState());
+          const surplus = s.massFlow - (s.pm / s.tm) * effectiveVe(p, 1, s.pm, s.tm) * demandFactor;
+          expect(surplus, `PR ${pr}`).toBeGreaterThan(0);
+        }
+      }),
+      { numRuns: 200 },
+    );
   });
 });
 
@@ -143,6 +168,25 @@ describe("a blower too slow to feed the engine", () => {
       "At 6000 rpm the blower (353 rpm) cannot feed the engine: manifold pressure would fall below 5.0 kPa. Choose a smaller blower pulley or a larger blower.",
     );
     expect([e.reason, e.field]).toEqual(["blower-too-slow", "drive.blowerPulleyDiameter"]);
+  });
+  it("says so, too, when the blower dead-heads below that floor: thin air behind a lossy intercooler", () => {
+    // 40 kPa ambient and a 50 kPa intercooler drop put the floor at PR 0.05 + 50/38.5 ≈ 1.35; a leaky
+    // blower at 600 rpm dead-heads at about PR 1.04, so no ratio it can hold reaches the floor.
+    const c: Combination = {
+      ...base,
+      engine: { ...base.engine, chargeTemperatureExponent: 1 },
+      ambient: { ...base.ambient, pressure: 40_000 },
+      intercooler: { ...INTERCOOLER_DEMO_DEFAULTS, pressureDrop: 50_000 },
+      blower: { ...base.blower, volumetricEfficiencyRef: 0.3 },
+      drive: { ...base.drive, blowerPulleyDiameter: 0.1 },
+    };
+    const blowerRpm = 600 * (c.drive.crankPulleyDiameter / 0.1) * (1 - c.drive.beltSlip);
+    const floor = 0.05 * (40_000 - c.ambient.inletLoss);
+    const e = convergenceError(() => solvePoint(c, 600));
+    expect(e.message).toBe(
+      `At 600 rpm the blower (${Math.round(blowerRpm)} rpm) cannot feed the engine: manifold pressure would fall below ${(floor / 1000).toFixed(1)} kPa. Choose a smaller blower pulley or a larger blower.`,
+    );
+    expect(e.reason).toBe("blower-too-slow");
   });
 });
 

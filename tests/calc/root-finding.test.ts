@@ -90,6 +90,9 @@ describe("brent", () => {
     // Both ends below zero as well as both above.
     expect(solve((x) => -x * x - 1, -1, 2)).toEqual({ root: Number.NaN, evaluations: 0, converged: false, calls: 0 });
     expect(solve((x) => x - 5, 1, 3)).toEqual({ root: Number.NaN, evaluations: 0, converged: false, calls: 0 });
+    // An end where f gives no number has no sign either.
+    expect(solve((x) => (x < 0 ? Number.NaN : x - 1), -1, 2)).toEqual({ root: Number.NaN, evaluations: 0, converged: false, calls: 0 });
+    expect(solve((x) => (x > 1.5 ? Number.NaN : x - 1), 0, 2)).toEqual({ root: Number.NaN, evaluations: 0, converged: false, calls: 0 });
   });
 
   it("says 'not converged' when out of iterations, with the best estimate inside the bracket", () => {
