@@ -257,10 +257,12 @@ export function blowerState(p: PreparedCombination, sweptFlow: number, pr: numbe
  * Blower inlet pressure behind a flow-dependent restriction (Pa): the root of
  * x − (P1 − K·Q0(x)²), with Q0(x) the delivery at ambient density when the blower's inlet is at
  * x (`massFlowAt` gives it in kg/s). More inlet pressure means more delivery and more loss, so
- * the left side rises with x and has one root, which Brent brackets between half the ambient
- * pressure and P1. A plain fixed point would not do: its slope is about −2·loss/x, so it
- * oscillates without settling once the loss passes a third of the inlet pressure. Null when
- * even at half the ambient pressure the loss is more than the rest.
+ * the left side rises with x and has one root. One plain pass from P1 lands at or below it, so
+ * Brent brackets it between that pass and P1, and the balance is only solved near its answer
+ * (at half the ambient a slow blower behind a large intercooler drop may not balance at all).
+ * A plain fixed point would not do: its slope is about −2·loss/x, so it oscillates without
+ * settling once the loss passes a third of the inlet pressure. Null when even at half the
+ * ambient pressure the loss is more than the rest.
  */
 function settledInletPressure(p: PreparedCombination, rpm: number, massFlowAt: (p1: number) => number): number | null {
   const excess = (k: typeof p, x: number): number => {
@@ -268,9 +270,13 @@ function settledInletPressure(p: PreparedCombination, rpm: number, massFlowAt: (
     return x - (k.p1 - k.restrictionK * q0 * q0);
   };
   const half = 0.5 * p.p0;
-  const atHalf = excess(p, half);
-  if (atHalf > 0) return null;
-  const r = brent(excess, p, half, p.p1, atHalf, excess(p, p.p1), SOLVER_RELATIVE_TOLERANCE, SOLVER_MAX_ITERATIONS);
+  const atP1 = excess(p, p.p1);
+  let a = Math.max(p.p1 - atP1, half);
+  let fa = excess(p, a);
+  // Above the root only by rounding, or if the loss did not rise with x: then half the ambient decides.
+  if (fa > 0 && a > half) fa = excess(p, (a = half));
+  if (fa > 0) return null;
+  const r = brent(excess, p, a, p.p1, fa, atP1, SOLVER_RELATIVE_TOLERANCE, SOLVER_MAX_ITERATIONS);
   if (!r.converged) throw new CalcConvergenceError(`At ${Math.round(rpm)} rpm the inlet restriction's loss did not settle.`, "not-converged", rpm, "ambient.inletRestriction");
   return r.root;
 }

@@ -224,6 +224,24 @@ describe("an inlet restriction (rated flow at 1.5 inHg, common practice, no publ
     expect(relDiff(lost, loss(p.airMassFlow, 0.08))).toBeLessThan(1e-9);
   });
 
+  it("a nearly lossless one changes nothing where the blower would starve at half the ambient", () => {
+    // The largest rated flow the schema takes (2 m³/s) in front of a leaky blower at 600 rpm behind
+    // a 50 kPa intercooler drop: at half the ambient the search floor, PR 0.05 + 50/50.7 ≈ 1.04,
+    // lies past the blower's dead-head (≈ 1.03), so the solve must stay near its answer, PR ≈ 1.006.
+    const c: Combination = {
+      ...base,
+      intercooler: { ...INTERCOOLER_DEMO_DEFAULTS, pressureDrop: 50_000 },
+      blower: { ...base.blower, volumetricEfficiencyRef: 0.3 },
+      drive: { ...base.drive, blowerPulleyDiameter: 0.1 },
+    };
+    const open = solvePoint(c, 600);
+    const p = solvePoint(restricted(2, c), 600);
+    const lost = pAfterFixedLoss - p.blowerInletPressure;
+    expect(lost).toBeGreaterThan(0);
+    expect(relDiff(lost, loss(p.airMassFlow, 2))).toBeLessThan(1e-6);
+    expect(relDiff(p.manifoldPressure, open.manifoldPressure)).toBeLessThan(1e-4);
+  });
+
   it.each([
     ["without an intercooler", null],
     ["with an intercooler", { ...INTERCOOLER_DEMO_DEFAULTS }],
