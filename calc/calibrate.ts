@@ -10,7 +10,7 @@ import {
   type MeasuredPoint,
   type VePoint,
 } from "./schema";
-import { blowerStateAtManifold, effectiveVe, newState, prepare, solvePrepared, type PreparedCombination, type TrialState } from "./solve";
+import { RESTRICTION_TOO_SMALL, blowerStateAtManifold, effectiveVe, newState, prepare, solvePrepared, type PreparedCombination, type TrialState } from "./solve";
 
 /** How well the calibrated curve reproduces one measured point. */
 export interface CalibrationResidual {
@@ -48,7 +48,7 @@ export function impliedVe(p: PreparedCombination, m: { rpm: number; boostGauge: 
   // pm > 0 is enough: the intercooler's drop is never negative, so the discharge is above it.
   if (!(pm > 0)) return `The boost measured at ${m.rpm} rpm gives a manifold pressure at or below zero`;
   if (blowerStateAtManifold(p, m.rpm, pm, state) === null) {
-    return `At the boost measured at ${m.rpm} rpm the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.`;
+    return `At the boost measured at ${m.rpm} rpm ${RESTRICTION_TOO_SMALL}`;
   }
   if (!(state.deliveredFlow > 0)) {
     return `The boost measured at ${m.rpm} rpm is beyond what this blower can hold at that speed (dead-head). Check the blower data and pulleys.`;

@@ -253,6 +253,9 @@ export function blowerState(p: PreparedCombination, sweptFlow: number, pr: numbe
   return out;
 }
 
+/** What is wrong when the restriction would lose more than half the ambient pressure (solver and calibration). */
+export const RESTRICTION_TOO_SMALL = "the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.";
+
 /**
  * Blower inlet pressure behind a flow-dependent restriction (Pa): the root of
  * x − (P1 − K·Q0(x)²), with Q0(x) the delivery at ambient density when the blower's inlet is at
@@ -425,14 +428,7 @@ function tooSlowError(rpm: number, blowerRpm: number, floorPressure: number): Ca
 export function solvePrepared(p: PreparedCombination, rpm: number): OperatingPoint {
   if (p.restrictionK === 0) return solveAtInletPressure(p, rpm);
   const p1 = settledInletPressure(p, rpm, (x) => solveAtInletPressure(withInletPressure(p, x), rpm).airMassFlow);
-  if (p1 === null) {
-    throw new CalcConvergenceError(
-      `At ${Math.round(rpm)} rpm the throttle body or carburettor would lose more than half the ambient pressure; its rated flow is far too small for this engine.`,
-      "no-balance",
-      rpm,
-      "ambient.inletRestriction.ratedFlow",
-    );
-  }
+  if (p1 === null) throw new CalcConvergenceError(`At ${Math.round(rpm)} rpm ${RESTRICTION_TOO_SMALL}`, "no-balance", rpm, "ambient.inletRestriction.ratedFlow");
   return solveAtInletPressure(withInletPressure(p, p1), rpm);
 }
 
